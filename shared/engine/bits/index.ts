@@ -1,0 +1,3 @@
+export { transpose32 } from "./transpose32";
+export { reverseBits, compareStateIndices, rotateToSmallest } from "./state-order";
+export { popcount32 } from "./popcount";

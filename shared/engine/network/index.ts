@@ -1,0 +1,2 @@
+export type { BooleanNetwork } from "./types";
+export { networkFromFunctions, checkNetwork, stateToString, stateFromString } from "./build";

@@ -1,0 +1,46 @@
+// Builds the real app against the test database (DATABASE_URL, set by scripts/test.sh) for supertest and browser tests.
+import type { Server } from "node:http";
+import type { AddressInfo } from "node:net";
+import { createApp } from "../../server/app";
+import { loadConfig } from "../../server/config";
+import { createDb, type Knex } from "../../server/db/knex";
+import { createLogger } from "../../server/logger";
+
+export interface TestApp {
+  app: ReturnType<typeof createApp>;
+  db: Knex;
+  close(): Promise<void>;
+}
+
+export function testConfig() {
+  if (!process.env.DATABASE_URL) throw new Error("DATABASE_URL is not set: run the tests through `npm test`");
+  return loadConfig({ ...process.env, NODE_ENV: "test", LOG_LEVEL: process.env.LOG_LEVEL ?? "warn", PORT: "0" });
+}
+
+export function buildTestApp(): TestApp {
+  const config = testConfig();
+  const db = createDb(config.DATABASE_URL, 5);
+  const app = createApp({ db, log: createLogger(config), config });
+  return { app, db, close: () => db.destroy() };
+}
+
+export interface RunningServer extends TestApp { baseUrl: string; server: Server }
+
+/** Listens on an ephemeral loopback port; the browser tests load the built client from it. */
+export async function startTestServer(): Promise<RunningServer> {
+  const t = buildTestApp();
+  const server = await new Promise<Server>((resolve) => {
+    const s = t.app.listen(0, "127.0.0.1", () => resolve(s));
+  });
+  const { port } = server.address() as AddressInfo;
+  return {
+    ...t,
+    server,
+    baseUrl: `http://127.0.0.1:${port}`,
+    close: async () => {
+      server.closeAllConnections();
+      await new Promise<void>((r) => server.close(() => r()));
+      await t.db.destroy();
+    },
+  };
+}
