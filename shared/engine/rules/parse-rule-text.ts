@@ -84,6 +84,7 @@ class LineParser {
 
   parseRule(): ParsedRule {
     const target = this.peek();
+    if (/^[A-Za-z]/.test(target.text)) this.checkName(target);
     if (target.kind !== "name") {
       throw new LineError(target.column, `expected a node name at the start of the rule, found ${describe(target)}`);
     }
@@ -192,7 +193,7 @@ class LineParser {
         const earlier = seen.get(node.text);
         if (earlier !== undefined) throw new LineError(node.column, `${node.text} already has a weight (column ${earlier})`);
         seen.set(node.text, node.column);
-        terms.push({ weight, node: node.text, pos: this.pos(start) });
+        terms.push({ weight, node: node.text, pos: this.pos(node) });
         if (this.peek().kind !== "comma") break;
         this.next();
       }
@@ -247,22 +248,21 @@ export function parseRuleText(text: string): RuleTextResult {
     }
   });
 
-  const firstRule = new Map<string, ParsedRule>();
-  for (const r of rules) {
-    const earlier = firstRule.get(r.name);
-    if (earlier) errors.push(new ParseError(`duplicate rule for ${r.name} (first on line ${earlier.line})`, r.line, r.column));
-    else firstRule.set(r.name, r);
-  }
-  // Lines with syntax errors may still name a target; don't call their nodes undefined.
-  const attempted = new Set<string>();
-  lines.forEach((raw) => {
-    const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*'?\s*=/.exec(raw);
-    if (m) attempted.add(m[1]!);
+  // Targets are read from every line whose start looks like `Name' =`, so a duplicate is found even when one of
+  // the two lines has a syntax error further right, and nodes of faulty lines are not reported as undefined.
+  const firstTarget = new Map<string, number>();
+  lines.forEach((raw, index) => {
+    const m = /^(\s*)([A-Za-z_][A-Za-z0-9_]*)\s*'?\s*=/.exec(raw);
+    if (!m) return;
+    const name = m[2]!;
+    const earlier = firstTarget.get(name);
+    if (earlier === undefined) firstTarget.set(name, index + 1);
+    else errors.push(new ParseError(`duplicate rule for ${name} (first on line ${earlier})`, index + 1, m[1]!.length + 1));
   });
   const reported = new Set<string>();
   for (const r of rules) {
     for (const use of usesOf(r.rule)) {
-      if (firstRule.has(use.name) || attempted.has(use.name) || reported.has(use.name)) continue;
+      if (firstTarget.has(use.name) || reported.has(use.name)) continue;
       reported.add(use.name);
       errors.push(
         new ParseError(`node ${use.name} is used on line ${use.pos.line} but has no rule; add \`${use.name}' = ${use.name}\` to make it an input`, use.pos.line, use.pos.column),

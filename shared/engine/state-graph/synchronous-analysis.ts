@@ -44,11 +44,11 @@ export function analyseSynchronous(net: BooleanNetwork, options: LongTaskOptions
   const cycleEntry: number[] = [];
   let walk = 0;
   for (let start = 0; start < N; start++) {
-    if (label[start] !== 0) continue;
     if ((start & 0xffff) === 0 && start > 0) {
       if (shouldStop?.()) throw new CancelledError();
       onProgress?.(0.5 + (0.5 * start) / N, "attractors");
     }
+    if (label[start] !== 0) continue;
     walk++;
     const mark = -walk;
     let x = start;

@@ -1,0 +1,132 @@
+// Given-target search for block emulation: for t = 1..tmax, find the first unit (t, smallest node of block 0)
+// whose satisfiability query has a witness; bisection over unit ranges skips unsatisfiable stretches in one query.
+// Complete within the stated bounds: "not found" means no witness exists there.
+import { CancelledError, EngineError } from "../errors";
+import type { BooleanNetwork } from "../network";
+import type { BlockEmulationWitness } from "./block-witness";
+import { solveEmulationSat } from "./emulation-sat";
+import { successorsOfNetwork } from "./network-from-successors";
+import { shardRange, type UnitRange } from "./search-units";
+
+export interface EmulationBounds {
+  readonly maxTime: number;
+  readonly maxBlock: number;
+  /** Source nodes that may belong to blocks (all when omitted). */
+  readonly allowedNodes?: readonly number[];
+  /** May source nodes stay outside the blocks with a fixed value? (default true) */
+  readonly contextAllowed?: boolean;
+}
+
+export interface SearchControl {
+  readonly onProgress?: (fraction: number, phase: string) => void;
+  readonly shouldStop?: () => boolean;
+  /** Work only on this shard (`{ index, count }`) or this unit range. */
+  readonly shard?: { readonly index: number; readonly count: number };
+  readonly range?: UnitRange;
+  /** Resume: units before this one are already known to hold no witness. */
+  readonly resumeFrom?: number;
+  /** Told after each decided stretch: every unit before `cursor` holds no witness. */
+  readonly onCursor?: (cursor: number) => void;
+}
+
+export interface EmulationSearchResult {
+  readonly found: boolean;
+  readonly witness: BlockEmulationWitness | null;
+  /** The unit holding the witness. */
+  readonly unit: number | null;
+  readonly bounds: Required<Omit<EmulationBounds, "allowedNodes">> & { readonly allowedNodes: number[] };
+  readonly range: UnitRange;
+  readonly totalUnits: number;
+  readonly satQueries: number;
+}
+
+export function emulationUnitCount(source: BooleanNetwork, bounds: EmulationBounds): number {
+  return bounds.maxTime * source.names.length;
+}
+
+/** Search for a block emulation of `target` by `source` within `bounds` (or the shard of it named in `control`). */
+export function searchBlockEmulation(
+  source: BooleanNetwork,
+  target: BooleanNetwork,
+  bounds: EmulationBounds,
+  control: SearchControl = {},
+): EmulationSearchResult {
+  const n = source.names.length;
+  const m = target.names.length;
+  if (m < 1) throw new EngineError("BAD_TARGET", "the target network has no nodes");
+  if (m > 12) throw new EngineError("TOO_LARGE", `a target of ${m} nodes is beyond the search (at most 12)`);
+  if (!(bounds.maxTime >= 1) || !(bounds.maxBlock >= 1)) throw new EngineError("BAD_BOUNDS", "time scale and block size bounds must be at least 1");
+  const allowed = new Uint8Array(n);
+  if (bounds.allowedNodes) {
+    for (const v of bounds.allowedNodes) {
+      if (!(v >= 0 && v < n)) throw new EngineError("BAD_BOUNDS", `allowed node ${v} is not a source node`);
+      allowed[v] = 1;
+    }
+  } else allowed.fill(1);
+  const contextAllowed = bounds.contextAllowed ?? true;
+  const targetSucc = successorsOfNetwork(target);
+  const totalUnits = bounds.maxTime * n;
+  const range = control.range ?? (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
+  const result = (witness: BlockEmulationWitness | null, unit: number | null): EmulationSearchResult => ({
+    found: witness !== null,
+    witness,
+    unit,
+    bounds: { maxTime: bounds.maxTime, maxBlock: bounds.maxBlock, contextAllowed, allowedNodes: [...allowed.keys()].filter((v) => allowed[v]) },
+    range,
+    totalUnits,
+    satQueries,
+  });
+  let satQueries = 0;
+  const query = (t: number, lo: number, hi: number) => {
+    if (control.shouldStop?.()) throw new CancelledError();
+    satQueries++;
+    return solveEmulationSat({ source, targetSucc, targetNodes: m, time: t, maxBlock: bounds.maxBlock, allowed, contextAllowed, firstBlockMin: [lo, hi] });
+  };
+  const span = Math.max(1, range.end - range.start);
+  const report = (cursor: number) => {
+    control.onCursor?.(cursor);
+    control.onProgress?.((cursor - range.start) / span, "searching block emulations");
+  };
+  // The first satisfiable unit in [lo, hi) of time t, given (when known) that the range is satisfiable.
+  const firstUnit = (t: number, lo: number, hi: number, knownSat: boolean): number | null => {
+    if (!knownSat && !query(t, lo, hi)) return null;
+    if (hi - lo === 1) return lo;
+    const mid = (lo + hi) >> 1;
+    const left = firstUnit(t, lo, mid, false);
+    if (left !== null) return left;
+    report((t - 1) * n + mid);
+    return firstUnit(t, mid, hi, true);
+  };
+
+  let cursor = Math.max(range.start, control.resumeFrom ?? range.start);
+  if (m > n) cursor = range.end;
+  while (cursor < range.end) {
+    const t = Math.floor(cursor / n) + 1;
+    const lo = cursor - (t - 1) * n;
+    const hi = Math.min(n, range.end - (t - 1) * n);
+    const v = firstUnit(t, lo, hi, false);
+    if (v !== null) {
+      // The witness of a unit comes from a fresh query on that unit alone, so it does not depend on how the
+      // units were split into shards.
+      const witness = query(t, v, v + 1);
+      if (!witness) throw new EngineError("INTERNAL", "a satisfiable unit became unsatisfiable");
+      report((t - 1) * n + v);
+      return result(witness, (t - 1) * n + v);
+    }
+    cursor = t * n > range.end ? range.end : t * n;
+    report(cursor);
+  }
+  return result(null, null);
+}
+
+/** Merge shard results (any order) into what one unsplit run over their union reports. */
+export function mergeEmulationShards(results: readonly EmulationSearchResult[]): EmulationSearchResult {
+  if (results.length === 0) throw new EngineError("BAD_SHARD", "no shard results to merge");
+  const sorted = [...results].sort((a, b) => a.range.start - b.range.start);
+  const winner = sorted.find((r) => r.found);
+  const first = sorted[0]!;
+  const last = sorted[sorted.length - 1]!;
+  const satQueries = sorted.reduce((s, r) => s + r.satQueries, 0);
+  const range = { start: first.range.start, end: last.range.end };
+  return winner ? { ...winner, range, satQueries } : { ...first, range, satQueries };
+}

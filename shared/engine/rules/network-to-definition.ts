@@ -1,0 +1,33 @@
+// Turns any compiled network back into a source-level model, so that generated or imported tables can be printed
+// as rule text: each node becomes a sum of products of its regulators (see minimal-sop.ts).
+import type { BooleanNetwork } from "../network";
+import { minimalSop, type Cube } from "./minimal-sop";
+import type { Expr, ModelDefinition } from "./syntax";
+
+function cubeToExpr(cube: Cube, names: readonly string[]): Expr {
+  let product: Expr | null = null;
+  for (let j = 0; j < names.length; j++) {
+    if (!(cube.mask & (1 << j))) continue;
+    const v: Expr = { kind: "var", name: names[j]! };
+    const literal: Expr = cube.value & (1 << j) ? v : { kind: "not", arg: v };
+    product = product ? { kind: "and", left: product, right: literal } : literal;
+  }
+  return product ?? { kind: "const", value: 1 };
+}
+
+/** The Boolean expression of one truth table over named inputs (row bit j = input j). */
+export function tableToExpr(table: Uint8Array, inputNames: readonly string[]): Expr {
+  const cubes = minimalSop(table, inputNames.length);
+  if (cubes.length === 0) return { kind: "const", value: 0 };
+  return cubes.map((c) => cubeToExpr(c, inputNames)).reduce((left, right) => ({ kind: "or", left, right }));
+}
+
+/** A model whose rules compute exactly the network's tables (regulators that never matter drop out). */
+export function networkToDefinition(net: BooleanNetwork): ModelDefinition {
+  return {
+    nodes: net.names.map((name, i) => ({
+      name,
+      rule: tableToExpr(net.tables[i]!, Array.from(net.regulators[i]!, (r) => net.names[r]!)),
+    })),
+  };
+}
