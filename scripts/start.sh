@@ -12,7 +12,7 @@ npx tsx server/cli/main.ts db-setup --seed
 log "building the client"
 npx vite build --logLevel warn
 # Not exec: the EXIT trap must run after the server stops so the cluster we started is stopped too.
-npx tsx server/main.ts &
+node --import tsx server/main.ts &
 SERVER_PID=$!
 trap 'kill -TERM $SERVER_PID 2>/dev/null; wait $SERVER_PID; exit 130' INT TERM
 wait $SERVER_PID
