@@ -1,10 +1,11 @@
 // Builds the real app against the test database (DATABASE_URL, set by scripts/test.sh) for supertest and browser tests.
 import type { Server } from "node:http";
 import type { AddressInfo } from "node:net";
-import { createApp } from "../../server/app";
+import { createApp, type AppDeps } from "../../server/app";
 import { loadConfig } from "../../server/config";
 import { createDb, type Knex } from "../../server/db/knex";
 import { createLogger } from "../../server/logger";
+import { createFakeMailer } from "../../server/mail/mailer";
 
 export interface TestApp {
   app: ReturnType<typeof createApp>;
@@ -17,11 +18,14 @@ export function testConfig() {
   return loadConfig({ ...process.env, NODE_ENV: "test", LOG_LEVEL: process.env.LOG_LEVEL ?? "warn", PORT: "0" });
 }
 
-export function buildTestApp(): TestApp {
+/** Mail always goes to the local SMTP fake (started on the first message), whatever SMTP_URL says. */
+export function buildTestApp(overrides: Pick<AppDeps, "signInLimits"> = {}): TestApp {
   const config = testConfig();
   const db = createDb(config.DATABASE_URL, 5);
-  const app = createApp({ db, log: createLogger(config), config });
-  return { app, db, close: () => db.destroy() };
+  const log = createLogger(config);
+  const mailer = createFakeMailer(db, log);
+  const app = createApp({ db, log, config, mailer, ...overrides });
+  return { app, db, close: async () => { await mailer.close(); await db.destroy(); } };
 }
 
 export interface RunningServer extends TestApp { baseUrl: string; server: Server }
@@ -40,7 +44,7 @@ export async function startTestServer(): Promise<RunningServer> {
     close: async () => {
       server.closeAllConnections();
       await new Promise<void>((r) => server.close(() => r()));
-      await t.db.destroy();
+      await t.close();
     },
   };
 }

@@ -15,25 +15,52 @@ export interface MiddleBlockMap {
   middle(x: number, y: number, z: number): number;
 }
 
-/** Per-rule tables: entry w (8 + 2rs cells) -> the 8 cells left after s steps. Cached per rule object. */
-const chunkTables = new WeakMap<RuleTable, Map<number, Uint8Array>>();
+/**
+ * Per-rule tables: entry w (8 + 2rs cells) -> the 8 cells left after s steps. Kept for the few most recent rules
+ * (keyed by radius and table) because a hierarchy run asks for the same rule at every block size.
+ */
+const chunkTables = new Map<string, Map<number, Uint8Array>>();
+const CACHED_RULES = 16;
+
+function ruleKey(rule: RuleTable): string {
+  return `${rule.radius}:${rule.table.join("")}`;
+}
 
 function chunkTable(rule: RuleTable, steps: number): Uint8Array {
-  let perRule = chunkTables.get(rule);
-  if (!perRule) {
+  const key = ruleKey(rule);
+  let perRule = chunkTables.get(key);
+  if (perRule) {
+    chunkTables.delete(key);
+  } else {
     perRule = new Map();
-    chunkTables.set(rule, perRule);
+    if (chunkTables.size >= CACHED_RULES) chunkTables.delete(chunkTables.keys().next().value!);
   }
+  chunkTables.set(key, perRule);
   let table = perRule.get(steps);
   if (!table) {
-    const bits = 8 + 2 * rule.radius * steps;
-    table = new Uint8Array(1 << bits);
-    for (let w = 0; w < table.length; w++) {
-      let v = w;
-      for (let s = 0; s < steps; s++) v = stepPackedWord(rule, v);
-      table[w] = v & 255;
-    }
+    table = buildChunkTable(rule, steps);
     perRule.set(steps, table);
+  }
+  return table;
+}
+
+/** s steps on every (8 + 2rs)-cell word; each step goes through a one-step table of 8-cell chunks. */
+function buildChunkTable(rule: RuleTable, steps: number): Uint8Array {
+  const r = rule.radius;
+  const oneIn = 8 + 2 * r;
+  const one = new Uint8Array(1 << oneIn);
+  for (let w = 0; w < one.length; w++) one[w] = stepPackedWord(rule, w) & 255;
+  const oneMask = one.length - 1;
+  const bits = 8 + 2 * r * steps;
+  const table = new Uint8Array(1 << bits);
+  for (let w = 0; w < table.length; w++) {
+    let v = w;
+    for (let s = 0; s < steps; s++) {
+      let next = 0;
+      for (let shift = 0; shift < bits; shift += 8) next |= one[(v >>> shift) & oneMask]! << shift;
+      v = next;
+    }
+    table[w] = v & 255;
   }
   return table;
 }

@@ -1,9 +1,9 @@
 // Given-target block emulation as satisfiability: block membership, codeword and context bits are variables and
 // F^t is unrolled over the 2^m encoded states (Tseitin-style clauses per truth-table row; Biere, Cimatti, Clarke,
-// Zhu, "Symbolic model checking without BDDs", TACAS 1999, for the unrolling idea). Solved with logic-solver (MiniSat).
-import Logic from "logic-solver";
+// Zhu, "Symbolic model checking without BDDs", TACAS 1999, for the unrolling idea), solved by MiniSat.
 import type { BooleanNetwork } from "../network";
 import type { BlockEmulationWitness, EmulationBlock } from "./block-witness";
+import { MiniSatHandle } from "./minisat-handle";
 
 export interface EmulationSatProblem {
   readonly source: BooleanNetwork;
@@ -15,142 +15,167 @@ export interface EmulationSatProblem {
   /** allowed[v] = 1 when source node v may belong to a block (others are context). */
   readonly allowed: Uint8Array;
   readonly contextAllowed: boolean;
-  /** Restrict the smallest source node of block 0 to [lo, hi): the unit of work the search splits on. */
-  readonly firstBlockMin: readonly [number, number];
 }
 
-/** One satisfiability query; returns a witness or null when none satisfies the problem's restrictions. */
-export function solveEmulationSat(p: EmulationSatProblem): BlockEmulationWitness | null {
-  const { source, targetSucc, time } = p;
-  const n = source.names.length;
-  const m = p.targetNodes;
-  const states = 2 ** m;
-  const [lo, hi] = p.firstBlockMin;
-  const solver = new Logic.Solver();
-  const clause = (...lits: string[]) => solver.require(Logic.or(...lits));
-  const neg = (l: string) => (l.startsWith("-") ? l.slice(1) : "-" + l);
-  const inVar = (v: number, j: number) => `b${v}_${j}`;
-  const ctxVar = (v: number) => `c${v}`;
-  // A node that may not join a block is context: its value is one variable shared by all encoded states.
-  const wVar = (v: number, x: number) => (p.allowed[v] ? `w${v}_${x}` : `w${v}_0`);
+/**
+ * One time scale's formula, built once and queried incrementally for ranges of units: a unit fixes the smallest
+ * source node of block 0, the split the search shards on.
+ */
+export class EmulationSatInstance {
+  private readonly sat = new MiniSatHandle();
+  private readonly inVar: Int32Array; // v * m + j, 0 when v may not join blocks
+  private readonly wVar: Int32Array; // v * states + x
+  private readonly impossible: boolean;
 
-  for (let v = 0; v < n; v++) {
-    if (!p.allowed[v]) {
-      if (!p.contextAllowed) return null;
-      continue;
-    }
-    const ins: string[] = [];
-    for (let j = 0; j < m; j++) ins.push(inVar(v, j));
-    clause(ctxVar(v), ...ins);
-    for (let j = 0; j < m; j++) {
-      clause(neg(ins[j]!), neg(ctxVar(v)));
-      for (let k = j + 1; k < m; k++) clause(neg(ins[j]!), neg(ins[k]!));
-    }
-    if (!p.contextAllowed) clause(neg(ctxVar(v)));
-    for (let x = 1; x < states; x++) {
-      clause(neg(ctxVar(v)), neg(wVar(v, x)), wVar(v, 0));
-      clause(neg(ctxVar(v)), wVar(v, x), neg(wVar(v, 0)));
-    }
-    // A block node's value depends on its own target bit only.
-    for (let j = 0; j < m; j++) {
-      for (let k = 0; k < m; k++) {
-        if (k === j) continue;
-        for (let x = 0; x < states; x++) {
-          if ((x >>> k) & 1) continue;
-          const y = x | (1 << k);
-          clause(neg(inVar(v, j)), neg(wVar(v, x)), wVar(v, y));
-          clause(neg(inVar(v, j)), wVar(v, x), neg(wVar(v, y)));
-        }
-      }
-    }
-    // The shard restriction on where block 0 starts.
-    if (v < lo) clause(neg(inVar(v, 0)));
-  }
-  const firstCandidates: string[] = [];
-  for (let v = Math.max(0, lo); v < Math.min(n, hi); v++) if (p.allowed[v]) firstCandidates.push(inVar(v, 0));
-  if (firstCandidates.length === 0) return null;
-  clause(...firstCandidates);
-
-  for (let j = 0; j < m; j++) {
-    const members: string[] = [];
-    const witnesses: string[] = [];
+  constructor(private readonly p: EmulationSatProblem) {
+    const { source, targetSucc, time } = p;
+    const n = source.names.length;
+    const m = p.targetNodes;
+    const states = 2 ** m;
+    const sat = this.sat;
+    const clause = (...lits: number[]) => sat.clause(lits);
+    this.inVar = new Int32Array(n * m);
+    this.wVar = new Int32Array(n * states);
+    let impossible = false;
     for (let v = 0; v < n; v++) {
-      if (!p.allowed[v]) continue;
-      members.push(inVar(v, j));
-      const d = `d${v}_${j}`;
-      witnesses.push(d);
-      clause(neg(d), inVar(v, j));
-      clause(neg(d), wVar(v, 0), wVar(v, 1 << j));
-      clause(neg(d), neg(wVar(v, 0)), neg(wVar(v, 1 << j)));
-    }
-    if (witnesses.length === 0) return null;
-    clause(...witnesses);
-    atMost(members, p.maxBlock, `k${j}`, clause, neg);
-  }
-
-  const lit = (step: number, v: number, x: number) =>
-    step === 0 ? wVar(v, x) : step === time ? wVar(v, targetSucc[x]!) : `s${step}_${v}_${x}`;
-  for (let step = 1; step <= time; step++) {
-    for (let x = 0; x < states; x++) {
-      for (let v = 0; v < n; v++) {
-        const regs = source.regulators[v]!;
-        const table = source.tables[v]!;
-        const out = lit(step, v, x);
-        const inputs = Array.from(regs, (r) => lit(step - 1, r, x));
-        for (let row = 0; row < table.length; row++) {
-          const lits: string[] = [];
-          for (let q = 0; q < inputs.length; q++) lits.push((row >> q) & 1 ? neg(inputs[q]!) : inputs[q]!);
-          lits.push(table[row] ? out : neg(out));
-          clause(...lits);
+      if (!p.allowed[v]) {
+        if (!p.contextAllowed) impossible = true;
+        // A node that may not join a block is context: one value variable shared by all encoded states.
+        const w = sat.newVar();
+        for (let x = 0; x < states; x++) this.wVar[v * states + x] = w;
+        continue;
+      }
+      for (let x = 0; x < states; x++) this.wVar[v * states + x] = sat.newVar();
+      for (let j = 0; j < m; j++) this.inVar[v * m + j] = sat.newVar();
+      const ctx = sat.newVar();
+      const ins = Array.from(this.inVar.subarray(v * m, v * m + m));
+      const w = (x: number) => this.wVar[v * states + x]!;
+      clause(ctx, ...ins);
+      for (let j = 0; j < m; j++) {
+        clause(-ins[j]!, -ctx);
+        for (let k = j + 1; k < m; k++) clause(-ins[j]!, -ins[k]!);
+      }
+      if (!p.contextAllowed) clause(-ctx);
+      for (let x = 1; x < states; x++) {
+        clause(-ctx, -w(x), w(0));
+        clause(-ctx, w(x), -w(0));
+      }
+      // A block node's value depends on its own target bit only.
+      for (let j = 0; j < m; j++) {
+        for (let k = 0; k < m; k++) {
+          if (k === j) continue;
+          for (let x = 0; x < states; x++) {
+            if ((x >>> k) & 1) continue;
+            const y = x | (1 << k);
+            clause(-ins[j]!, -w(x), w(y));
+            clause(-ins[j]!, w(x), -w(y));
+          }
         }
       }
     }
+    for (let j = 0; j < m; j++) {
+      const members: number[] = [];
+      const differs: number[] = [];
+      for (let v = 0; v < n; v++) {
+        if (!p.allowed[v]) continue;
+        const b = this.inVar[v * m + j]!;
+        members.push(b);
+        const d = sat.newVar();
+        differs.push(d);
+        const w0 = this.wVar[v * states]!;
+        const w1 = this.wVar[v * states + (1 << j)]!;
+        clause(-d, b);
+        clause(-d, w0, w1);
+        clause(-d, -w0, -w1);
+      }
+      if (differs.length === 0) impossible = true;
+      else clause(...differs);
+      atMost(sat, members, p.maxBlock);
+    }
+    const layer = new Int32Array(n * states);
+    let prev = this.wVar;
+    for (let step = 1; step <= time; step++) {
+      const cur = step === time ? null : Int32Array.from(layer, () => sat.newVar());
+      for (let x = 0; x < states; x++) {
+        for (let v = 0; v < n; v++) {
+          const regs = source.regulators[v]!;
+          const table = source.tables[v]!;
+          const out = cur ? cur[v * states + x]! : this.wVar[v * states + targetSucc[x]!]!;
+          const inputs = Array.from(regs, (r) => prev[r * states + x]!);
+          for (let row = 0; row < table.length; row++) {
+            const lits: number[] = [];
+            for (let q = 0; q < inputs.length; q++) lits.push((row >> q) & 1 ? -inputs[q]! : inputs[q]!);
+            lits.push(table[row] ? out : -out);
+            sat.clause(lits);
+          }
+        }
+      }
+      if (cur) prev = cur;
+    }
+    this.impossible = impossible;
   }
 
-  const solution = solver.solve();
-  if (!solution) return null;
-  const truth = new Set(solution.getTrueVars());
-  const blocks: { nodes: number[]; zero: number[]; one: number[] }[] = [];
-  for (let j = 0; j < m; j++) blocks.push({ nodes: [], zero: [], one: [] });
-  const context: number[] = [];
-  for (let v = 0; v < n; v++) {
-    let owner = -1;
-    if (p.allowed[v]) for (let j = 0; j < m; j++) if (truth.has(inVar(v, j))) owner = j;
-    if (owner === -1) {
-      context.push(truth.has(wVar(v, 0)) ? 1 : 0);
-      continue;
-    }
-    context.push(-1);
-    const b = blocks[owner]!;
-    b.nodes.push(v);
-    b.zero.push(truth.has(wVar(v, 0)) ? 1 : 0);
-    b.one.push(truth.has(wVar(v, 1 << owner)) ? 1 : 0);
+  /** A witness whose block 0 has its smallest node in [lo, hi), or null when there is none. */
+  solveRange(lo: number, hi: number): BlockEmulationWitness | null {
+    if (this.impossible) return null;
+    const n = this.p.source.names.length;
+    const m = this.p.targetNodes;
+    const starts: number[] = [];
+    for (let v = Math.max(0, lo); v < Math.min(n, hi); v++) if (this.p.allowed[v]) starts.push(this.inVar[v * m]!);
+    if (starts.length === 0) return null;
+    const assume = this.sat.newVar();
+    for (let v = 0; v < Math.min(lo, n); v++) if (this.p.allowed[v]) this.sat.clause([-assume, -this.inVar[v * m]!]);
+    this.sat.clause([-assume, ...starts]);
+    const values = this.sat.solve(assume);
+    return values ? this.witnessFrom(values) : null;
   }
-  return { time, blocks: blocks as EmulationBlock[], context };
+
+  private witnessFrom(values: (boolean | null)[]): BlockEmulationWitness {
+    const n = this.p.source.names.length;
+    const m = this.p.targetNodes;
+    const states = 2 ** m;
+    const on = (v: number) => values[v] === true;
+    const blocks: { nodes: number[]; zero: number[]; one: number[] }[] = [];
+    for (let j = 0; j < m; j++) blocks.push({ nodes: [], zero: [], one: [] });
+    const context: number[] = [];
+    for (let v = 0; v < n; v++) {
+      let owner = -1;
+      if (this.p.allowed[v]) for (let j = 0; j < m; j++) if (on(this.inVar[v * m + j]!)) owner = j;
+      const w0 = on(this.wVar[v * states]!) ? 1 : 0;
+      if (owner === -1) {
+        context.push(w0);
+        continue;
+      }
+      context.push(-1);
+      const b = blocks[owner]!;
+      b.nodes.push(v);
+      b.zero.push(w0);
+      b.one.push(on(this.wVar[v * states + (1 << owner)]!) ? 1 : 0);
+    }
+    return { time: this.p.time, blocks: blocks as EmulationBlock[], context };
+  }
 }
 
 /** Sinz's sequential counter for "at most k of these are true" (Sinz, "Towards an optimal CNF encoding of Boolean cardinality constraints", CP 2005). */
-function atMost(lits: readonly string[], k: number, prefix: string, clause: (...l: string[]) => void, neg: (l: string) => string): void {
+function atMost(sat: MiniSatHandle, lits: readonly number[], k: number): void {
   const n = lits.length;
   if (k >= n) return;
   if (k === 0) {
-    for (const l of lits) clause(neg(l));
+    for (const l of lits) sat.clause([-l]);
     return;
   }
-  const s = (i: number, j: number) => `${prefix}_${i}_${j}`;
+  let prev: number[] = [];
   for (let i = 0; i < n; i++) {
     const x = lits[i]!;
+    const s = Array.from({ length: k }, () => sat.newVar()); // s[c] = "at least c+1 of the first i+1 are true"
+    sat.clause([-x, s[0]!]);
     if (i === 0) {
-      clause(neg(x), s(0, 1));
-      for (let j = 2; j <= k; j++) clause(neg(s(0, j)));
-      continue;
+      for (let c = 1; c < k; c++) sat.clause([-s[c]!]);
+    } else {
+      for (let c = 0; c < k; c++) sat.clause([-prev[c]!, s[c]!]);
+      for (let c = 1; c < k; c++) sat.clause([-x, -prev[c - 1]!, s[c]!]);
+      sat.clause([-x, -prev[k - 1]!]);
     }
-    clause(neg(x), s(i, 1));
-    clause(neg(s(i - 1, 1)), s(i, 1));
-    for (let j = 2; j <= k; j++) {
-      clause(neg(x), neg(s(i - 1, j - 1)), s(i, j));
-      clause(neg(s(i - 1, j)), s(i, j));
-    }
-    clause(neg(x), neg(s(i - 1, k)));
+    prev = s;
   }
 }

@@ -4,7 +4,7 @@
 import { CancelledError, EngineError } from "../errors";
 import type { BooleanNetwork } from "../network";
 import type { BlockEmulationWitness } from "./block-witness";
-import { solveEmulationSat } from "./emulation-sat";
+import { EmulationSatInstance } from "./emulation-sat";
 import { successorsOfNetwork } from "./network-from-successors";
 import { shardRange, type UnitRange } from "./search-units";
 
@@ -77,10 +77,14 @@ export function searchBlockEmulation(
     satQueries,
   });
   let satQueries = 0;
+  let instance: { t: number; sat: EmulationSatInstance } | null = null;
+  const problem = (t: number) => ({ source, targetSucc, targetNodes: m, time: t, maxBlock: bounds.maxBlock, allowed, contextAllowed });
+  // Range queries share one incremental formula per time scale; they only answer yes or no.
   const query = (t: number, lo: number, hi: number) => {
     if (control.shouldStop?.()) throw new CancelledError();
     satQueries++;
-    return solveEmulationSat({ source, targetSucc, targetNodes: m, time: t, maxBlock: bounds.maxBlock, allowed, contextAllowed, firstBlockMin: [lo, hi] });
+    if (instance?.t !== t) instance = { t, sat: new EmulationSatInstance(problem(t)) };
+    return instance.sat.solveRange(lo, hi) !== null;
   };
   const span = Math.max(1, range.end - range.start);
   const report = (cursor: number) => {
@@ -108,7 +112,8 @@ export function searchBlockEmulation(
     if (v !== null) {
       // The witness of a unit comes from a fresh query on that unit alone, so it does not depend on how the
       // units were split into shards.
-      const witness = query(t, v, v + 1);
+      satQueries++;
+      const witness = new EmulationSatInstance(problem(t)).solveRange(v, v + 1);
       if (!witness) throw new EngineError("INTERNAL", "a satisfiable unit became unsatisfiable");
       report((t - 1) * n + v);
       return result(witness, (t - 1) * n + v);

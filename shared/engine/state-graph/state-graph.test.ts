@@ -3,9 +3,9 @@ import fc from "fast-check";
 import seedrandom from "seedrandom";
 import { networkFromFunctions } from "../network";
 import { CancelledError } from "../errors";
-import { randomNK, slowSuccessor, text } from "../update/test-helpers";
+import { randomNK, slowSuccessor, text } from "../update/random-networks.test-support";
 import { analyseSynchronous, asynchronousAttractors, attractorsAsText, forEachBasinState, sampleAttractors } from "./index";
-import { yeastCellCycle } from "./yeast-cell-cycle.test-model";
+import { yeastCellCycle } from "./yeast-cell-cycle.test-support";
 
 /** Reference: follow each state one step at a time, keeping the whole path, until a state repeats. */
 function referenceSynchronous(net: ReturnType<typeof randomNK>) {
@@ -107,7 +107,7 @@ describe("state-graph", () => {
   it("analyseSynchronous reproduces the seven fixed points and the G1 basin of 1764 states of the yeast cell-cycle model", () => {
     // Li et al., "The yeast cell-cycle network is robustly designed", PNAS 2004, Table 1: seven fixed points with
     // basins 1764, 151, 109, 9, 7, 7, 1 out of 2048 states; the biggest is the G1 state (Cdh1 and Sic1 on).
-    // Basin values from memory; the network is rebuilt from memory in yeast-cell-cycle.test-model.ts.
+    // Basin values from memory; the network is rebuilt from memory in yeast-cell-cycle.test-support.ts.
     const a = analyseSynchronous(yeastCellCycle());
     expect(a.stateCount).toBe(2048);
     expect(a.attractors.map((x) => x.length)).toEqual([1, 1, 1, 1, 1, 1, 1]);

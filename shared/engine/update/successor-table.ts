@@ -6,12 +6,13 @@
 import { transpose32 } from "../bits";
 import { CancelledError, EngineError } from "../errors";
 import type { BooleanNetwork } from "../network";
+import type { Progress, ShouldStop } from "../progress";
 
 export const MAX_TABLE_NODES = 24;
 
 export interface LongTaskOptions {
-  onProgress?: (fraction: number, phase: string) => void;
-  shouldStop?: () => boolean;
+  onProgress?: Progress;
+  shouldStop?: ShouldStop;
 }
 
 /** Per node: its word for each assignment of its regulators outside the low 5 bits. */

@@ -4,7 +4,7 @@ import seedrandom from "seedrandom";
 import { networkFromFunctions } from "../network";
 import { bytesFromString, bytesToString, successorTable, synchronousStep, trajectory } from "./index";
 import { CancelledError } from "../errors";
-import { randomNK, slowSuccessor, text } from "./test-helpers";
+import { randomNK, slowSuccessor, text } from "./random-networks.test-support";
 
 describe("update", () => {
   it("successorTable agrees with one-state-at-a-time evaluation on random networks of 1 to 12 nodes", () => {

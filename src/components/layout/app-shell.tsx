@@ -5,7 +5,7 @@ import { HealthBadge } from "./health-badge";
 
 export interface NavItem { to: string; label: string }
 
-const navItems: NavItem[] = [{ to: "/", label: "Overview" }];
+const navItems: NavItem[] = [{ to: "/", label: "Overview" }, { to: "/automata", label: "Automata" }];
 
 function navClass({ isActive }: { isActive: boolean }) {
   return `rounded-md px-3 py-2 text-sm font-medium ${isActive ? "bg-brand-700 text-white" : "text-slate-200 hover:bg-brand-800 hover:text-white"}`;

@@ -8,9 +8,12 @@ export function randomNK(n: number, k: number, seed: number | string, p = 0.5): 
   const rng = seedrandom(String(seed));
   const regulators: number[][] = [];
   for (let i = 0; i < n; i++) {
-    const pool = Array.from({ length: n }, (_, j) => j);
+    // Rejection keeps the draw uniform over distinct regulators without an O(n) pool per node.
     const regs: number[] = [];
-    for (let j = 0; j < Math.min(k, n); j++) regs.push(pool.splice(Math.floor(rng() * pool.length), 1)[0]!);
+    while (regs.length < Math.min(k, n)) {
+      const r = Math.floor(rng() * n);
+      if (!regs.includes(r)) regs.push(r);
+    }
     regulators.push(regs);
   }
   const tables = regulators.map((r) => Array.from({ length: 1 << r.length }, () => (rng() < p ? 1 : 0)));

@@ -1,0 +1,101 @@
+// Who is calling and what may they do. `authenticate` runs on every API request and sets req.user from the
+// session cookie; routes then ask for the least they need: requireUser, requireSiteAdmin, or projectAccess(db,
+// capability), which also hides projects the caller is not in behind a 404 so their existence does not leak.
+import type { Request, RequestHandler } from "express";
+import type { Knex } from "knex";
+import { can, type Capability, type ProjectRole, type SiteRole } from "../../shared/types/roles";
+import { roleOf } from "../db/repositories/memberships";
+import { findProject } from "../db/repositories/projects";
+import { findUserById } from "../db/repositories/users";
+import { HttpError } from "./errors";
+import { ROTATE_AFTER_SECONDS, SESSION_COOKIE, clearSessionCookie, readCookie, setSessionCookie, signSession, verifySession } from "./session";
+
+export interface AuthUser { id: string; email: string; displayName: string; siteRole: SiteRole }
+export interface ProjectContext { id: string; name: string; archived: boolean; role: ProjectRole | null }
+
+declare module "express-serve-static-core" {
+  interface Request {
+    user?: AuthUser;
+    project?: ProjectContext;
+  }
+}
+
+const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export function isUuid(value: unknown): value is string {
+  return typeof value === "string" && uuidPattern.test(value);
+}
+
+/**
+ * Sets req.user when the session cookie holds a valid token for an existing account whose session version still
+ * matches; otherwise the request continues anonymous (and a stale cookie is cleared). Rotates old tokens.
+ */
+export function authenticate(db: Knex, sessionSecret: string): RequestHandler {
+  return async (req, res, next) => {
+    const token = readCookie(req, SESSION_COOKIE);
+    if (!token) return next();
+    const claims = await verifySession(sessionSecret, token);
+    const user = claims && isUuid(claims.userId) ? await findUserById(db, claims.userId) : null;
+    if (!claims || !user || user.sessionVersion !== claims.sessionVersion) {
+      clearSessionCookie(req, res);
+      return next();
+    }
+    req.user = { id: user.id, email: user.email, displayName: user.displayName, siteRole: user.siteRole };
+    const ageSeconds = Math.floor(Date.now() / 1000) - claims.issuedAt;
+    if (ageSeconds > ROTATE_AFTER_SECONDS) setSessionCookie(req, res, await signSession(sessionSecret, user.id, user.sessionVersion));
+    next();
+  };
+}
+
+export const requireUser: RequestHandler = (req, _res, next) => {
+  if (!req.user) return next(new HttpError(401, "UNAUTHENTICATED", "Sign in to continue"));
+  next();
+};
+
+export const requireSiteAdmin: RequestHandler = (req, _res, next) => {
+  if (!req.user) return next(new HttpError(401, "UNAUTHENTICATED", "Sign in to continue"));
+  if (req.user.siteRole !== "admin") return next(new HttpError(403, "FORBIDDEN", "Only site administrators may do this"));
+  next();
+};
+
+/** Capabilities that change a project's content; an archived project refuses them until it is restored. */
+const contentWrites: ReadonlySet<Capability> = new Set(["model:write", "run:start", "review:decide", "comment:write"]);
+
+/**
+ * Guards every route under /api/projects/:projectId. 401 when anonymous; 404 when the project does not exist or
+ * the caller is neither a member nor a site admin; 403 when the caller's role lacks the capability; 409
+ * PROJECT_ARCHIVED for content changes in an archived project. Sets req.project for the handler.
+ */
+export function projectAccess(db: Knex, capability: Capability): RequestHandler {
+  return async (req, _res, next) => {
+    const user = req.user;
+    if (!user) return next(new HttpError(401, "UNAUTHENTICATED", "Sign in to continue"));
+    const projectId = req.params.projectId;
+    const notFound = new HttpError(404, "NOT_FOUND", "No such project");
+    if (!isUuid(projectId)) return next(notFound);
+    const project = await findProject(db, projectId);
+    if (!project) return next(notFound);
+    const role = await roleOf(db, project.id, user.id);
+    if (role === null && user.siteRole !== "admin") return next(notFound);
+    if (!can(role, user.siteRole, capability)) {
+      return next(new HttpError(403, "FORBIDDEN", `Your role in this project (${role ?? "none"}) does not allow this`));
+    }
+    if (project.archived && contentWrites.has(capability)) {
+      return next(new HttpError(409, "PROJECT_ARCHIVED", "This project is archived; restore it before changing its content"));
+    }
+    req.project = { id: project.id, name: project.name, archived: project.archived, role };
+    next();
+  };
+}
+
+/** The signed-in user in a handler behind requireUser or projectAccess. */
+export function currentUser(req: Request): AuthUser {
+  if (!req.user) throw new HttpError(401, "UNAUTHENTICATED", "Sign in to continue");
+  return req.user;
+}
+
+/** The project in a handler behind projectAccess. */
+export function currentProject(req: Request): ProjectContext {
+  if (!req.project) throw new Error("currentProject() used on a route without projectAccess()");
+  return req.project;
+}

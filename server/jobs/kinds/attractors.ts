@@ -1,0 +1,18 @@
+// "attractors": exact synchronous attractors and basins of one network (one shard: the state space is walked
+// once as a whole, see shared/engine/state-graph).
+import { AttractorsParams } from "../../../shared/schemas/runs";
+import { RunRequestError } from "../run-errors";
+import { taskFile, type RunKindDefinition } from "../run-kind";
+
+export const attractorsKind: RunKindDefinition<AttractorsParams> = {
+  kind: "attractors",
+  params: AttractorsParams,
+  taskFile: taskFile("attractors"),
+  timeLimitSeconds: 3600,
+  plan(p, revision) {
+    const ruleText = p.ruleText ?? revision?.ruleText;
+    if (!ruleText) throw new RunRequestError(400, "INVALID_INPUT", "An attractors run needs a model revision or rule text");
+    return [{ ruleText }];
+  },
+  merge: (partials) => partials[0],
+};

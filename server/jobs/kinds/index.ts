@@ -1,0 +1,14 @@
+// The registry of run kinds the queue accepts; a kind is usable once it is listed here.
+import type { RunKindDefinition } from "../run-kind";
+import { attractorsKind } from "./attractors";
+import { sleepCountKind } from "./sleep-count";
+
+const kinds = new Map<string, RunKindDefinition<never>>(
+  [sleepCountKind, attractorsKind].map((k) => [k.kind, k as unknown as RunKindDefinition<never>]),
+);
+
+export function runKind(kind: string): RunKindDefinition<unknown> | undefined {
+  return kinds.get(kind) as RunKindDefinition<unknown> | undefined;
+}
+
+export const runKindNames = () => [...kinds.keys()];

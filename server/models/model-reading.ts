@@ -1,0 +1,68 @@
+// Turns what a user sends (rule text, an uploaded file, generator parameters) into a checked ModelDefinition, or an
+// HttpError 400 PARSE_ERROR whose details list every problem with its line and column, before anything is stored.
+import { EngineError, ParseError } from "../../shared/engine/errors";
+import { compileDefinition, parseRuleText, type ModelDefinition } from "../../shared/engine/rules";
+import type { BooleanNetwork } from "../../shared/engine/network";
+import type { ModelSource, ParseIssue } from "../../shared/schemas/models";
+import { HttpError } from "../http/errors";
+
+export interface ReadModel {
+  definition: ModelDefinition;
+  network: BooleanNetwork;
+}
+
+function issueOf(e: unknown): ParseIssue | null {
+  if (e instanceof ParseError) return { line: e.line, column: e.column, message: e.reason };
+  if (e instanceof EngineError) {
+    // Importers name the line in the message (" (line 12)") when they know it; otherwise point at the start.
+    const at = / \(line (\d+)\)/.exec(e.message);
+    return { line: at ? Number(at[1]) : 1, column: 1, message: e.message.replace(/ \(line \d+\)/, "") };
+  }
+  return null;
+}
+
+export function parseFailure(issues: ParseIssue[], what = "The model"): HttpError {
+  const first = issues[0]!;
+  return new HttpError(400, "PARSE_ERROR", `${what} could not be read: ${first.message} (line ${first.line}, column ${first.column})`, issues);
+}
+
+/** Every problem of a rule text (syntax, duplicates, undefined nodes, then compile checks), in line order. */
+export function ruleTextIssues(text: string): { issues: ParseIssue[]; nodes: string[]; read: ReadModel | null } {
+  const result = parseRuleText(text);
+  const nodes = result.rules.map((r) => r.name);
+  if (!result.definition) return { issues: result.errors.map((e) => issueOf(e)!), nodes, read: null };
+  try {
+    return { issues: [], nodes, read: { definition: result.definition, network: compileDefinition(result.definition) } };
+  } catch (e) {
+    const issue = issueOf(e);
+    if (!issue) throw e;
+    return { issues: [issue], nodes, read: null };
+  }
+}
+
+export function readRules(text: string): ReadModel {
+  const { issues, read } = ruleTextIssues(text);
+  if (!read) throw parseFailure(issues, "The rule text");
+  return read;
+}
+
+/** Compile a definition produced by an importer or generator; its problems are reported like parse errors. */
+export function compileOrFail(definition: ModelDefinition, what: string): ReadModel {
+  try {
+    return { definition, network: compileDefinition(definition) };
+  } catch (e) {
+    const issue = issueOf(e);
+    if (!issue) throw e;
+    throw parseFailure([issue], what);
+  }
+}
+
+export function sourceOfFileName(fileName: string): ModelSource | null {
+  const lower = fileName.toLowerCase();
+  if (lower.endsWith(".sbml") || lower.endsWith(".xml")) return "sbml";
+  if (lower.endsWith(".csv")) return "csv";
+  if (lower.endsWith(".rules") || lower.endsWith(".txt")) return "rules";
+  return null;
+}
+
+export { issueOf };

@@ -1,0 +1,43 @@
+// Demonstration shard task: walks [from, to) one item at a time, sleeping delayMsPerItem per item (a stand-in for
+// real work), and checkpoints every ~200 ms so a resumed shard continues where the last checkpoint left it.
+// The sums are exact integers well inside 2^53 for the allowed item counts, so merged results compare exactly.
+import { CancelledError } from "../../../shared/engine/errors";
+import { runTask } from "../task-context";
+import type { ShardTaskInput } from "../task-protocol";
+
+export interface SleepCountShard { from: number; to: number; delayMsPerItem: number }
+export interface SleepCountPartial { itemCount: number; sum: number; oddCount: number }
+
+const CHECKPOINT_EVERY_MS = 200;
+
+/** The per-item function: a value that is cheap, deterministic and makes a double-counted item visible. */
+export function itemValue(i: number): number {
+  return (i * 7 + 3) % 1000;
+}
+
+export default function sleepCountTask(task: ShardTaskInput) {
+  return runTask(task, (ctx) => {
+    const shard = task.input as SleepCountShard;
+    let cursor = typeof task.cursor === "number" ? task.cursor : shard.from;
+    const partial: SleepCountPartial = (task.partial as SleepCountPartial | null) ?? { itemCount: 0, sum: 0, oddCount: 0 };
+    const span = Math.max(1, shard.to - shard.from);
+    const sleeper = new Int32Array(new SharedArrayBuffer(4));
+    let lastCheckpoint = Date.now();
+    while (cursor < shard.to) {
+      if (ctx.shouldStop()) throw new CancelledError();
+      if (shard.delayMsPerItem > 0) Atomics.wait(sleeper, 0, 0, shard.delayMsPerItem);
+      const v = itemValue(cursor);
+      partial.itemCount += 1;
+      partial.sum += v;
+      if (v % 2 === 1) partial.oddCount += 1;
+      cursor += 1;
+      const fraction = (cursor - shard.from) / span;
+      ctx.onProgress(fraction, "counting");
+      if (Date.now() - lastCheckpoint >= CHECKPOINT_EVERY_MS) {
+        lastCheckpoint = Date.now();
+        ctx.checkpoint(fraction, "counting", cursor, { ...partial });
+      }
+    }
+    return partial;
+  });
+}

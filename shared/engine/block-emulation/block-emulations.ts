@@ -1,0 +1,120 @@
+// Search for every elementary rule G that a rule F emulates with block size k and time t, one witness (u0, u1)
+// each (block simulation as in Delorme, Mazoyer, Ollinger, Theyssier, "Bulking I", Theor. Comput. Sci. 412, 2011).
+// Pruning: u_a u_a u_a must map to a codeword, so m(u0) = u1, m(u1) = u0, or both are fixed points of m (m = F^t on
+// a ring of k cells); only those pairs are examined. Affine rules are solved by linear algebra instead.
+import { CancelledError } from "../errors";
+import type { RuleTable } from "../automata";
+import { isAffineRule, packedToString, complementEca } from "../automata";
+import { middleBlockMap } from "./middle-block-map";
+import type { PackedEmulation } from "./affine-emulations";
+import { affineEmulations } from "./affine-emulations";
+
+export interface Emulation {
+  readonly target: number;
+  /** The codewords of 0 and 1, leftmost cell first. */
+  readonly u0: string;
+  readonly u1: string;
+}
+
+export interface BlockEmulationResult {
+  readonly block: number;
+  readonly time: number;
+  /** One entry per emulated elementary rule, targets ascending. */
+  readonly emulations: Emulation[];
+  /** Candidate codeword pairs whose mixed triples were simulated (0 on the affine path). */
+  readonly pairsExamined: number;
+  readonly method: "affine" | "fixed-points";
+}
+
+export interface BlockSearchOptions {
+  shouldStop?: () => boolean;
+}
+
+const conjugate = Array.from({ length: 256 }, (_, g) => complementEca(g));
+
+/** Mixed triples p = 4a + 2b + c in the order they are checked; 000 and 111 are settled before pairing. */
+const MIXED = [1, 4, 2, 6, 3, 5];
+
+export function blockEmulations(rule: RuleTable, block: number, time = block, options: BlockSearchOptions = {}): BlockEmulationResult {
+  const map = middleBlockMap(rule, block, time);
+  const toResult = (list: PackedEmulation[], pairsExamined: number, method: BlockEmulationResult["method"]): BlockEmulationResult => ({
+    block,
+    time,
+    emulations: list
+      .sort((p, q) => p.target - q.target)
+      .map((e) => ({ target: e.target, u0: packedToString(e.u0, block), u1: packedToString(e.u1, block) })),
+    pairsExamined,
+    method,
+  });
+  if (isAffineRule(rule)) return toResult(affineEmulations(map), 0, "affine");
+  const { list, pairsExamined } = fixedPointSearch(map, options.shouldStop);
+  return toResult(list, pairsExamined, "fixed-points");
+}
+
+function fixedPointSearch(map: ReturnType<typeof middleBlockMap>, shouldStop?: () => boolean): { list: PackedEmulation[]; pairsExamined: number } {
+  const k = map.block;
+  const size = 1 << k;
+  const u0s = new Int32Array(256);
+  const u1s = new Int32Array(256);
+  const has = new Uint8Array(256);
+  const record = (g: number, u0: number, u1: number) => {
+    if (!has[g]) {
+      has[g] = 1;
+      u0s[g] = u0;
+      u1s[g] = u1;
+    }
+    // swapping the codewords turns G into its complement conjugate
+    const h = conjugate[g]!;
+    if (!has[h]) {
+      has[h] = 1;
+      u0s[h] = u1;
+      u1s[h] = u0;
+    }
+  };
+  /** The target the pair encodes, given bits 0 and 7 already, or -1 when some mixed triple leaves the code. */
+  const complete = (u0: number, u1: number, g: number): number => {
+    for (let q = 0; q < 6; q++) {
+      const p = MIXED[q]!;
+      const out = map.middle(p & 4 ? u1 : u0, p & 2 ? u1 : u0, p & 1 ? u1 : u0);
+      if (out === u1) g |= 1 << p;
+      else if (out !== u0) return -1;
+    }
+    return g;
+  };
+  const ring = new Int32Array(size);
+  const fixed: number[] = [];
+  for (let x = 0; x < size; x++) {
+    const m = map.middle(x, x, x);
+    ring[x] = m;
+    if (m === x) fixed.push(x);
+  }
+  let pairs = 0;
+  // m(u0) = u1 != u0: G(000) = 1 and u1 is forced
+  for (let u0 = 0; u0 < size; u0++) {
+    const u1 = ring[u0]!;
+    if (u1 === u0) continue;
+    const m1 = ring[u1]!;
+    let g: number;
+    if (m1 === u1) g = 0x81;
+    else if (m1 === u0) g = 0x01;
+    else continue;
+    pairs++;
+    g = complete(u0, u1, g);
+    if (g >= 0) record(g, u0, u1);
+  }
+  // both fixed: G(000) = 0, G(111) = 1; unordered pairs suffice since swapping gives the conjugate
+  const nf = fixed.length;
+  for (let i = 0; i < nf; i++) {
+    if (shouldStop && (i & 63) === 0 && shouldStop()) throw new CancelledError();
+    const u0 = fixed[i]!;
+    for (let j = i + 1; j < nf; j++) {
+      const u1 = fixed[j]!;
+      const g = complete(u0, u1, 0x80);
+      if (g >= 0) record(g, u0, u1);
+    }
+    pairs += nf - i - 1;
+  }
+  const list: PackedEmulation[] = [];
+  for (let g = 0; g < 256; g++) if (has[g]) list.push({ target: g, u0: u0s[g]!, u1: u1s[g]! });
+  return { list, pairsExamined: pairs };
+}

@@ -1,0 +1,20 @@
+export {
+  CERTIFICATE_FORMAT,
+  CERTIFICATE_VERSION,
+  networkToCertificate,
+  networkFromCertificate,
+  blockEmulationCertificate,
+  embeddingCertificate,
+  coarseGrainingCertificate,
+  type ReductionNotion,
+  type ReductionCertificate,
+  type CertificateNetwork,
+  type CertificateNode,
+  type CertificateBlock,
+  type CertificateObservable,
+  type BlockEmulationWitnessJson,
+  type EmbeddingWitnessJson,
+  type CoarseGrainingWitnessJson,
+} from "./certificate-format";
+export { verifyCertificate, MAX_VERIFIED_SOURCE_NODES, type VerificationReport } from "./verify-certificate";
+export { composeCertificates } from "./compose-certificates";

@@ -1,0 +1,3 @@
+export { tableFormula } from "./function-formula";
+export { satCycles, satFixedPoints } from "./synchronous-cycles";
+export type { SatCycle, SatCycleSearch, SatOptions } from "./synchronous-cycles";

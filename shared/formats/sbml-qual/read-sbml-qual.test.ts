@@ -1,0 +1,202 @@
+import { readFileSync } from "node:fs";
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { EngineError, ParseError } from "../../engine/errors";
+import type { BooleanNetwork } from "../../engine/network";
+import { compileDefinition, printRuleText, readRuleText } from "../../engine/rules";
+import { modelArb } from "../../engine/rules/rules-arbitrary.test-support";
+import { readSbmlQual } from "./read-sbml-qual";
+import { writeSbmlQual } from "./write-sbml-qual";
+
+const fixture = (name: string) => readFileSync(new URL(`../../../tests/fixtures/sbml/${name}`, import.meta.url), "utf8");
+
+function nextState(net: BooleanNetwork, s: number): number {
+  let t = 0;
+  net.names.forEach((_, i) => {
+    let row = 0;
+    net.regulators[i]!.forEach((r, j) => (row |= ((s >> r) & 1) << j));
+    t |= net.tables[i]![row]! << i;
+  });
+  return t;
+}
+
+function sameDynamics(a: BooleanNetwork, b: BooleanNetwork): void {
+  expect(b.names).toEqual(a.names);
+  for (let s = 0; s < 1 << a.names.length; s++) expect(nextState(b, s)).toBe(nextState(a, s));
+}
+
+/** Synchronous attractors by following every state until it repeats (plain reference). */
+function synchronousAttractors(net: BooleanNetwork): { states: number[]; basin: number }[] {
+  const found = new Map<number, { states: number[]; basin: number }>();
+  for (let s = 0; s < 1 << net.names.length; s++) {
+    const seen = new Set<number>();
+    let x = s;
+    while (!seen.has(x)) (seen.add(x), (x = nextState(net, x)));
+    const cycle = [x];
+    for (let y = nextState(net, x); y !== x; y = nextState(net, y)) cycle.push(y);
+    const key = Math.min(...cycle);
+    const entry = found.get(key) ?? { states: cycle, basin: 0 };
+    entry.basin++;
+    found.set(key, entry);
+  }
+  return [...found.values()];
+}
+
+/** Terminal strongly connected components of the general asynchronous graph (one node flips per step). */
+function asynchronousAttractors(net: BooleanNetwork): number[][] {
+  const n = net.names.length;
+  const size = 1 << n;
+  const succ = (s: number) => {
+    const t = nextState(net, s);
+    const out: number[] = [];
+    for (let i = 0; i < n; i++) if (((s ^ t) >> i) & 1) out.push(s ^ (1 << i));
+    return out;
+  };
+  // Reachability closure is small enough at 1024 states: a state is in a terminal SCC iff every state it reaches
+  // can reach it back.
+  const reach = (s: number) => {
+    const seen = new Set([s]);
+    const stack = [s];
+    while (stack.length) for (const t of succ(stack.pop()!)) if (!seen.has(t)) (seen.add(t), stack.push(t));
+    return seen;
+  };
+  const reachable = Array.from({ length: size }, (_, s) => reach(s));
+  const inTerminal = (s: number) => [...reachable[s]!].every((t) => reachable[t]!.has(s));
+  const done = new Set<number>();
+  const result: number[][] = [];
+  for (let s = 0; s < size; s++) {
+    if (done.has(s) || !inTerminal(s)) continue;
+    const component = [...reachable[s]!].sort((a, b) => a - b);
+    component.forEach((t) => done.add(t));
+    result.push(component);
+  }
+  return result;
+}
+
+const wrap = (species: string, transitions: string) => `<?xml version="1.0" encoding="UTF-8"?>
+<sbml xmlns="http://www.sbml.org/sbml/level3/version1/core" level="3" version="1"
+      xmlns:qual="http://www.sbml.org/sbml/level3/version1/qual/version1" qual:required="true"
+      xmlns:layout="http://www.sbml.org/sbml/level3/version1/layout/version1" layout:required="false">
+  <model id="toy">
+    <listOfCompartments><compartment id="c" constant="true"/></listOfCompartments>
+    <qual:listOfQualitativeSpecies>${species}</qual:listOfQualitativeSpecies>
+    <qual:listOfTransitions>${transitions}</qual:listOfTransitions>
+    <layout:listOfLayouts><layout:layout layout:id="l1"><layout:dimensions layout:width="10" layout:height="10"/>
+      <layout:listOfAdditionalGraphicalObjects><layout:generalGlyph layout:id="g1" layout:reference="A"/></layout:listOfAdditionalGraphicalObjects>
+    </layout:layout></layout:listOfLayouts>
+  </model>
+</sbml>`;
+const sp = (id: string, extra = "") => `<qual:qualitativeSpecies qual:id="${id}" qual:compartment="c" qual:constant="false" qual:maxLevel="1" ${extra}/>`;
+const tr = (id: string, out: string, terms: string, defaultLevel = 0, inputs = "") => `<qual:transition qual:id="${id}">
+  <qual:listOfInputs>${inputs}</qual:listOfInputs>
+  <qual:listOfOutputs><qual:output qual:qualitativeSpecies="${out}" qual:transitionEffect="assignmentLevel"/></qual:listOfOutputs>
+  <qual:listOfFunctionTerms><qual:defaultTerm qual:resultLevel="${defaultLevel}"/>${terms}</qual:listOfFunctionTerms>
+</qual:transition>`;
+const term = (level: number, math: string) =>
+  `<qual:functionTerm qual:resultLevel="${level}"><math xmlns="http://www.w3.org/1998/Math/MathML">${math}</math></qual:functionTerm>`;
+const rel = (op: string, a: string, b: string) => `<apply><${op}/>${a}${b}</apply>`;
+const ci = (x: string) => `<ci> ${x} </ci>`;
+const cn = (v: number) => `<cn type="integer">${v}</cn>`;
+
+describe("readSbmlQual", () => {
+  it("readSbmlQual reads the libSBML-written cell-cycle file into the same rules as the rule-text fixture", () => {
+    const imported = readSbmlQual(fixture("faure-2006-cell-cycle.libsbml.sbml"));
+    const expected = compileDefinition(readRuleText(fixture("faure-2006-cell-cycle.rules")));
+    sameDynamics(expected, compileDefinition(imported.definition));
+    expect(imported.modelId).toBe("faure2006_cell_cycle");
+    expect(imported.initialLevels).toMatchObject({ Rb: 1, p27: 1, Cdh1: 1, CycD: 0, CycB: 0 });
+    expect(imported.definition.nodes[0]).toEqual({ name: "CycD", rule: { kind: "var", name: "CycD" } });
+  });
+
+  it("readSbmlQual of the cell-cycle model gives the published attractors under both update schemes", () => {
+    // Faure, Naldi, Chaouiya, Thieffry, Bioinformatics 2006 (rules and results from memory): synchronous update has
+    // one fixed point (the quiescent state, CycD = 0, with Rb, p27 and Cdh1 on) and one cycle of length 7 (CycD = 1);
+    // asynchronous update has the same fixed point and one complex cyclic attractor.
+    const net = compileDefinition(readSbmlQual(fixture("faure-2006-cell-cycle.libsbml.sbml")).definition);
+    const on = (s: number) => net.names.filter((_, i) => (s >> i) & 1);
+    const sync = synchronousAttractors(net).sort((a, b) => a.states.length - b.states.length);
+    expect(sync.map((a) => a.states.length)).toEqual([1, 7]);
+    expect(on(sync[0]!.states[0]!)).toEqual(["Rb", "p27", "Cdh1"]);
+    expect(sync[1]!.states.every((s) => s & 1)).toBe(true);
+    const asyncAttractors = asynchronousAttractors(net).sort((a, b) => a.length - b.length);
+    expect(asyncAttractors).toHaveLength(2);
+    expect(asyncAttractors[0]).toEqual([sync[0]!.states[0]]);
+    expect(asyncAttractors[1]!.length).toBeGreaterThan(7);
+    expect(asyncAttractors[1]!.every((s) => s & 1)).toBe(true);
+  });
+
+  it("readSbmlQual refuses a multi-valued species and names it", () => {
+    expect(() => readSbmlQual(fixture("multivalued.libsbml.sbml"))).toThrow(/species Kinase has maxLevel 2; Emulant reads Boolean models only/);
+  });
+
+  it("readSbmlQual reads every supported MathML operator and ignores the layout package", () => {
+    const species = ["A", "B", "R1", "R2", "R3", "R4", "R5", "R6", "R7", "R8"].map((x) => sp(x)).join("");
+    const text = wrap(
+      species,
+      [
+        tr("t1", "R1", term(1, rel("implies", rel("eq", ci("A"), cn(1)), rel("eq", ci("B"), cn(1))))),
+        tr("t2", "R2", term(1, rel("neq", ci("A"), ci("B")))),
+        tr("t3", "R3", term(1, rel("gt", ci("A"), ci("B")))),
+        tr("t4", "R4", term(1, rel("leq", ci("A"), cn(0)))),
+        tr("t5", "R5", term(1, `<apply><xor/>${rel("geq", ci("A"), cn(1))}${rel("lt", ci("B"), cn(1))}<true/></apply>`)),
+        tr("t6", "R6", term(1, `<apply><or/><false/>${rel("eq", cn(1), ci("A"))}</apply>`)),
+        // first matching term wins: on when A, else off when B, else the default 1
+        tr("t7", "R7", term(1, rel("eq", ci("A"), cn(1))) + term(0, rel("eq", ci("B"), cn(1))), 1),
+        tr("t8", "R8", term(1, rel("geq", ci("A"), ci("thA"))), 0, `<qual:input qual:id="thA" qual:qualitativeSpecies="A" qual:transitionEffect="none" qual:thresholdLevel="1"/>`),
+      ].join(""),
+    );
+    const net = compileDefinition(readSbmlQual(text).definition);
+    const expected = compileDefinition(
+      readRuleText("A' = A\nB' = B\nR1' = !A | B\nR2' = A ^ B\nR3' = A & !B\nR4' = !A\nR5' = !(A ^ !B)\nR6' = A\nR7' = A | !B\nR8' = A\n"),
+    );
+    sameDynamics(expected, net);
+  });
+
+  it("readSbmlQual keeps constant species and species without a transition at their value", () => {
+    const text = wrap(sp("A", 'qual:initialLevel="1"') + sp("K").replace('constant="false"', 'constant="true"') + sp("B"), tr("tK", "K", term(1, "<true/>")) + tr("tB", "B", term(1, rel("eq", ci("A"), cn(0)))));
+    const model = readSbmlQual(text);
+    expect(printRuleText(model.definition)).toBe("A' = A\nK' = K\nB' = !A\n");
+    expect(model.warnings).toEqual(["species K is constant, so tK is not used"]);
+    expect(model.initialLevels).toEqual({ A: 1 });
+  });
+
+  it("readSbmlQual reports XML syntax errors with line and column, and refuses DTDs", () => {
+    const broken = "<?xml version=\"1.0\"?>\n<sbml level=\"3\">\n  <model>\n</sbml>";
+    try {
+      readSbmlQual(broken);
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(ParseError);
+      expect((e as ParseError).line).toBe(4);
+      expect((e as ParseError).reason).toMatch(/XML syntax error: Expected closing tag 'model'/);
+    }
+    expect(() => readSbmlQual('<?xml version="1.0"?>\n<!DOCTYPE sbml [<!ENTITY x "y">]>\n<sbml/>')).toThrow(/DOCTYPE declarations are not accepted in model files \(line 2, column 1\)/);
+  });
+
+  it("readSbmlQual names the transition when its math is outside the Boolean subset or names an unknown id", () => {
+    const species = sp("A") + sp("B");
+    expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, `<apply><plus/>${ci("A")}${cn(1)}</apply>`))))).toThrow(
+      /transition tB: MathML <plus> is not part of the Boolean subset/,
+    );
+    expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, rel("eq", ci("Z"), cn(1))))))).toThrow(/transition tB: <ci>Z<\/ci> names neither/);
+    expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, ci("A"))) + tr("tB2", "B", term(1, "<true/>"))))).toThrow(
+      /species B is the output of two transitions \(tB and tB2\)/,
+    );
+    expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(3, "<true/>"))))).toThrow(EngineError);
+    expect(() => readSbmlQual('<?xml version="1.0"?><sbml level="2" version="4"><model/></sbml>')).toThrow(/needs SBML Level 3/);
+  });
+
+  it("readSbmlQual refuses files above the size limit before parsing", () => {
+    expect(() => readSbmlQual("<sbml>" + " ".repeat(20 * 1024 * 1024) + "</sbml>")).toThrow(/larger than 20 MiB/);
+  });
+
+  it("readSbmlQual(writeSbmlQual(m)) has the same dynamics as m for random models", () => {
+    fc.assert(
+      fc.property(modelArb(), (model) => {
+        const back = readSbmlQual(writeSbmlQual(model, { modelId: "random model" }));
+        sameDynamics(compileDefinition(model), compileDefinition(back.definition));
+      }),
+      { seed: 4801, numRuns: 200 },
+    );
+  });
+});

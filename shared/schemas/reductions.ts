@@ -1,0 +1,140 @@
+// Reductions: stored certificates and their review. The certificate schema is the edge check for JSON that comes
+// from outside (uploads, the CLI, stored rows); the engine's verifier then re-simulates it.
+import { z } from "zod";
+
+const bits = (what: string) => z.string().regex(/^[01]+$/, `${what} must be a string of 0 and 1`);
+const nodeName = z.string().min(1).max(120);
+
+const CertificateNode = z.object({ name: nodeName, inputs: z.array(nodeName).max(20), table: bits("a truth table") })
+  .refine((n) => n.table.length === 2 ** n.inputs.length, { message: "a node's table must have 2^inputs rows", path: ["table"] });
+const CertificateNetwork = z.object({ nodes: z.array(CertificateNode).min(1).max(2000) });
+
+const base = {
+  format: z.literal("emulant-reduction"),
+  version: z.literal(1),
+  time: z.number().int().min(1).max(64),
+  source: CertificateNetwork,
+  target: CertificateNetwork,
+};
+
+export const Certificate = z.discriminatedUnion("notion", [
+  z.object({
+    ...base,
+    notion: z.literal("block-emulation"),
+    witness: z.object({
+      blocks: z.array(z.object({ target: nodeName, nodes: z.array(nodeName).min(1), zero: bits("a codeword"), one: bits("a codeword") })).min(1),
+      context: z.record(nodeName, z.union([z.literal(0), z.literal(1)])),
+    }),
+  }),
+  z.object({ ...base, notion: z.literal("dynamical-embedding"), witness: z.object({ map: z.record(bits("a target state"), bits("a source state")) }) }),
+  z.object({
+    ...base,
+    notion: z.literal("coarse-graining"),
+    witness: z.object({ observables: z.array(z.object({ target: nodeName, inputs: z.array(nodeName).max(20), table: bits("an observable's table") })).min(1) }),
+  }),
+]);
+export type Certificate = z.infer<typeof Certificate>;
+
+export const ReductionNotion = z.enum(["block-emulation", "dynamical-embedding", "coarse-graining"]);
+export type ReductionNotion = z.infer<typeof ReductionNotion>;
+export const ReviewState = z.enum(["proposed", "approved", "rejected"]);
+export type ReviewState = z.infer<typeof ReviewState>;
+
+const Person = z.object({ id: z.string(), displayName: z.string() }).nullable();
+const ModelRef = z.object({ modelId: z.string(), modelName: z.string(), revisionId: z.string(), revision: z.number().int() });
+
+export const Verification = z.object({ isValid: z.boolean(), message: z.string(), checkedAt: z.string(), checkedBy: Person });
+export type Verification = z.infer<typeof Verification>;
+
+export const ReductionSummary = z.object({
+  id: z.string(),
+  projectId: z.string(),
+  notion: ReductionNotion,
+  timeScale: z.number().int(),
+  source: ModelRef,
+  target: ModelRef.nullable(),
+  targetNodeCount: z.number().int(),
+  targetNames: z.array(z.string()),
+  flags: z.array(z.string()),
+  reviewState: ReviewState,
+  foundBy: Person,
+  foundInRunId: z.string().nullable(),
+  decidedBy: Person,
+  decidedAt: z.string().nullable(),
+  lastVerification: Verification.nullable(),
+  createdAt: z.string(),
+});
+export type ReductionSummary = z.infer<typeof ReductionSummary>;
+export const ReductionList = z.array(ReductionSummary);
+
+export const ReductionEvent = z.object({
+  id: z.string(),
+  kind: z.enum(["approve", "reject", "verify", "reopen"]),
+  actor: Person,
+  comment: z.string(),
+  outcome: z.record(z.string(), z.unknown()).nullable(),
+  createdAt: z.string(),
+});
+export const ReductionComment = z.object({ id: z.string(), parentId: z.string().nullable(), author: Person, body: z.string(), createdAt: z.string() });
+export type ReductionComment = z.infer<typeof ReductionComment>;
+
+export const ReductionDetail = ReductionSummary.extend({
+  certificate: Certificate,
+  events: z.array(ReductionEvent),
+  comments: z.array(ReductionComment),
+});
+export type ReductionDetail = z.infer<typeof ReductionDetail>;
+
+export const ReductionParams = z.object({ projectId: z.uuid(), reductionId: z.uuid() });
+export const ReductionListQuery = z.object({
+  state: ReviewState.optional(),
+  notion: ReductionNotion.optional(),
+  sourceModelId: z.uuid().optional(),
+});
+export const DecisionBody = z.object({ decision: z.enum(["approve", "reject"]), comment: z.string().trim().max(4000).default("") });
+export type DecisionBody = z.input<typeof DecisionBody>;
+export const CommentBody = z.object({ body: z.string().trim().min(1, "a comment cannot be empty").max(4000), parentId: z.uuid().optional() });
+export type CommentBody = z.input<typeof CommentBody>;
+export const SaveTargetBody = z.object({ name: z.string().trim().min(1).max(120) });
+
+/** Bounds of a reduction search, validated before a run is queued. */
+export const SearchBody = z.discriminatedUnion("mode", [
+  z.object({
+    mode: z.literal("given-target"),
+    notion: z.enum(["block-emulation", "dynamical-embedding"]),
+    sourceModelId: z.uuid(),
+    targetModelId: z.uuid(),
+    maxTime: z.number().int().min(1).max(8).default(3),
+    maxBlock: z.number().int().min(1).max(6).default(3),
+    allowContext: z.boolean().default(true),
+  }),
+  z.object({
+    mode: z.literal("discover"),
+    sourceModelId: z.uuid(),
+    maxTargetNodes: z.number().int().min(1).max(4).default(2),
+    maxTime: z.number().int().min(1).max(8).default(1),
+    maxBlock: z.number().int().min(1).max(4).default(2),
+    allowContext: z.boolean().default(true),
+  }),
+  z.object({
+    mode: z.literal("coarse-grain"),
+    sourceModelId: z.uuid(),
+    observe: z.array(z.string().min(1)).min(1).max(8),
+    time: z.number().int().min(1).max(8).default(1),
+  }),
+]);
+export type SearchBody = z.input<typeof SearchBody>;
+
+export const HierarchyGraph = z.object({
+  nodes: z.array(z.object({ modelId: z.string(), name: z.string(), nodeCount: z.number().int(), revision: z.number().int() })),
+  edges: z.array(z.object({
+    source: z.string(),
+    target: z.string(),
+    notion: ReductionNotion,
+    timeScale: z.number().int(),
+    reductionIds: z.array(z.string()),
+    isComposed: z.boolean(),
+    isVerified: z.boolean(),
+  })),
+});
+export type HierarchyGraph = z.infer<typeof HierarchyGraph>;

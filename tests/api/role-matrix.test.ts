@@ -1,0 +1,148 @@
+// The whole role matrix: every API route, called by each kind of caller, answers exactly the status in the table.
+// Each cell runs against its own freshly made project (seed-independent fixtures), so a successful delete in one
+// cell cannot change what the next cell sees.
+import { randomUUID } from "node:crypto";
+import request from "supertest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { newInvitationToken } from "../../server/db/repositories/invitations";
+import { hashPassword } from "../../server/http/password-hash";
+import { SESSION_COOKIE, signSession } from "../../server/http/session";
+import { buildTestApp, testConfig } from "../support/test-app";
+
+const callers = ["anonymous", "nonMember", "viewer", "reviewer", "modeler", "owner", "admin"] as const;
+type Caller = (typeof callers)[number];
+type Statuses = [anonymous: number, nonMember: number, viewer: number, reviewer: number, modeler: number, owner: number, admin: number];
+
+/** What a route may refer to; each cell gets fresh values. */
+interface Fixture {
+  projectId: string;
+  projectName: string;
+  /** A viewer who is not one of the callers, for role changes and removal. */
+  targetUserId: string;
+  /** A pending invitation, for revoking. */
+  invitationId: string;
+  /** Token of a pending invitation to an address without an account, for preview and accept. */
+  token: string;
+  freshEmail: string;
+}
+
+interface Row {
+  method: "get" | "post" | "patch" | "delete";
+  path: string;
+  body?: (f: Fixture) => object;
+  expected: Statuses;
+}
+
+const PASSWORD = "matrix-password-1";
+
+// anonymous, non-member, viewer, reviewer, modeler, owner, admin
+const rows: Row[] = [
+  { method: "get", path: "/api/auth/session", expected: [200, 200, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/auth/sign-up", body: (f) => ({ email: f.freshEmail, displayName: "New person", password: PASSWORD }), expected: [201, 201, 201, 201, 201, 201, 201] },
+  { method: "post", path: "/api/auth/sign-in", body: () => ({ email: emailOf.viewer, password: PASSWORD }), expected: [200, 200, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/auth/sign-out", expected: [204, 204, 204, 204, 204, 204, 204] },
+  { method: "get", path: "/api/users/me", expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "patch", path: "/api/users/me", body: () => ({ displayName: "Renamed in the matrix" }), expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/users/me/password", body: () => ({ currentPassword: "not-the-password", newPassword: "another-password-2" }), expected: [401, 400, 400, 400, 400, 400, 400] },
+  { method: "get", path: "/api/mailbox", expected: [401, 403, 403, 403, 403, 403, 200] },
+  { method: "get", path: "/api/projects", expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects", body: () => ({ name: "Matrix scratch project" }), expected: [401, 201, 201, 201, 201, 201, 201] },
+  { method: "get", path: "/api/projects/{projectId}", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "patch", path: "/api/projects/{projectId}", body: () => ({ name: "Renamed project" }), expected: [401, 404, 403, 403, 403, 200, 200] },
+  { method: "delete", path: "/api/projects/{projectId}", body: (f) => ({ confirmName: f.projectName }), expected: [401, 404, 403, 403, 403, 204, 204] },
+  { method: "get", path: "/api/projects/{projectId}/members", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "patch", path: "/api/projects/{projectId}/members/{targetUserId}", body: () => ({ role: "modeler" }), expected: [401, 404, 403, 403, 403, 200, 200] },
+  { method: "delete", path: "/api/projects/{projectId}/members/{targetUserId}", expected: [401, 404, 403, 403, 403, 204, 204] },
+  { method: "get", path: "/api/projects/{projectId}/invitations", expected: [401, 404, 403, 403, 403, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/invitations", body: (f) => ({ email: f.freshEmail, role: "viewer" }), expected: [401, 404, 403, 403, 403, 201, 201] },
+  { method: "delete", path: "/api/projects/{projectId}/invitations/{invitationId}", expected: [401, 404, 403, 403, 403, 204, 204] },
+  { method: "get", path: "/api/projects/{projectId}/audit", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/invitations/{token}", expected: [200, 200, 200, 200, 200, 200, 200] },
+  // The invitation is for an address without an account: only an anonymous visitor can create that account.
+  { method: "post", path: "/api/invitations/{token}/accept", body: () => ({ displayName: "Invited person", password: PASSWORD }), expected: [200, 403, 403, 403, 403, 403, 403] },
+];
+
+const t = buildTestApp();
+const config = testConfig();
+const userId = {} as Record<Exclude<Caller, "anonymous">, string>;
+const emailOf = {} as Record<Exclude<Caller, "anonymous">, string>;
+const cookieOf = {} as Record<Exclude<Caller, "anonymous">, string>;
+const runId = randomUUID().slice(0, 8);
+
+async function insertUser(label: string, siteRole: "admin" | "member", passwordHash: string): Promise<string> {
+  const [row] = await t.db("users")
+    .insert({ email: `matrix-${label.toLowerCase()}-${runId}@fixture.emulant.test`, display_name: `Matrix ${label}`, site_role: siteRole, password_hash: passwordHash })
+    .returning("id");
+  return (row as { id: string }).id;
+}
+
+async function makeFixture(): Promise<Fixture> {
+  const projectName = `Matrix project ${randomUUID().slice(0, 8)}`;
+  const [project] = await t.db("projects").insert({ name: projectName }).returning("id");
+  const projectId = (project as { id: string }).id;
+  const passwordHash = await t.db("users").select("password_hash").where({ id: userId.viewer }).first();
+  const targetUserId = await insertUser(`target-${randomUUID().slice(0, 8)}`, "member", (passwordHash as { password_hash: string }).password_hash);
+  await t.db("memberships").insert([
+    { project_id: projectId, user_id: userId.viewer, role: "viewer" },
+    { project_id: projectId, user_id: userId.reviewer, role: "reviewer" },
+    { project_id: projectId, user_id: userId.modeler, role: "modeler" },
+    { project_id: projectId, user_id: userId.owner, role: "owner" },
+    { project_id: projectId, user_id: targetUserId, role: "viewer" },
+  ]);
+  const pending = newInvitationToken();
+  const accept = newInvitationToken();
+  const expiresAt = new Date(Date.now() + 3_600_000);
+  const [invitation] = await t.db("invitations")
+    .insert({ project_id: projectId, email: `pending-${randomUUID().slice(0, 8)}@fixture.emulant.test`, role: "viewer", token_hash: pending.tokenHash, invited_by: userId.owner, expires_at: expiresAt })
+    .returning("id");
+  await t.db("invitations").insert({
+    project_id: projectId, email: `invitee-${randomUUID().slice(0, 8)}@fixture.emulant.test`, role: "viewer", token_hash: accept.tokenHash, invited_by: userId.owner, expires_at: expiresAt,
+  });
+  return {
+    projectId,
+    projectName,
+    targetUserId,
+    invitationId: (invitation as { id: string }).id,
+    token: accept.token,
+    freshEmail: `fresh-${randomUUID().slice(0, 8)}@fixture.emulant.test`,
+  };
+}
+
+beforeAll(async () => {
+  const passwordHash = await hashPassword(PASSWORD);
+  for (const caller of callers) {
+    if (caller === "anonymous") continue;
+    userId[caller] = await insertUser(caller, caller === "admin" ? "admin" : "member", passwordHash);
+    emailOf[caller] = `matrix-${caller.toLowerCase()}-${runId}@fixture.emulant.test`;
+    // Tokens are minted directly: the matrix is about authorisation, sign-in itself is tested in accounts.test.ts.
+    cookieOf[caller] = `${SESSION_COOKIE}=${await signSession(config.sessionSecret, userId[caller], 1)}`;
+  }
+});
+afterAll(() => t.close());
+
+function fill(path: string, f: Fixture): string {
+  return path.replace(/\{(\w+)\}/g, (_m, key: string) => String(f[key as keyof Fixture]));
+}
+
+describe("role matrix", () => {
+  it("has exactly one row per method and path", () => {
+    const keys = rows.map((r) => `${r.method} ${r.path}`);
+    expect(new Set(keys).size).toBe(keys.length);
+  });
+
+  for (const row of rows) {
+    it(`${row.method.toUpperCase()} ${row.path} answers ${row.expected.join("/")} for ${callers.join("/")}`, async () => {
+      const actual: Record<string, number> = {};
+      const expected: Record<string, number> = {};
+      for (const [i, caller] of callers.entries()) {
+        const f = await makeFixture();
+        let req = request(t.app)[row.method](fill(row.path, f));
+        if (caller !== "anonymous") req = req.set("Cookie", cookieOf[caller]);
+        const res = row.body ? await req.send(row.body(f)) : await req;
+        actual[caller] = res.status;
+        expected[caller] = row.expected[i]!;
+      }
+      expect(actual).toEqual(expected);
+    });
+  }
+});

@@ -1,0 +1,60 @@
+// Benchmark of the reductions engine (`npm run bench:reductions`): given-target block-emulation searches on planted
+// sources of 16, 24, 32 and 64 nodes (m = 3, t <= 3, blocks of at most 3 nodes), dynamical embedding and
+// coarse-graining at 16 and 20 nodes. Targets: each search under 60 s; embedding and coarse-graining at 20 nodes
+// under 10 s. The machine has 2 cores shared with other work, so figures are noisy.
+import seedrandom from "seedrandom";
+import {
+  networkFromSuccessors,
+  plantEmulation,
+  powerTable,
+  randomNetwork,
+  searchBlockEmulation,
+  successorsOfNetwork,
+} from "../../shared/engine/emulation";
+import { findDynamicalEmbedding } from "../../shared/engine/embedding";
+import { coarseGrain, nodeObservable } from "../../shared/engine/coarse-graining";
+import { blockEmulationCertificate, embeddingCertificate, verifyCertificate } from "../../shared/engine/certificates";
+
+const rows: string[][] = [];
+const time = <T>(f: () => T): [T, number] => {
+  const t0 = performance.now();
+  const out = f();
+  return [out, (performance.now() - t0) / 1000];
+};
+const verdict = (seconds: number, limit: number) => (seconds < limit ? "ok" : "OVER");
+
+const rng = seedrandom("reductions-bench");
+for (const n of [16, 24, 32, 64]) {
+  for (const t of [1, 2, 3]) {
+    const G = randomNetwork(rng, 3, 2, "g");
+    const { source } = plantEmulation(rng, G, n, 3);
+    // F emulates G at time 1, hence G^t at time t: the search must rule out the smaller time scales first.
+    const H = networkFromSuccessors(["h0", "h1", "h2"], powerTable(successorsOfNetwork(G), t));
+    const [r, s] = time(() => searchBlockEmulation(source, H, { maxTime: 3, maxBlock: 3 }));
+    const valid = r.found ? verifyCertificate(blockEmulationCertificate(source, H, r.witness!)).valid : "-";
+    rows.push([`emulate n=${n} target=G^${t}`, s.toFixed(2), verdict(s, 60), `found=${r.found} at t=${r.witness?.time ?? "-"} verified=${valid} sat=${r.satQueries}`]);
+  }
+  const unrelated = randomNetwork(rng, 3, 2, "u");
+  const noise = randomNetwork(rng, n, 2);
+  const [r, s] = time(() => searchBlockEmulation(noise, unrelated, { maxTime: 3, maxBlock: 3 }));
+  rows.push([`emulate n=${n} random source`, s.toFixed(2), verdict(s, 60), `found=${r.found} at t=${r.witness?.time ?? "-"} sat=${r.satQueries}`]);
+}
+
+for (const n of [16, 20]) {
+  const G = randomNetwork(rng, 4, 2, "g");
+  const { source } = plantEmulation(rng, G, n, 3);
+  const [r, s] = time(() => findDynamicalEmbedding(source, G, 2));
+  const valid = r.found ? verifyCertificate(embeddingCertificate(source, G, 2, r.map!)).valid : "-";
+  rows.push([`embed n=${n} m=4 t=2`, s.toFixed(2), n === 20 ? verdict(s, 10) : "", `found=${r.found} verified=${valid}`]);
+  const random = randomNetwork(rng, n, 3);
+  const [r2, s2] = time(() => findDynamicalEmbedding(random, G, 1));
+  rows.push([`embed n=${n} random source m=4 t=1`, s2.toFixed(2), n === 20 ? verdict(s2, 10) : "", `found=${r2.found}`]);
+  const F = randomNetwork(rng, n, 3);
+  const [c, s3] = time(() => coarseGrain(F, [0, 1, 2].map((v) => nodeObservable(F, v)), 1));
+  rows.push([`coarse-grain n=${n} 3 observables`, s3.toFixed(2), n === 20 ? verdict(s3, 10) : "", `closes=${c.closes} groups=${c.groups}`]);
+}
+
+const width = [0, 1, 2, 3].map((i) => Math.max(...rows.map((r) => r[i]!.length), 8));
+console.log(["case", "seconds", "target", "result"].map((h, i) => h.padEnd(width[i]!)).join("  "));
+for (const r of rows) console.log(r.map((c, i) => c.padEnd(width[i]!)).join("  "));
+console.log("(2 shared cores: timings are noisy)");
