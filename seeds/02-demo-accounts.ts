@@ -7,7 +7,7 @@ export const DEMO_PROJECT_ID = "00000000-0000-4000-8000-000000000001";
 export const DEMO_PASSWORD = "demo-password";
 
 const people = [
-  { email: "admin@demo.emulant.test", displayName: "Ada Quillon (site admin)", siteRole: "admin", projectRole: null },
+  { email: "admin@demo.emulant.test", displayName: "Ada Quillon", siteRole: "admin", projectRole: null },
   { email: "owner@demo.emulant.test", displayName: "Oriel Fenwick", siteRole: "member", projectRole: "owner" },
   { email: "modeler@demo.emulant.test", displayName: "Mira Castellan", siteRole: "member", projectRole: "modeler" },
   { email: "reviewer@demo.emulant.test", displayName: "Rowan Ashdown", siteRole: "member", projectRole: "reviewer" },

@@ -10,6 +10,7 @@ import type { Config } from "./config";
 import { errorHandler, notFound } from "./http/errors";
 import { requestLog } from "./http/request-log";
 import { healthRouter } from "./routes/health";
+import { automataRouter } from "./routes/automata";
 import { authenticate } from "./http/auth";
 import { originCheck } from "./http/origin-check";
 import { defaultSignInLimits, type SignInLimits } from "./http/rate-limits";
@@ -84,6 +85,7 @@ export function createApp(deps: AppDeps): Express {
   api.use("/notifications", notificationsRouter(deps));
   api.use("/projects/:projectId/reductions", reductionsRouter(deps));
   api.use("/projects/:projectId/model-hierarchy", modelHierarchyRouter(deps));
+  api.use("/automata", automataRouter(deps));
   api.use(notFound);
   app.use("/api", api);
 

@@ -3,11 +3,14 @@ import { z } from "zod";
 
 /** Block sizes up to this are computed inline by a request (the full hierarchy takes under 5 s); above, by a run. */
 export const INLINE_MAX_BLOCK = 11;
-/** The largest block size a stored hierarchy may have. */
-export const MAX_HIERARCHY_BLOCK = 20;
+/** The largest block size a hierarchy may have (the engine's bound for a background job). */
+export const MAX_HIERARCHY_BLOCK = 18;
 
-/** "block": F runs exactly k steps per step of G (t = k, the classical definition); "any": any 1 <= t <= k. */
-export const TimeMode = z.enum(["block", "any"]);
+/**
+ * "block": F runs exactly k steps per step of G (t = k, the classical definition). The table also admits "any"
+ * (any 1 <= t <= k) for when the engine's hierarchy covers other time scales; the API accepts only "block" today.
+ */
+export const TimeMode = z.enum(["block"], { error: 'timeMode must be "block" (t = k steps of the emulator per step); other time scales are not computed yet' });
 export type TimeMode = z.infer<typeof TimeMode>;
 
 const intParam = (name: string, min: number, max: number) =>
@@ -22,7 +25,11 @@ const ruleParam = (name: string) => intParam(name, 0, 255).describe(`${name}: an
 export const HierarchyParameters = z.object({
   maxBlock: intParam("maxBlock", 1, MAX_HIERARCHY_BLOCK).default(INLINE_MAX_BLOCK),
   timeMode: TimeMode.default("block"),
-  radius: intParam("radius", 1, 1).default(1),
+  radius: z
+    .string()
+    .refine((v) => v === "1", "radius must be 1: hierarchies are computed between elementary (radius-1) rules")
+    .transform(Number)
+    .default(1),
 });
 export type HierarchyParameters = z.infer<typeof HierarchyParameters>;
 
@@ -40,7 +47,12 @@ export const RuleQuery = HierarchyParameters.strict();
 export const WitnessQuery = HierarchyParameters.extend({ source: ruleParam("source"), target: ruleParam("target") }).strict();
 
 const Word = z.string().regex(/^[01]+$/);
-export const Witness = z.object({ time: z.number().int().min(1), encoding: z.object({ "0": Word, "1": Word }) });
+export const Witness = z.object({
+  time: z.number().int().min(1),
+  encoding: z.object({ "0": Word, "1": Word }),
+  /** Present when the pair holds only through a chain source, ..., target whose witnesses were composed. */
+  via: z.array(z.number().int()).optional(),
+});
 export type Witness = z.infer<typeof Witness>;
 
 /** One pair of the relation: `source` emulates `target`, first with block size `minBlock`. */
@@ -49,6 +61,8 @@ export const HierarchyPair = z.object({
   target: z.number().int(),
   minBlock: z.number().int(),
   time: z.number().int(),
+  /** True when the pair holds only by composing other pairs (its block size is then a product). */
+  composed: z.boolean(),
 });
 export type HierarchyPair = z.infer<typeof HierarchyPair>;
 
@@ -74,7 +88,10 @@ export const HierarchySummary = z.object({
 export type HierarchySummary = z.infer<typeof HierarchySummary>;
 
 export const Hierarchy = HierarchySummary.extend({
-  /** Every pair that holds for some block size up to maxBlock, the identity pairs (k = 1) included. */
+  /**
+   * Every pair that holds for some block size up to maxBlock, the identity pairs (k = 1) included, plus the pairs
+   * of the transitive closure that hold only through composition (composed: true, block size a product).
+   */
   pairs: z.array(HierarchyPair),
   /** Rules that emulate no rule but themselves and their complement-conjugate with any 2 <= k <= maxBlock. */
   emulateNothing: z.array(z.number().int()),

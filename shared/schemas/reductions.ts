@@ -138,3 +138,30 @@ export const HierarchyGraph = z.object({
   })),
 });
 export type HierarchyGraph = z.infer<typeof HierarchyGraph>;
+
+/** What a reduction-search run carries: the validated search plus the networks it runs on, fixed at submission. */
+export const ReductionSearchParams = z.object({
+  search: SearchBody,
+  sourceRevisionId: z.uuid(),
+  targetRevisionId: z.uuid().nullable(),
+  sourceRuleText: z.string().min(1),
+  targetRuleText: z.string().nullable(),
+});
+export type ReductionSearchParams = z.infer<typeof ReductionSearchParams>;
+
+/** One proven statement a search returns; the run's merge step stores each as a proposed reduction. */
+export const SearchFinding = z.object({ certificate: Certificate, flags: z.array(z.string()), rank: z.number().int() });
+export type SearchFinding = z.infer<typeof SearchFinding>;
+
+export const ReductionSearchResult = z.object({
+  mode: z.enum(["given-target", "discover", "coarse-grain"]),
+  found: z.boolean(),
+  findings: z.array(SearchFinding),
+  /** Discover: how many distinct targets were found in all (only the best are kept as findings). */
+  distinctTargets: z.number().int(),
+  /** Coarse-graining: size of the coarsest compatible refinement of the observables. */
+  groups: z.number().int().nullable(),
+  bounds: z.record(z.string(), z.unknown()),
+  reductionIds: z.array(z.string()).default([]),
+});
+export type ReductionSearchResult = z.infer<typeof ReductionSearchResult>;

@@ -1,20 +1,63 @@
 // One data router for the whole app; each route module composes features for one screen.
 import { createBrowserRouter, RouterProvider } from "react-router-dom";
 import { AppShell } from "@/components/layout/app-shell";
+import { RequireSignIn } from "@/features/accounts/components/require-sign-in";
+import { UserMenu } from "@/features/accounts/components/user-menu";
+import { NotificationBell } from "@/features/runs/components/notification-bell";
+import { AcceptInvitationRoute } from "./routes/accept-invitation";
 import { AutomataRoute } from "./routes/automata";
 import { AutomataRuleRoute } from "./routes/automata-rule";
 import { HomeRoute } from "./routes/home";
+import { MailboxRoute } from "./routes/mailbox";
+import { ModelDetailRoute } from "./routes/model-detail";
+import { ModelNewRoute } from "./routes/model-new";
 import { NotFoundRoute } from "./routes/not-found";
+import { ProfileRoute } from "./routes/profile";
+import { ProjectAuditRoute } from "./routes/project-audit";
+import { ProjectLayoutRoute } from "./routes/project-layout";
+import { ProjectListRoute } from "./routes/project-list";
+import { ProjectMembersRoute } from "./routes/project-members";
+import { ProjectModelsRoute } from "./routes/project-models";
+import { ProjectOverviewRoute } from "./routes/project-overview";
+import { ProjectRunsRoute } from "./routes/project-runs";
+import { RunDetailRoute } from "./routes/run-detail";
 import { RouteErrorBoundary } from "./routes/route-error";
+import { SignInRoute } from "./routes/sign-in";
+import { SignUpRoute } from "./routes/sign-up";
 
 export const routes = [
   {
-    element: <AppShell />,
+    element: <AppShell accountSlot={<UserMenu />} notificationSlot={<NotificationBell />} />,
     errorElement: <RouteErrorBoundary />,
     children: [
       { index: true, element: <HomeRoute /> },
       { path: "automata", element: <AutomataRoute /> },
       { path: "automata/rules/:rule", element: <AutomataRuleRoute /> },
+      { path: "sign-in", element: <SignInRoute /> },
+      { path: "sign-up", element: <SignUpRoute /> },
+      { path: "invitations/:token", element: <AcceptInvitationRoute /> },
+      {
+        element: <RequireSignIn />,
+        children: [
+          { path: "profile", element: <ProfileRoute /> },
+          { path: "mailbox", element: <MailboxRoute /> },
+          { path: "projects", element: <ProjectListRoute /> },
+          {
+            path: "projects/:projectId",
+            element: <ProjectLayoutRoute />,
+            children: [
+              { index: true, element: <ProjectOverviewRoute /> },
+              { path: "models", element: <ProjectModelsRoute /> },
+              { path: "models/new", element: <ModelNewRoute /> },
+              { path: "models/:modelId", element: <ModelDetailRoute /> },
+              { path: "runs", element: <ProjectRunsRoute /> },
+              { path: "runs/:runId", element: <RunDetailRoute /> },
+              { path: "members", element: <ProjectMembersRoute /> },
+              { path: "audit", element: <ProjectAuditRoute /> },
+            ],
+          },
+        ],
+      },
       { path: "*", element: <NotFoundRoute /> },
     ],
   },

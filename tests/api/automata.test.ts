@@ -15,7 +15,7 @@ let viewerId: string;
 beforeAll(async () => {
   viewer = await signInAs(t.app, "viewer@demo.emulant.test");
   viewerId = (await viewer.get("/api/users/me")).body.data.id as string;
-  for (const maxBlock of [4, 11, 19]) await deleteHierarchy(t.db, { maxBlock, timeMode: "block", radius: 1 });
+  for (const maxBlock of [4, 11, 17]) await deleteHierarchy(t.db, { maxBlock, timeMode: "block", radius: 1 });
 });
 afterAll(() => t.close());
 
@@ -63,18 +63,18 @@ describe("GET /api/automata/hierarchy", () => {
   });
 
   it("GET /api/automata/hierarchy answers 404 HIERARCHY_NOT_COMPUTED above block size 11 when no run has stored it", async () => {
-    const res = await viewer.get("/api/automata/hierarchy?maxBlock=19");
+    const res = await viewer.get("/api/automata/hierarchy?maxBlock=17");
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe("HIERARCHY_NOT_COMPUTED");
     expect(res.body.error.message).toContain("background");
-    expect(res.body.error.details).toMatchObject({ maxBlock: 19, inlineMaxBlock: 11 });
+    expect(res.body.error.details).toMatchObject({ maxBlock: 17, inlineMaxBlock: 11 });
   });
 
   it("GET /api/automata/hierarchy rejects malformed parameters with 400 naming the field", async () => {
     const cases: [string, string][] = [
       ["maxBlock=abc", "query.maxBlock: maxBlock must be a whole number"],
       ["maxBlock=0", "query.maxBlock: maxBlock must be at least 1"],
-      ["maxBlock=99", "query.maxBlock: maxBlock must be at most 20"],
+      ["maxBlock=99", "query.maxBlock: maxBlock must be at most 18"],
       ["maxBlock=5&timeMode=sometimes", "query.timeMode"],
       ["maxBlock=5&radius=2", "query.radius"],
       ["maxBlock=5&colour=red", "colour"],

@@ -268,8 +268,8 @@ describe("analyses", () => {
     const g1 = data.attractors[0].states[0] as string;
     expect(data.nodes.filter((_: string, i: number) => g1[i] === "1")).toEqual(["Cdh1", "Sic1"]);
     // Stored per revision: the second call reads the cache.
-    const [{ count }] = await t.db("model_analyses as a").join("model_revisions as r", "r.id", "a.revision_id").where("r.model_id", model.id).count<{ count: string }[]>("* as count");
-    expect(Number(count)).toBe(1);
+    const [cached] = await t.db("model_analyses as a").join("model_revisions as r", "r.id", "a.revision_id").where("r.model_id", model.id).count<{ count: string }[]>("* as count");
+    expect(Number(cached!.count)).toBe(1);
   });
 
   it("labels an oscillating marker with ~ and answers unknown markers with 400", async () => {

@@ -24,8 +24,14 @@ interface Fixture {
   /** Token of a pending invitation to an address without an account, for preview and accept. */
   token: string;
   freshEmail: string;
+  /** A queued run (read, cancel, delete) and a failed one (retry). */
+  runId: string;
+  failedRunId: string;
+  /** A two-node model with one revision that was uploaded from a file. */
+  modelId: string;
 }
 
+/** One route; `path` may name any Fixture field in braces ({projectId}), which each cell fills from its own fixture. */
 interface Row {
   method: "get" | "post" | "patch" | "delete";
   path: string;
@@ -60,6 +66,35 @@ const rows: Row[] = [
   { method: "get", path: "/api/invitations/{token}", expected: [200, 200, 200, 200, 200, 200, 200] },
   // The invitation is for an address without an account: only an anonymous visitor can create that account.
   { method: "post", path: "/api/invitations/{token}/accept", body: () => ({ displayName: "Invited person", password: PASSWORD }), expected: [200, 403, 403, 403, 403, 403, 403] },
+  { method: "get", path: "/api/projects/{projectId}/runs", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/runs", body: () => ({ kind: "sleep-count", params: { itemCount: 10, shardCount: 1 } }), expected: [401, 404, 403, 403, 201, 201, 201] },
+  { method: "get", path: "/api/projects/{projectId}/runs/{runId}", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/runs/{runId}/cancel", expected: [401, 404, 403, 403, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/runs/{failedRunId}/retry", expected: [401, 404, 403, 403, 200, 200, 200] },
+  { method: "delete", path: "/api/projects/{projectId}/runs/{runId}", expected: [401, 404, 403, 403, 204, 204, 204] },
+  { method: "get", path: "/api/projects/{projectId}/models", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/models", body: () => ({ name: "Matrix model", ruleText: "A' = !B\nB' = !A\n" }), expected: [401, 404, 403, 403, 201, 201, 201] },
+  { method: "post", path: "/api/projects/{projectId}/models/validate", body: () => ({ ruleText: "A' = !A\n" }), expected: [401, 404, 200, 200, 200, 200, 200] },
+  // A JSON body carries no file: callers allowed to write get 400, the others are stopped before reading it.
+  { method: "post", path: "/api/projects/{projectId}/models/upload", body: () => ({ name: "No file" }), expected: [401, 404, 403, 403, 400, 400, 400] },
+  { method: "post", path: "/api/projects/{projectId}/models/generate", body: () => ({ name: "Matrix ring", generator: { kind: "eca", rule: 30, radius: 1, cells: 6 } }), expected: [401, 404, 403, 403, 201, 201, 201] },
+  { method: "get", path: "/api/projects/{projectId}/models/{modelId}", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/models/{modelId}/revisions", body: () => ({ ruleText: "A' = B\nB' = A\n" }), expected: [401, 404, 403, 403, 201, 201, 201] },
+  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/export?format=rules", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/original", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/attractors", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/perturbation", body: () => ({ knockOut: ["A"] }), expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/trajectory", body: () => ({ initial: "01" }), expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/structure", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/notifications", expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/notifications/read", body: () => ({ all: true }), expected: [401, 200, 200, 200, 200, 200, 200] },
+  // automata: any signed-in user reads (block size 3 is computed inline in well under a second)
+  { method: "get", path: "/api/automata/hierarchies", expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/automata/hierarchy?maxBlock=3", expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/automata/rules/18?maxBlock=3", expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/automata/witness?source=18&target=90&maxBlock=3", expected: [401, 200, 200, 200, 200, 200, 200] },
 ];
 
 const t = buildTestApp();
@@ -98,7 +133,15 @@ async function makeFixture(): Promise<Fixture> {
   await t.db("invitations").insert({
     project_id: projectId, email: `invitee-${randomUUID().slice(0, 8)}@fixture.emulant.test`, role: "viewer", token_hash: accept.tokenHash, invited_by: userId.owner, expires_at: expiresAt,
   });
+  // Runs without shards: no worker ever picks them up, so their state is what the cell expects.
+  const run = { project_id: projectId, kind: "sleep-count", params: JSON.stringify({ itemCount: 1 }), params_hash: "matrix", time_limit_seconds: 60, shard_count: 0 };
+  const [queuedRun] = await t.db("runs").insert({ ...run, state: "queued" }).returning("id");
+  const [failedRun] = await t.db("runs").insert({ ...run, state: "failed", error: JSON.stringify({ code: "MATRIX", message: "failed for the matrix" }) }).returning("id");
+  const modelId = await insertMatrixModel(projectId);
   return {
+    modelId,
+    runId: (queuedRun as { id: string }).id,
+    failedRunId: (failedRun as { id: string }).id,
     projectId,
     projectName,
     targetUserId,
@@ -106,6 +149,21 @@ async function makeFixture(): Promise<Fixture> {
     token: accept.token,
     freshEmail: `fresh-${randomUUID().slice(0, 8)}@fixture.emulant.test`,
   };
+}
+
+async function insertMatrixModel(projectId: string): Promise<string> {
+  const toggle = { nodes: [{ name: "A", rule: { kind: "not", arg: { kind: "var", name: "B" } } }, { name: "B", rule: { kind: "not", arg: { kind: "var", name: "A" } } }] };
+  const [model] = await t.db("models").insert({ project_id: projectId, name: "Matrix toggle", created_by: userId.modeler }).returning("id");
+  const modelId = (model as { id: string }).id;
+  const [revision] = await t.db("model_revisions")
+    .insert({
+      model_id: modelId, revision: 1, definition: JSON.stringify(toggle), rule_text: "A' = !B\nB' = !A\n", node_count: 2, source: "rules", created_by: userId.modeler,
+      network_summary: JSON.stringify({ nodes: ["A", "B"], edgeCount: 2, inputs: [], thresholdNodes: [] }),
+    })
+    .returning("id");
+  const bytes = Buffer.from("A' = !B\nB' = !A\n");
+  await t.db("model_files").insert({ revision_id: (revision as { id: string }).id, file_name: "toggle.rules", media_type: "text/plain", bytes, size_bytes: bytes.length });
+  return modelId;
 }
 
 beforeAll(async () => {
@@ -121,7 +179,10 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 function fill(path: string, f: Fixture): string {
-  return path.replace(/\{(\w+)\}/g, (_m, key: string) => String(f[key as keyof Fixture]));
+  return path.replace(/\{(\w+)\}/g, (_m, key: string) => {
+    if (!(key in f)) throw new Error(`No fixture value for {${key}} in ${path}`);
+    return String(f[key as keyof Fixture]);
+  });
 }
 
 describe("role matrix", () => {

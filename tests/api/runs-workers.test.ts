@@ -25,6 +25,8 @@ const log = createLogger(config);
 let db: Knex;
 const queue = lazyRunQueue(config.DATABASE_URL, log);
 const children: ChildProcess[] = [];
+/** Node pids of the worker processes (npx runs tsx, which runs node: not the spawned pid). */
+const workerPids: number[] = [];
 
 function startWorkerProcess(threads: number): Promise<ChildProcess> {
   const child = spawn("npx", ["tsx", "server/worker-main.ts"], {
@@ -37,17 +39,15 @@ function startWorkerProcess(threads: number): Promise<ChildProcess> {
     let out = "";
     child.stdout!.on("data", (d: Buffer) => {
       out += d.toString();
-      if (out.includes("is taking runs")) resolve(child);
+      const started = /Emulant worker (\d+) is taking runs/.exec(out);
+      if (started) {
+        workerPids.push(Number(started[1]));
+        resolve(child);
+      }
     });
     child.stderr!.on("data", (d: Buffer) => void (out += d.toString()));
     child.on("exit", (code) => reject(new Error(`worker exited early (${code}): ${out}`)));
   });
-}
-
-/** The pid the worker reports in run_shards.held_by (npx runs tsx, which runs node: the pid is a grandchild's). */
-async function workerPids(): Promise<string[]> {
-  const rows = await db("run_shards").whereNotNull("held_by").distinct("held_by");
-  return rows.map((r) => String(r.held_by).split(":").pop()!);
 }
 
 async function waitFor<T>(what: string, probe: () => Promise<T | null | undefined | false>, timeoutMs = 60_000): Promise<T> {
@@ -101,8 +101,12 @@ beforeAll(async () => {
 
 afterAll(async () => {
   for (const c of children) killTree(c, "SIGKILL");
-  for (const pid of await workerPids().catch(() => [])) {
-    try { process.kill(Number(pid), "SIGKILL"); } catch { /* gone */ }
+  for (const pid of workerPids) {
+    try {
+      process.kill(pid, "SIGKILL");
+    } catch {
+      // already gone
+    }
   }
   await queue.stop();
   await db.destroy();
@@ -123,7 +127,8 @@ describe("sharded runs across worker processes", () => {
     // Wait until some worker holds a shard that has checkpointed part of its range, then kill that worker.
     const victim = await waitFor("a checkpointed shard", async () => {
       const s = await db("run_shards").where({ run_id: run.id, state: "running" }).whereNotNull("cursor").first();
-      return s ? Number(String(s.held_by).split(":").pop()) : null;
+      const pid = s ? Number(String(s.held_by).split(":").pop()) : null;
+      return pid && workerPids.includes(pid) ? pid : null;
     });
     const beforeKill = await db("run_shards").where({ run_id: run.id, state: "running" }).whereRaw("held_by like ?", [`%:${victim}`]).select("id");
     expect(beforeKill.length).toBeGreaterThan(0);
@@ -156,6 +161,7 @@ describe("a PostgreSQL restart during a run", () => {
 
   it("the run completes after the restart and the shards finished before it keep their stored results", async () => {
     expect(fs.existsSync(path.join(dataDir, "PG_VERSION")), `test cluster at ${dataDir}`).toBe(true);
+    if (!children.some((c) => c.exitCode === null && c.signalCode === null)) await startWorkerProcess(2);
     const run = await start({ itemCount: 1600, shardCount: 8, delayMsPerItem: 6 });
     const doneBefore = await waitFor("a finished shard", async () => {
       const rows = await db("run_shards").where({ run_id: run.id, state: "done" }).select("id", "partial");

@@ -6,6 +6,7 @@ import { loadConfig } from "../../server/config";
 import { createDb, type Knex } from "../../server/db/knex";
 import { createLogger } from "../../server/logger";
 import { createFakeMailer } from "../../server/mail/mailer";
+import { lazyRunQueue } from "../../server/jobs/run-queue";
 
 export interface TestApp {
   app: ReturnType<typeof createApp>;
@@ -19,13 +20,15 @@ export function testConfig() {
 }
 
 /** Mail always goes to the local SMTP fake (started on the first message), whatever SMTP_URL says. */
-export function buildTestApp(overrides: Pick<AppDeps, "signInLimits"> = {}): TestApp {
+export function buildTestApp(overrides: Pick<AppDeps, "signInLimits" | "runQueue"> = {}): TestApp {
   const config = testConfig();
   const db = createDb(config.DATABASE_URL, 5);
   const log = createLogger(config);
   const mailer = createFakeMailer(db, log);
-  const app = createApp({ db, log, config, mailer, ...overrides });
-  return { app, db, close: async () => { await mailer.close(); await db.destroy(); } };
+  // Run jobs go to pg-boss on the test database; the sender opens its connections only when a run is started.
+  const runQueue = overrides.runQueue ?? lazyRunQueue(config.DATABASE_URL, log);
+  const app = createApp({ db, log, config, mailer, ...overrides, runQueue });
+  return { app, db, close: async () => { await runQueue.stop(); await mailer.close(); await db.destroy(); } };
 }
 
 export interface RunningServer extends TestApp { baseUrl: string; server: Server }

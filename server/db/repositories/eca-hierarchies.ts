@@ -68,9 +68,9 @@ export async function listHierarchies(db: Knex): Promise<StoredHierarchy[]> {
 export async function hierarchyPairs(db: Knex, hierarchyId: string): Promise<HierarchyPair[]> {
   const rows = (await db("eca_hierarchy_pairs")
     .where({ hierarchy_id: hierarchyId })
-    .select("source", "target", "min_block", db.raw("(witness->>'time')::int as time"))
-    .orderBy([{ column: "source" }, { column: "target" }])) as (PairRow & { time: number })[];
-  return rows.map((r) => ({ source: r.source, target: r.target, minBlock: r.min_block, time: r.time }));
+    .select("source", "target", "min_block", db.raw("(witness->>'time')::int as time"), db.raw("(witness->'via') is not null as composed"))
+    .orderBy([{ column: "source" }, { column: "target" }])) as (PairRow & { time: number; composed: boolean })[];
+  return rows.map((r) => ({ source: r.source, target: r.target, minBlock: r.min_block, time: r.time, composed: r.composed }));
 }
 
 function withWitness(r: PairRow): HierarchyPairWithWitness {

@@ -49,7 +49,20 @@ function buildChunkTable(rule: RuleTable, steps: number): Uint8Array {
   const r = rule.radius;
   const oneIn = 8 + 2 * r;
   const one = new Uint8Array(1 << oneIn);
-  for (let w = 0; w < one.length; w++) one[w] = stepPackedWord(rule, w) & 255;
+  if (r === 1) {
+    for (let w = 0; w < one.length; w++) one[w] = stepPackedWord(rule, w) & 255;
+  } else {
+    // wide neighbourhoods have too many minterms for the bit-parallel step; index the table cell by cell
+    for (let w = 0; w < one.length; w++) {
+      let out = 0;
+      for (let i = 0; i < 8; i++) {
+        let idx = 0;
+        for (let j = 0; j <= 2 * r; j++) idx = (idx << 1) | ((w >>> (i + j)) & 1);
+        out |= rule.table[idx]! << i;
+      }
+      one[w] = out;
+    }
+  }
   const oneMask = one.length - 1;
   const bits = 8 + 2 * r * steps;
   const table = new Uint8Array(1 << bits);

@@ -22,7 +22,7 @@ function* setPartitions(N: number): Generator<number[]> {
   if (N > 0) yield* rec(1, 0);
 }
 
-const sameGroups = (a: ArrayLike<number>, b: ArrayLike<number>) => {
+const sameGroups = (a: ArrayLike<unknown>, b: ArrayLike<unknown>) => {
   for (let x = 0; x < a.length; x++) for (let y = 0; y < a.length; y++) if ((a[x] === a[y]) !== (b[x] === b[y])) return false;
   return true;
 };

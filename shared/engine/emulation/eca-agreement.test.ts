@@ -69,7 +69,8 @@ describe("block emulation on elementary automata", () => {
           agreeing += expected.length;
         }
       }
-      expect(agreeing).toBeGreaterThan(256);
+      // The comparison must have met some emulations, not only empty sets.
+      expect(agreeing).toBeGreaterThan(100);
     });
   }
 });

@@ -7,6 +7,12 @@ import type { BlockEmulationWitness } from "./block-witness";
 import { EmulationSatInstance } from "./emulation-sat";
 import { successorsOfNetwork } from "./network-from-successors";
 import { shardRange, type UnitRange } from "./search-units";
+import { cycleLengthCounts, cyclesFit } from "./cycle-prefilter";
+import { powerTable, successorTable } from "./network-step";
+import { enumerateEncodings, enumerationUnitCount, type EnumerationBounds } from "./encoding-enumeration";
+
+/** Sources up to this size are first checked against G's attractors (F^t is tabulated). */
+const PREFILTER_MAX_NODES = 16;
 
 export interface EmulationBounds {
   readonly maxTime: number;
@@ -15,7 +21,15 @@ export interface EmulationBounds {
   readonly allowedNodes?: readonly number[];
   /** May source nodes stay outside the blocks with a fixed value? (default true) */
   readonly contextAllowed?: boolean;
+  /**
+   * "enumeration" walks all encodings of the tabulated state space (sources up to 20 nodes, targets up to 4);
+   * "sat" asks MiniSat; "auto" (default) enumerates for sources up to 12 nodes and targets up to 4.
+   */
+  readonly method?: "auto" | "sat" | "enumeration";
 }
+
+/** Sources up to this size are searched by enumeration under method "auto". */
+const AUTO_ENUMERATION_MAX_NODES = 12;
 
 export interface SearchControl {
   readonly onProgress?: (fraction: number, phase: string) => void;
@@ -34,14 +48,21 @@ export interface EmulationSearchResult {
   readonly witness: BlockEmulationWitness | null;
   /** The unit holding the witness. */
   readonly unit: number | null;
-  readonly bounds: Required<Omit<EmulationBounds, "allowedNodes">> & { readonly allowedNodes: number[] };
+  readonly bounds: Required<Omit<EmulationBounds, "allowedNodes" | "method">> & { readonly allowedNodes: number[]; readonly method: "sat" | "enumeration" };
   readonly range: UnitRange;
   readonly totalUnits: number;
   readonly satQueries: number;
 }
 
-export function emulationUnitCount(source: BooleanNetwork, bounds: EmulationBounds): number {
-  return bounds.maxTime * source.names.length;
+function resolveMethod(source: BooleanNetwork, targetNodes: number, bounds: EmulationBounds): "sat" | "enumeration" {
+  const method = bounds.method ?? "auto";
+  if (method !== "auto") return method;
+  return source.names.length <= AUTO_ENUMERATION_MAX_NODES && targetNodes <= 4 ? "enumeration" : "sat";
+}
+
+/** Number of units of the search (the sharding and cursor scale): t x first-block start for SAT, t x base state for enumeration. */
+export function emulationUnitCount(source: BooleanNetwork, target: BooleanNetwork, bounds: EmulationBounds): number {
+  return resolveMethod(source, target.names.length, bounds) === "sat" ? bounds.maxTime * source.names.length : enumerationUnitCount(source, bounds.maxTime);
 }
 
 /** Search for a block emulation of `target` by `source` within `bounds` (or the shard of it named in `control`). */
@@ -65,18 +86,24 @@ export function searchBlockEmulation(
   } else allowed.fill(1);
   const contextAllowed = bounds.contextAllowed ?? true;
   const targetSucc = successorsOfNetwork(target);
-  const totalUnits = bounds.maxTime * n;
+  const method = resolveMethod(source, m, bounds);
+  if (method === "enumeration" && m > 4) throw new EngineError("BAD_BOUNDS", "the enumeration handles targets of at most 4 nodes");
+  const totalUnits = emulationUnitCount(source, target, bounds);
   const range = control.range ?? (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
   const result = (witness: BlockEmulationWitness | null, unit: number | null): EmulationSearchResult => ({
     found: witness !== null,
     witness,
     unit,
-    bounds: { maxTime: bounds.maxTime, maxBlock: bounds.maxBlock, contextAllowed, allowedNodes: [...allowed.keys()].filter((v) => allowed[v]) },
+    bounds: { maxTime: bounds.maxTime, maxBlock: bounds.maxBlock, contextAllowed, allowedNodes: [...allowed.keys()].filter((v) => allowed[v]), method },
     range,
     totalUnits,
     satQueries,
   });
   let satQueries = 0;
+  if (method === "enumeration") {
+    const hit = enumerationSearch(source, targetSucc, m, { ...bounds, maxTargetNodes: m, allowedNodes: bounds.allowedNodes ?? undefined, contextAllowed }, { ...control, range });
+    return result(hit?.witness ?? null, hit?.unit ?? null);
+  }
   let instance: { t: number; sat: EmulationSatInstance } | null = null;
   const problem = (t: number) => ({ source, targetSucc, targetNodes: m, time: t, maxBlock: bounds.maxBlock, allowed, contextAllowed });
   // Range queries share one incremental formula per time scale; they only answer yes or no.
@@ -102,10 +129,20 @@ export function searchBlockEmulation(
     return firstUnit(t, mid, hi, true);
   };
 
+  // Time scales at which F^t lacks cycles that G's attractors need hold no witness: skip their units.
+  const step = n <= PREFILTER_MAX_NODES ? successorTable(source) : null;
+  const targetCycles = cycleLengthCounts(targetSucc);
+  const attractorsFit = (t: number) => step === null || cyclesFit(cycleLengthCounts(powerTable(step, t)), targetCycles);
+
   let cursor = Math.max(range.start, control.resumeFrom ?? range.start);
   if (m > n) cursor = range.end;
   while (cursor < range.end) {
     const t = Math.floor(cursor / n) + 1;
+    if (!attractorsFit(t)) {
+      cursor = Math.min(range.end, t * n);
+      report(cursor);
+      continue;
+    }
     const lo = cursor - (t - 1) * n;
     const hi = Math.min(n, range.end - (t - 1) * n);
     const v = firstUnit(t, lo, hi, false);
@@ -122,6 +159,60 @@ export function searchBlockEmulation(
     report(cursor);
   }
   return result(null, null);
+}
+
+/**
+ * The first encoding in unit order whose induced map is G up to renaming and codeword swaps, relabelled to G:
+ * the candidate relabellings T of G (node permutation and value flips) are tabulated as maps T G T^-1.
+ */
+function enumerationSearch(
+  source: BooleanNetwork,
+  targetSucc: Uint32Array,
+  m: number,
+  bounds: EnumerationBounds,
+  control: SearchControl,
+): { witness: BlockEmulationWitness; unit: number } | null {
+  const relabellings = new Map<string, { perm: number[]; flip: number }>();
+  for (const perm of permutations(m)) {
+    for (let flip = 0; flip < 2 ** m; flip++) {
+      const T = (x: number) => {
+        let y = 0;
+        for (let j = 0; j < m; j++) if (((x >>> j) ^ (flip >>> j)) & 1) y |= 1 << perm[j]!;
+        return y;
+      };
+      const h = new Array<number>(2 ** m);
+      for (let x = 0; x < h.length; x++) h[T(x)] = T(targetSucc[x]!);
+      const key = h.join(",");
+      if (!relabellings.has(key)) relabellings.set(key, { perm, flip });
+    }
+  }
+  let hit: { witness: BlockEmulationWitness; unit: number } | null = null;
+  enumerateEncodings(
+    source,
+    bounds,
+    control,
+    (e) => {
+      const r = relabellings.get(e.succ.join(","));
+      if (!r) return false;
+      const w = e.witness();
+      // Target node j is carried by encoding block perm[j]; a flipped node swaps that block's codewords.
+      const blocks = Array.from({ length: m }, (_, j) => {
+        const b = w.blocks[r.perm[j]!]!;
+        return (r.flip >>> j) & 1 ? { nodes: b.nodes, zero: b.one, one: b.zero } : b;
+      });
+      hit = { witness: { time: w.time, blocks, context: w.context }, unit: e.unit };
+      return true;
+    },
+    m,
+  );
+  return hit;
+}
+
+function permutations(m: number): number[][] {
+  if (m === 0) return [[]];
+  const out: number[][] = [];
+  for (const p of permutations(m - 1)) for (let i = 0; i <= p.length; i++) out.push([...p.slice(0, i), m - 1, ...p.slice(i)]);
+  return out;
 }
 
 /** Merge shard results (any order) into what one unsplit run over their union reports. */

@@ -17,10 +17,11 @@ export {
   mergeDiscoverShards,
   discoverEmulatedTargets,
   discoverUnitCount,
-  MAX_DISCOVER_NODES,
   type DiscoverBounds,
   type DiscoveredTarget,
   type DiscoverShardResult,
   type DiscoverResult,
 } from "./discover-targets";
 export { randomNetwork, plantEmulation, type Rng, type PlantedEmulation } from "./planted-reductions";
+export { cycleLengthCounts, cyclesFit } from "./cycle-prefilter";
+export { enumerateEncodings, enumerationUnitCount, MAX_ENUMERATED_NODES, type EnumerationBounds, type FoundEncoding, type EnumerationRun } from "./encoding-enumeration";

@@ -1,3 +1,4 @@
+import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ParseError } from "../errors";
@@ -94,6 +95,12 @@ describe("parseRuleText", () => {
   it("parseRuleText keeps source positions on the parsed rules for the editor", () => {
     const { rules } = parseRuleText("\n  A' = !B\nB' = A");
     expect(rules[0]).toMatchObject({ name: "A", line: 2, column: 3, rule: { kind: "not", pos: { line: 2, column: 8 }, arg: { pos: { line: 2, column: 9 } } } });
+  });
+
+  it("readRuleText reads the example of docs/rule-text.md", () => {
+    const doc = readFileSync(new URL("../../../docs/rule-text.md", import.meta.url), "utf8");
+    const example = /```\n([\s\S]*?)```/.exec(doc)![1]!;
+    expect(readRuleText(example).nodes.map((n) => n.name)).toEqual(["Signal", "Kinase", "Phosphatase", "Stress", "Arrest"]);
   });
 
   it("parseRuleText(printRuleText(m)) gives back m for random models", () => {

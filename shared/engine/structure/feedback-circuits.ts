@@ -1,9 +1,9 @@
 // Elementary feedback circuits up to a given length in the essential interaction graph, with their sign (the
 // product of edge signs; Thomas, "On the relation between the logical structure of systems and their ability to
-// generate multiple steady states or sustained oscillations", Springer Series in Synergetics 1981). Enumeration
-// follows the start-vertex decomposition of Johnson, "Finding all the elementary circuits of a directed graph",
-// SIAM J. Computing 1975; with a length bound, Johnson's blocking is replaced by pruning vertices farther from
-// the start than the remaining length, which keeps every extension of a path able to close a circuit.
+// generate multiple steady states or sustained oscillations", Springer Series in Synergetics 1981). Without an
+// effective length bound this is Johnson, "Finding all the elementary circuits of a directed graph", SIAM J.
+// Computing 1975; with a bound, Johnson's blocking would lose circuits, so the same start-vertex decomposition
+// prunes instead every vertex farther from the start than the remaining length.
 import type { BooleanNetwork } from "../network";
 import { interactionGraph, type EdgeSign } from "./interaction-graph";
 
@@ -47,7 +47,39 @@ export function feedbackCircuits(net: BooleanNetwork, maxLength: number, maxCirc
     circuits.push({ nodes: [...path], sign: dual ? "dual" : negatives % 2 === 0 ? "positive" : "negative" });
   };
 
+  const blocked = new Uint8Array(n);
+  const blockedBy: Set<number>[] = Array.from({ length: n }, () => new Set());
+  const unblock = (u: number): void => {
+    blocked[u] = 0;
+    for (const w of blockedBy[u]!) {
+      blockedBy[u]!.delete(w);
+      if (blocked[w]) unblock(w);
+    }
+  };
+
   for (let start = 0; start < n && circuits.length < maxCircuits; start++) {
+    if (maxLength >= n) {
+      // Johnson: a vertex stays blocked while every path from it back to the start is known to meet the path.
+      for (let v = start; v < n; v++) (blocked[v] = 0), blockedBy[v]!.clear();
+      const circuit = (v: number): boolean => {
+        let closed = false;
+        path.push(v);
+        blocked[v] = 1;
+        for (const w of out[v]!) {
+          if (w < start || circuits.length >= maxCircuits) continue;
+          if (w === start) {
+            record();
+            closed = true;
+          } else if (!blocked[w] && circuit(w)) closed = true;
+        }
+        if (closed) unblock(v);
+        else for (const w of out[v]!) if (w >= start) blockedBy[w]!.add(v);
+        path.pop();
+        return closed;
+      };
+      circuit(start);
+      continue;
+    }
     // Steps from each vertex >= start back to start, inside the subgraph of vertices >= start.
     distance.fill(-1);
     distance[start] = 0;

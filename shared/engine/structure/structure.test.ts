@@ -66,6 +66,20 @@ describe("structure", () => {
     );
   });
 
+  it("feedbackCircuits with an unbounded length (Johnson's blocking) agrees with the length-pruned search below n", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 7, max: 11 }), fc.integer({ min: 1, max: 3 }), fc.integer(), (n, k, seed) => {
+        const net = randomNK(n, k, seed);
+        const key = (c: { nodes: number[]; sign: string }) => `${c.nodes.join(",")}:${c.sign}`;
+        const all = feedbackCircuits(net, n).circuits;
+        const pruned = feedbackCircuits(net, n - 1).circuits;
+        expect(all.filter((c) => c.nodes.length < n).map(key).sort()).toEqual(pruned.map(key).sort());
+        expect(new Set(all.map(key)).size).toBe(all.length);
+      }),
+      { seed: 73, numRuns: 40 },
+    );
+  });
+
   it("feedbackCircuits finds the sum over L of C(n,L)(L-1)! circuits of a complete digraph with self-loops", () => {
     // Counting fact (common practice): a complete digraph with loops on 5 vertices has 5 + 10 + 20 + 30 + 24 = 89
     // elementary circuits. Each node here is the OR of all nodes.

@@ -20,6 +20,18 @@ export const MAX_XML_CHARS = 20 * 1024 * 1024;
 
 type OrderedNode = Record<string, unknown>;
 
+const PREDEFINED: Record<string, string> = { amp: "&", lt: "<", gt: ">", quot: '"', apos: "'" };
+
+/** Decode the five predefined entities and character references; entity expansion stays off for everything else. */
+function decodeEntities(s: string): string {
+  if (!s.includes("&")) return s;
+  return s.replace(/&(#x[0-9A-Fa-f]+|#[0-9]+|amp|lt|gt|quot|apos);/g, (whole, ref: string) => {
+    if (ref[0] !== "#") return PREDEFINED[ref]!;
+    const code = ref[1] === "x" ? parseInt(ref.slice(2), 16) : parseInt(ref.slice(1), 10);
+    return code <= 0x10ffff ? String.fromCodePoint(code) : whole;
+  });
+}
+
 function lineStarts(text: string): number[] {
   const starts = [0];
   for (let i = text.indexOf("\n"); i >= 0; i = text.indexOf("\n", i + 1)) starts.push(i + 1);
@@ -66,11 +78,12 @@ export function parseXml(text: string): XmlElement {
     const name = Object.keys(node).find((k) => k !== ":@" && k !== "#text");
     if (!name || name.startsWith("?")) return null;
     const rawChildren = (node[name] as OrderedNode[]) ?? [];
-    const attrs = (node[":@"] as Record<string, string>) ?? {};
+    const attrs: Record<string, string> = {};
+    for (const [k, v] of Object.entries((node[":@"] as Record<string, string>) ?? {})) attrs[k] = decodeEntities(String(v));
     const children: XmlElement[] = [];
     let text = "";
     for (const child of rawChildren) {
-      if ("#text" in child) text += String(child["#text"]);
+      if ("#text" in child) text += decodeEntities(String(child["#text"]));
       else {
         const c = convert(child);
         if (c) children.push(c);

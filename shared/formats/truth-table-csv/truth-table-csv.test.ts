@@ -1,3 +1,4 @@
+import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import seedrandom from "seedrandom";
@@ -29,6 +30,13 @@ describe("truth-table CSV", () => {
       }),
       { seed: 4701, numRuns: 150 },
     );
+  });
+
+  it("readTruthTableCsv reads the example of docs/truth-table-csv.md", () => {
+    const doc = readFileSync(new URL("../../../docs/truth-table-csv.md", import.meta.url), "utf8");
+    const net = readTruthTableCsv(/```\n([\s\S]*?)```/.exec(doc)![1]!);
+    expect(net.names).toEqual(["Kinase", "Signal", "Phosphatase"]);
+    expect(Array.from(net.tables[0]!)).toEqual([0, 1, 0, 0]); // Kinase = Signal & !Phosphatase
   });
 
   it("parseTruthTableCsv reports every error with its line and column", () => {

@@ -3,11 +3,12 @@
 import { useEffect, useState } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { Alert } from "@/components/ui/alert";
+import { useProjectOutlet } from "./project-layout";
 import { Button } from "@/components/ui/button";
 import { useCreateRevision } from "@/features/models/api/create-revision";
 import { useAttractors } from "@/features/models/api/get-attractors";
 import { useModel } from "@/features/models/api/get-model";
-import { useCanWriteModels } from "@/features/models/api/get-project-access";
+import { can } from "@shared/types/roles";
 import { useStructure } from "@/features/models/api/get-structure";
 import { useRevisionList } from "@/features/models/api/list-revisions";
 import { AttractorTable } from "@/features/models/components/attractor-table";
@@ -125,9 +126,10 @@ export function ModelDetailRoute() {
   const revisionParam = Number.isInteger(asked) && asked > 0 ? asked : "latest";
   const detail = useModel(projectId, modelId, revisionParam);
   const revisions = useRevisionList(projectId, modelId);
-  const canWrite = useCanWriteModels(projectId);
+  const { project } = useProjectOutlet();
+  const canWrite = can(project.role, project.siteRole, "model:write");
   const revision = detail.data?.revision.revision ?? 0;
-  const structure = useStructure(projectId, modelId, revision);
+  const structure = useStructure(projectId, modelId, revision, revision > 0);
   const [markers, setMarkers] = useState<string[]>([]);
   const [selected, setSelected] = useState<number | null>(null);
   const attractorsForState = useAttractors(projectId, modelId, revision, markers, revision > 0);

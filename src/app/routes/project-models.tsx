@@ -1,14 +1,16 @@
 // Models tab of a project: the table of models and, for those allowed, the way to add one.
 import { Link, useParams } from "react-router-dom";
 import { Alert } from "@/components/ui/alert";
-import { useCanWriteModels } from "@/features/models/api/get-project-access";
+import { useProjectOutlet } from "./project-layout";
+import { can } from "@shared/types/roles";
 import { useModelList } from "@/features/models/api/list-models";
 import { ModelsTable } from "@/features/models/components/models-table";
 
 export function ProjectModelsRoute() {
   const { projectId = "" } = useParams();
   const models = useModelList(projectId);
-  const canWrite = useCanWriteModels(projectId);
+  const { project } = useProjectOutlet();
+  const canWrite = can(project.role, project.siteRole, "model:write");
   return (
     <section className="space-y-4">
       <div className="flex flex-wrap items-center justify-between gap-2">

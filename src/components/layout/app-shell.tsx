@@ -5,13 +5,13 @@ import { HealthBadge } from "./health-badge";
 
 export interface NavItem { to: string; label: string }
 
-const navItems: NavItem[] = [{ to: "/", label: "Overview" }, { to: "/automata", label: "Automata" }];
+const navItems: NavItem[] = [{ to: "/", label: "Overview" }, { to: "/automata", label: "Automata" }, { to: "/projects", label: "Projects" }];
 
 function navClass({ isActive }: { isActive: boolean }) {
   return `rounded-md px-3 py-2 text-sm font-medium ${isActive ? "bg-brand-700 text-white" : "text-slate-200 hover:bg-brand-800 hover:text-white"}`;
 }
 
-export function AppShell({ accountSlot }: { accountSlot?: ReactNode }) {
+export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: ReactNode; notificationSlot?: ReactNode }) {
   const [isMenuOpen, setMenuOpen] = useState(false);
   return (
     <div className="flex min-h-screen flex-col">
@@ -37,7 +37,7 @@ export function AppShell({ accountSlot }: { accountSlot?: ReactNode }) {
               </NavLink>
             ))}
           </nav>
-          <div className="hidden md:ml-auto md:block">{accountSlot}</div>
+          <div className="hidden md:ml-auto md:flex md:items-center md:gap-2">{notificationSlot}{accountSlot}</div>
         </div>
       </header>
       <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">

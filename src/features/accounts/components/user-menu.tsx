@@ -35,9 +35,6 @@ export function UserMenu() {
   const user = session.user;
   return (
     <div className="flex items-center gap-2">
-      <NavLink to="/projects" className={linkClass}>
-        Projects
-      </NavLink>
       {session.mailboxAvailable && (
         <NavLink to="/mailbox" className={linkClass} data-testid="mailbox-link">
           Mailbox

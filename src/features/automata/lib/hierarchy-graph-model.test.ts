@@ -23,7 +23,7 @@ const pairArb = fc.array(
   fc.record({ source: fc.integer({ min: 0, max: 11 }), target: fc.integer({ min: 0, max: 11 }), minBlock: fc.integer({ min: 1, max: 4 }) }),
   { maxLength: 40 },
 );
-const toPairs = (raw: { source: number; target: number; minBlock: number }[]): HierarchyPair[] => raw.map((p) => ({ ...p, time: p.minBlock }));
+const toPairs = (raw: { source: number; target: number; minBlock: number }[]): HierarchyPair[] => raw.map((p) => ({ ...p, time: p.minBlock, composed: false }));
 const identityClasses = Array.from({ length: 256 }, (_, r) => [r]);
 
 describe("buildHierarchyGraph", () => {

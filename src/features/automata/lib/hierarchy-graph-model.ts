@@ -59,7 +59,8 @@ export function buildHierarchyGraph(pairs: readonly HierarchyPair[], symmetryCla
   const adjacency = new Map<number, Map<number, UnitEdge>>();
   let pairsInRange = 0;
   for (const p of pairs) {
-    if (p.source === p.target || p.minBlock < filters.minBlock || p.minBlock > filters.maxBlock) continue;
+    // composed pairs are implied by the chains they compose, so they never survive the reduction
+    if (p.composed || p.source === p.target || p.minBlock < filters.minBlock || p.minBlock > filters.maxBlock) continue;
     pairsInRange++;
     const u = unitOf[p.source]!;
     const v = unitOf[p.target]!;

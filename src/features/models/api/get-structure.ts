@@ -13,6 +13,6 @@ export const structureQuery = (projectId: string, modelId: string, revision: num
     staleTime: Infinity,
   });
 
-export function useStructure(projectId: string, modelId: string, revision: number) {
-  return useQuery(structureQuery(projectId, modelId, revision));
+export function useStructure(projectId: string, modelId: string, revision: number, enabled = true) {
+  return useQuery({ ...structureQuery(projectId, modelId, revision), enabled });
 }

@@ -3,7 +3,6 @@ export const modelKeys = {
   all: ["models"] as const,
   project: (projectId: string) => [...modelKeys.all, projectId] as const,
   list: (projectId: string) => [...modelKeys.project(projectId), "list"] as const,
-  access: (projectId: string) => [...modelKeys.project(projectId), "access"] as const,
   model: (projectId: string, modelId: string) => [...modelKeys.project(projectId), "model", modelId] as const,
   detail: (projectId: string, modelId: string, revision: number | "latest") => [...modelKeys.model(projectId, modelId), "detail", revision] as const,
   revisions: (projectId: string, modelId: string) => [...modelKeys.model(projectId, modelId), "revisions"] as const,

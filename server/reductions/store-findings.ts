@@ -1,0 +1,36 @@
+// A finished search's findings become proposed reductions (each statement stored once, whoever finds it again),
+// written in the transaction that marks the run succeeded, so a run never succeeds with its reductions missing.
+import type { Knex } from "knex";
+import { ReductionSearchParams, ReductionSearchResult } from "../../shared/schemas/reductions";
+import { recordAudit } from "../db/repositories/audit-log";
+import { insertReduction } from "../db/repositories/reductions";
+import { statementKey } from "./statement-key";
+
+export interface FinishedRun { id: string; projectId: string; startedBy: string | null }
+
+export async function storeSearchFindings(trx: Knex, run: FinishedRun, rawResult: unknown, rawParams: unknown): Promise<unknown> {
+  const params = ReductionSearchParams.parse(rawParams);
+  const result = ReductionSearchResult.parse(rawResult);
+  const ids: string[] = [];
+  for (const f of result.findings) {
+    // Only a given-target search proves something about a stored target model.
+    const targetRevisionId = result.mode === "given-target" ? params.targetRevisionId : null;
+    const stored = await insertReduction(trx, {
+      projectId: run.projectId,
+      sourceRevisionId: params.sourceRevisionId,
+      targetRevisionId,
+      notion: f.certificate.notion,
+      timeScale: f.certificate.time,
+      certificate: f.certificate,
+      targetKey: statementKey(f.certificate, targetRevisionId),
+      flags: f.flags,
+      foundBy: run.startedBy,
+      foundInRunId: run.id,
+    });
+    ids.push(stored.id);
+  }
+  if (ids.length) {
+    await recordAudit(trx, { projectId: run.projectId, actorId: run.startedBy, action: "reduction.found", target: run.id, details: { count: ids.length, mode: result.mode } });
+  }
+  return { ...result, reductionIds: ids };
+}

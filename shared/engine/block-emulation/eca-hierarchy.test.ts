@@ -1,0 +1,141 @@
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { ecaRule, reflectEca, complementEca } from "../automata";
+import {
+  ecaHierarchy,
+  runHierarchyShard,
+  mergeHierarchyParts,
+  assembleEcaHierarchy,
+  hierarchyUnits,
+  naiveEcaMinBlocks,
+  verifyEmulation,
+  composeWitnesses,
+  blockEmulations,
+} from "./index";
+import type { HierarchyPart } from "./index";
+
+const K = 6;
+const whole = ecaHierarchy(K);
+const minBlockOf = (h: typeof whole) => {
+  const table = new Uint8Array(65536);
+  for (const r of h.relations) table[256 * r.source + r.target] = r.minBlock;
+  return table;
+};
+const table = minBlockOf(whole);
+
+describe("ecaHierarchy", () => {
+  it("ecaHierarchy gives the same least block size for every ordered pair as the naive all-pairs search over all 256 rules (K = 5)", () => {
+    const naive = naiveEcaMinBlocks(5);
+    const fast = minBlockOf(ecaHierarchy(5));
+    expect([...fast]).toEqual([...naive.minBlock]);
+  });
+
+  it("ecaHierarchy keeps a witness for every relation that the independent verifier accepts at the least block size", () => {
+    for (const r of whole.relations) {
+      expect(verifyEmulation(ecaRule(r.source), r.target, r.u0, r.u1).valid, `${r.source} -> ${r.target}`).toBe(true);
+      expect(r.u0.length).toBe(r.minBlock);
+    }
+  });
+
+  it("ecaHierarchy relations are sorted by source then target and include every rule emulating itself at k = 1", () => {
+    const keys = whole.relations.map((r) => 256 * r.source + r.target);
+    expect(keys).toEqual([...keys].sort((a, b) => a - b));
+    for (let f = 0; f < 256; f++) expect(table[257 * f]).toBe(1);
+  });
+
+  it("ecaHierarchy is equivariant: F -> G at k exactly when reflect F -> reflect G and complement F -> complement G at k", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 255 }), fc.integer({ min: 0, max: 255 }), (f, g) => {
+        const k = table[256 * f + g];
+        expect(table[256 * reflectEca(f) + reflectEca(g)]).toBe(k);
+        expect(table[256 * complementEca(f) + complementEca(g)]).toBe(k);
+        expect(table[256 * complementEca(f) + g]).toBe(k);
+      }),
+      { seed: 29, numRuns: 2000 },
+    );
+  });
+
+  it("ecaHierarchy lists as emulating nothing exactly the rules without a relation at 2 <= k <= K", () => {
+    for (let f = 0; f < 256; f++) {
+      const any = [2, 3, 4, 5, 6].some((k) => blockEmulations(ecaRule(f), k).emulations.length > 0);
+      expect(whole.emulateNothing.includes(f), `rule ${f}`).toBe(!any);
+    }
+  });
+
+  it("ecaHierarchy composes chains into witnesses at the product block size that the verifier confirms", () => {
+    const small = ecaHierarchy(4);
+    expect(small.composed.length).toBeGreaterThan(0);
+    for (const c of small.composed) {
+      expect(c.verified).toBe(true);
+      expect(c.u0.length).toBe(c.block);
+      expect(verifyEmulation(ecaRule(c.source), c.target, c.u0, c.u1).valid).toBe(true);
+      expect(c.via[0]).toBe(c.source);
+      expect(c.via[c.via.length - 1]).toBe(c.target);
+    }
+  });
+
+  it("composeWitnesses of two relations found by the search yields an emulation at block k*j confirmed by the verifier", () => {
+    const byKey = new Map(whole.relations.map((r) => [256 * r.source + r.target, r]));
+    const chains = whole.relations.filter((r) => r.minBlock >= 2 && r.minBlock <= 3 && r.source !== r.target).slice(0, 60);
+    let checked = 0;
+    for (const outer of chains) {
+      for (const inner of whole.relations) {
+        if (inner.source !== outer.target || inner.minBlock < 2 || inner.minBlock > 3 || checked >= 40) continue;
+        const w = composeWitnesses(outer, inner);
+        expect(w.u0.length).toBe(outer.minBlock * inner.minBlock);
+        expect(verifyEmulation(ecaRule(outer.source), inner.target, w.u0, w.u1).valid, `${outer.source}->${outer.target}->${inner.target}`).toBe(true);
+        expect(byKey.has(256 * outer.source + inner.target) || whole.composed.some((c) => c.source === outer.source && c.target === inner.target)).toBe(true);
+        checked++;
+      }
+    }
+    expect(checked).toBe(40);
+  });
+
+  it("ecaHierarchy mutual classes partition the rules, and reduction edges join distinct classes without a shortcut", () => {
+    expect(whole.mutualClasses.flat().sort((a, b) => a - b)).toEqual(Array.from({ length: 256 }, (_, i) => i));
+    const reach = new Set<string>();
+    for (const e of whole.reduction) {
+      expect(e.from).not.toBe(e.to);
+      reach.add(`${e.from}>${e.to}`);
+    }
+    // a reduction edge is never implied by two other reduction edges
+    for (const e of whole.reduction) {
+      const middle = whole.reduction.filter((x) => x.from === e.from && reach.has(`${x.to}>${e.to}`));
+      expect(middle.length).toBe(0);
+    }
+    // rule 0 and rule 255 emulate each other at k = 1, so they share a class
+    const zero = whole.mutualClasses.find((c) => c.includes(0))!;
+    expect(zero).toContain(255);
+    expect(whole.symmetryClasses.length).toBe(88);
+  });
+
+  it("runHierarchyShard parts from any sharding and resumed cursors merge to the same hierarchy", () => {
+    const parts: HierarchyPart[] = [];
+    for (let s = 0; s < 3; s++) {
+      let cursor = 0;
+      for (;;) {
+        const run = runHierarchyShard({ maxBlock: K, shardIndex: s, shardCount: 3, cursor, maxUnits: 50 });
+        parts.push(run.part);
+        cursor = run.cursor;
+        if (run.done) break;
+      }
+    }
+    const merged = mergeHierarchyParts(parts);
+    expect(merged.units.length).toBe(hierarchyUnits(K).length);
+    const again = assembleEcaHierarchy(merged);
+    expect(again.relations).toEqual(whole.relations);
+    expect(again.emulateNothing).toEqual(whole.emulateNothing);
+    expect(again.mutualClasses).toEqual(whole.mutualClasses);
+  });
+
+  it("runHierarchyShard reports progress, calls onUnit with resumable cursors and throws CancelledError when told to stop", () => {
+    const fractions: number[] = [];
+    const cursors: number[] = [];
+    runHierarchyShard({ maxBlock: 3, onProgress: (f) => fractions.push(f), onUnit: (_, c) => cursors.push(c) });
+    expect(fractions[fractions.length - 1]).toBe(1);
+    expect(cursors).toEqual(Array.from({ length: 88 * 3 }, (_, i) => i + 1));
+    let calls = 0;
+    expect(() => runHierarchyShard({ maxBlock: 3, shouldStop: () => ++calls > 5 })).toThrow(/cancelled/);
+    expect(() => assembleEcaHierarchy({ maxBlock: 3, units: [] })).toThrow(/missing/);
+  });
+});

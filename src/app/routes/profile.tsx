@@ -1,0 +1,26 @@
+import { Alert } from "@/components/ui/alert";
+import { useProfile } from "@/features/accounts/api/get-profile";
+import { DisplayNameForm, PasswordForm } from "@/features/accounts/components/profile-forms";
+
+export function ProfileRoute() {
+  const { data: profile, error, isPending } = useProfile();
+  if (isPending) return <p className="text-sm text-slate-500">Loading…</p>;
+  if (error) return <Alert>{error.message}</Alert>;
+  return (
+    <section className="max-w-xl space-y-6">
+      <div>
+        <h1 className="text-2xl font-semibold">Your profile</h1>
+        <p className="text-sm text-slate-600">
+          {profile.email} · {profile.siteRole === "admin" ? "site admin" : "member"} since {new Date(profile.createdAt).toLocaleDateString()}
+        </p>
+      </div>
+      <div className="rounded-lg border border-slate-200 bg-white p-5">
+        <DisplayNameForm profile={profile} />
+      </div>
+      <div className="rounded-lg border border-slate-200 bg-white p-5">
+        <h2 className="mb-4 text-lg font-semibold">Password</h2>
+        <PasswordForm />
+      </div>
+    </section>
+  );
+}

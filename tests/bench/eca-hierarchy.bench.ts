@@ -1,0 +1,131 @@
+// Benchmark of the elementary-rule block-emulation hierarchy (symmetry classes, fixed-point pairing, chunk tables,
+// linear algebra for affine rules) against the naive all-pairs reference that simulates every ordered pair of
+// codewords cell by cell. Each measurement runs in its own child process so that maxRSS belongs to that run alone.
+// Usage: npm run bench:eca   (wall-clock figures on a shared 2-core machine: expect noise)
+import { spawnSync } from "node:child_process";
+import { fileURLToPath } from "node:url";
+import { ecaHierarchy, naiveEcaMinBlocks } from "../../shared/engine/block-emulation";
+
+interface Measure {
+  seconds: number;
+  maxRssMB: number;
+  peakHeapMB: number;
+  pairs: number;
+  relations?: number;
+  rules?: number;
+}
+
+/** Seconds the naive reference may spend on one block size before it is sampled on fewer source rules. */
+const NAIVE_BUDGET_S = 20;
+const FULL_K14_LIMIT_S = 600;
+
+function heapMB(): number {
+  const m = process.memoryUsage();
+  return (m.heapUsed + m.arrayBuffers) / 2 ** 20;
+}
+
+function measureChild(kind: string, a: number, b: number): void {
+  let peak = heapMB();
+  const sample = () => {
+    peak = Math.max(peak, heapMB());
+  };
+  const t0 = performance.now();
+  let pairs = 0;
+  let relations: number | undefined;
+  let rules: number | undefined;
+  if (kind === "fast") {
+    const h = ecaHierarchy(a, { onProgress: sample });
+    pairs = h.pairsExamined;
+    relations = h.relations.length;
+  } else {
+    // naive: block size a on `b` source rules spread evenly over 0..255
+    const sources = Array.from({ length: b }, (_, i) => Math.floor((i * 256) / b));
+    const r = naiveEcaMinBlocks(a, { blocks: [a], sources, onProgress: sample });
+    pairs = r.pairsExamined;
+    rules = b;
+  }
+  sample();
+  const seconds = (performance.now() - t0) / 1000;
+  console.log(JSON.stringify({ seconds, maxRssMB: process.resourceUsage().maxRSS / 1024, peakHeapMB: peak, pairs, relations, rules }));
+}
+
+function spawn(self: string, kind: string, a: number, b: number, timeoutS?: number): Measure | null {
+  const r = spawnSync(process.execPath, ["--import", "tsx", self, "--one", kind, String(a), String(b)], {
+    encoding: "utf8",
+    maxBuffer: 1 << 20,
+    timeout: timeoutS ? timeoutS * 1000 : undefined,
+  });
+  if (r.error || r.status !== 0) {
+    if (timeoutS && (r.signal === "SIGTERM" || (r.error as NodeJS.ErrnoException | undefined)?.code === "ETIMEDOUT")) return null;
+    throw new Error(`${kind} run failed: ${r.stderr || r.error}`);
+  }
+  return JSON.parse(r.stdout.trim().split("\n").at(-1)!) as Measure;
+}
+
+const naivePairs = (k: number) => 256 * 2 ** k * (2 ** k - 1);
+
+function main(): void {
+  const args = process.argv.slice(2);
+  if (args[0] === "--one") {
+    measureChild(args[1]!, Number(args[2]), Number(args[3]));
+    return;
+  }
+  const self = fileURLToPath(import.meta.url);
+  const blocks = [8, 10, 11, 12];
+  const maxK = Math.max(...blocks);
+  console.log("Block-emulation hierarchy of the 256 elementary rules, block sizes 1..K, time t = k. Shared 2-core machine: timings are noisy.");
+  console.log("Targets: K=11 under 5 s, K=14 under 10 min (fast engine, one thread).");
+  console.log("Memory: peak resident set of the run's own process (maxRSS, includes ~60 MB of Node/tsx runtime) and peak V8 heap + buffers.");
+  console.log(`Naive reference: every ordered pair of distinct k-cell words, simulated cell by cell, for all 256 rules and every k <= K.`);
+  console.log(`  Capped: a block size whose full run would exceed ${NAIVE_BUDGET_S} s is run on an even sample of source rules and scaled to 256;`);
+  console.log(`  when even one rule would exceed it, its time is extrapolated from the last measured seconds per pair times (k/k')^2 (work per pair ~ k^2).`);
+  console.log("");
+  // naive, one block size at a time
+  const naive: { k: number; seconds: number; how: string; maxRssMB: number; peakHeapMB: number }[] = [];
+  let perPair = 0;
+  let perPairK = 1;
+  for (let k = 1; k <= maxK; k++) {
+    const predictedPerRule = perPair > 0 ? (perPair * (k / perPairK) ** 2 * naivePairs(k)) / 256 : 0;
+    if (predictedPerRule * 256 <= NAIVE_BUDGET_S) {
+      const m = spawn(self, "naive", k, 256)!;
+      naive.push({ k, seconds: m.seconds, how: "measured", maxRssMB: m.maxRssMB, peakHeapMB: m.peakHeapMB });
+      perPair = m.seconds / m.pairs;
+      perPairK = k;
+    } else if (predictedPerRule * 2 <= NAIVE_BUDGET_S) {
+      const rules = Math.max(2, Math.min(128, 2 ** Math.floor(Math.log2(NAIVE_BUDGET_S / predictedPerRule))));
+      const m = spawn(self, "naive", k, rules)!;
+      naive.push({ k, seconds: (m.seconds * 256) / rules, how: `sampled ${rules}/256 rules`, maxRssMB: m.maxRssMB, peakHeapMB: m.peakHeapMB });
+      perPair = m.seconds / m.pairs;
+      perPairK = k;
+    } else {
+      naive.push({ k, seconds: predictedPerRule * 256, how: "extrapolated", maxRssMB: NaN, peakHeapMB: NaN });
+    }
+  }
+  console.log("naive per block size: " + naive.map((n) => `k=${n.k} ${n.seconds.toFixed(1)} s (${n.how})`).join("; "));
+  console.log("");
+  console.log("K  | fast s   maxRSS MB  heap MB  pairs examined | naive s (how)                          maxRSS MB  heap MB  pairs examined | naive/fast time  pairs ratio");
+  for (const K of blocks) {
+    const fast = spawn(self, "fast", K, 0)!;
+    const parts = naive.filter((n) => n.k <= K);
+    const nSeconds = parts.reduce((s, n) => s + n.seconds, 0);
+    const measuredOnly = parts.every((n) => n.how === "measured");
+    const how = measuredOnly ? "measured" : parts.some((n) => n.how === "extrapolated") ? "partly extrapolated" : "partly sampled";
+    const nPairs = parts.reduce((s, n) => s + naivePairs(n.k), 0);
+    const nRss = Math.max(...parts.map((n) => n.maxRssMB).filter((x) => !Number.isNaN(x)));
+    const nHeap = Math.max(...parts.map((n) => n.peakHeapMB).filter((x) => !Number.isNaN(x)));
+    console.log(
+      `${String(K).padEnd(2)} | ${fast.seconds.toFixed(2).padStart(6)}  ${fast.maxRssMB.toFixed(0).padStart(9)}  ${fast.peakHeapMB.toFixed(0).padStart(7)}  ${String(fast.pairs).padStart(14)} | ` +
+        `${nSeconds.toFixed(1).padStart(8)} (${how})`.padEnd(40) +
+        ` ${nRss.toFixed(0).padStart(9)}  ${nHeap.toFixed(0).padStart(7)}  ${String(nPairs).padStart(14)} | ${(nSeconds / fast.seconds).toFixed(0).padStart(15)}  ${(nPairs / fast.pairs).toFixed(0).padStart(11)}`,
+    );
+  }
+  console.log("");
+  const k14 = spawn(self, "fast", 14, 0, FULL_K14_LIMIT_S);
+  if (k14) {
+    console.log(`K=14 fast hierarchy: ${k14.seconds.toFixed(1)} s, maxRSS ${k14.maxRssMB.toFixed(0)} MB, heap ${k14.peakHeapMB.toFixed(0)} MB, ${k14.pairs} pairs examined, ${k14.relations} relations`);
+  } else {
+    console.log(`K=14 fast hierarchy: did not finish within ${FULL_K14_LIMIT_S} s`);
+  }
+}
+
+main();
