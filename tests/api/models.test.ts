@@ -267,7 +267,9 @@ describe("analyses", () => {
     expect(data.attractors[0].phenotype).toBe("110");
     const g1 = data.attractors[0].states[0] as string;
     expect(data.nodes.filter((_: string, i: number) => g1[i] === "1")).toEqual(["Cdh1", "Sic1"]);
-    // Stored per revision: the second call reads the cache.
+    // Stored per revision: asking again answers the same from the one cached row.
+    const again = await viewer.get(`${base}/${model.id}/revisions/1/attractors`);
+    expect(again.body.data.attractors.map((a: { basin: number }) => a.basin)).toEqual([1764, 151, 109, 9, 7, 7, 1]);
     const [cached] = await t.db("model_analyses as a").join("model_revisions as r", "r.id", "a.revision_id").where("r.model_id", model.id).count<{ count: string }[]>("* as count");
     expect(Number(cached!.count)).toBe(1);
   });

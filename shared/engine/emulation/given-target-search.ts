@@ -22,14 +22,11 @@ export interface EmulationBounds {
   /** May source nodes stay outside the blocks with a fixed value? (default true) */
   readonly contextAllowed?: boolean;
   /**
-   * "enumeration" walks all encodings of the tabulated state space (sources up to 20 nodes, targets up to 4);
-   * "sat" asks MiniSat; "auto" (default) enumerates for sources up to 12 nodes and targets up to 4.
+   * "sat" (default) asks MiniSat and scales to large sources; "enumeration" walks all encodings of the tabulated
+   * state space (sources up to 20 nodes, targets up to 4 nodes).
    */
-  readonly method?: "auto" | "sat" | "enumeration";
+  readonly method?: "sat" | "enumeration";
 }
-
-/** Sources up to this size are searched by enumeration under method "auto". */
-const AUTO_ENUMERATION_MAX_NODES = 12;
 
 export interface SearchControl {
   readonly onProgress?: (fraction: number, phase: string) => void;
@@ -54,15 +51,9 @@ export interface EmulationSearchResult {
   readonly satQueries: number;
 }
 
-function resolveMethod(source: BooleanNetwork, targetNodes: number, bounds: EmulationBounds): "sat" | "enumeration" {
-  const method = bounds.method ?? "auto";
-  if (method !== "auto") return method;
-  return source.names.length <= AUTO_ENUMERATION_MAX_NODES && targetNodes <= 4 ? "enumeration" : "sat";
-}
-
 /** Number of units of the search (the sharding and cursor scale): t x first-block start for SAT, t x base state for enumeration. */
-export function emulationUnitCount(source: BooleanNetwork, target: BooleanNetwork, bounds: EmulationBounds): number {
-  return resolveMethod(source, target.names.length, bounds) === "sat" ? bounds.maxTime * source.names.length : enumerationUnitCount(source, bounds.maxTime);
+export function emulationUnitCount(source: BooleanNetwork, bounds: EmulationBounds): number {
+  return (bounds.method ?? "sat") === "sat" ? bounds.maxTime * source.names.length : enumerationUnitCount(source, bounds.maxTime);
 }
 
 /** Search for a block emulation of `target` by `source` within `bounds` (or the shard of it named in `control`). */
@@ -86,9 +77,9 @@ export function searchBlockEmulation(
   } else allowed.fill(1);
   const contextAllowed = bounds.contextAllowed ?? true;
   const targetSucc = successorsOfNetwork(target);
-  const method = resolveMethod(source, m, bounds);
+  const method = bounds.method ?? "sat";
   if (method === "enumeration" && m > 4) throw new EngineError("BAD_BOUNDS", "the enumeration handles targets of at most 4 nodes");
-  const totalUnits = emulationUnitCount(source, target, bounds);
+  const totalUnits = emulationUnitCount(source, bounds);
   const range = control.range ?? (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
   const result = (witness: BlockEmulationWitness | null, unit: number | null): EmulationSearchResult => ({
     found: witness !== null,

@@ -62,8 +62,8 @@ function Loaded({ hierarchy }: { hierarchy: Hierarchy }) {
         <HierarchyGraph model={model} highlightRule={searchRule} onOpenRule={(r) => navigate(`/automata/rules/${r}?maxBlock=${hierarchy.maxBlock}`)} />
       )}
       <p className="text-xs text-slate-500">
-        Hover a node to see its arrows; click it to open the rule. A label "a (+n)" is the symmetry class of rule a with n more members; "≡" joins
-        classes that emulate each other.
+        Hover a node to see its arrows with their block sizes; click it to open the rule. With symmetry classes on, a node is named by the
+        least rule of its class (bigger dots are bigger classes); "≡" joins nodes that emulate each other.
       </p>
     </div>
   );

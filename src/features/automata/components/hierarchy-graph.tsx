@@ -17,58 +17,47 @@ export function edgeColour(minBlock: number): string {
   return blockColours[Math.min(blockColours.length - 1, Math.max(0, minBlock - 1))]!;
 }
 
+/** Sideways spacing, in graph units, between neighbours on one drawn row. */
+const COLUMN = 1;
+/** Vertical distance between drawn rows. */
+const ROW = 1.6;
+/** Layers with more nodes than this are drawn zig-zag over several rows so that labels do not collide. */
+const MAX_PER_ROW = 14;
+
 function buildGraph(model: HierarchyGraphModel): Graph<NodeAttrs, EdgeAttrs> {
   const graph = new Graph<NodeAttrs, EdgeAttrs>({ type: "directed", multi: false });
-  const perLayer = new Map<number, number>();
-  const layerSize = new Map<number, number>();
-  for (const n of model.nodes) layerSize.set(n.layer, (layerSize.get(n.layer) ?? 0) + 1);
-  const widest = Math.max(1, ...layerSize.values());
-  for (const n of model.nodes) {
-    const i = perLayer.get(n.layer) ?? 0;
-    perLayer.set(n.layer, i + 1);
-    const count = layerSize.get(n.layer)!;
+  model.nodes.forEach((n, i) => {
     graph.addNode(n.id, {
-      x: ((i + 0.5) / count - 0.5) * widest,
-      y: -n.layer * 3,
-      size: Math.min(14, 5 + 2 * Math.sqrt(n.rules.length)),
+      // a circle start, so ForceAtlas2 begins from distinct positions without any randomness
+      x: Math.cos((2 * Math.PI * i) / model.nodes.length),
+      y: Math.sin((2 * Math.PI * i) / model.nodes.length),
+      size: Math.min(12, 5 + 1.5 * Math.sqrt(n.rules.length)),
       label: n.label,
       color: "#334155",
       rules: n.rules,
     });
-  }
+  });
   for (const e of model.edges) {
-    graph.addDirectedEdge(e.source, e.target, { size: 1.6, label: `k=${e.minBlock}`, color: edgeColour(e.minBlock), type: "arrow" });
+    graph.addDirectedEdge(e.source, e.target, { size: 1, label: `k=${e.minBlock}`, color: edgeColour(e.minBlock), type: "arrow" });
   }
-  if (graph.order > 1) {
-    const layers = new Map(model.nodes.map((n) => [n.id, n.layer]));
-    forceAtlas2.assign(graph, { iterations: 200, settings: { ...forceAtlas2.inferSettings(graph), gravity: 0.5, scalingRatio: 8 } });
-    // keep the sideways placement ForceAtlas2 found, but put every node back on its layer so emulators stay above
-    const xs = graph.mapNodes((_, a) => a.x);
-    const span = Math.max(1e-9, Math.max(...xs) - Math.min(...xs));
-    const rowGap = Math.max(span / Math.max(1, (Math.max(...layers.values()) + 1) * 1.2), 1);
-    graph.forEachNode((id) => graph.setNodeAttribute(id, "y", -layers.get(id)! * rowGap));
-    spreadLayers(graph, span / (widest + 1));
+  if (graph.order > 1) forceAtlas2.assign(graph, { iterations: 150, settings: forceAtlas2.inferSettings(graph) });
+  // ForceAtlas2 decides the order within a layer (related nodes end up near each other); the layers themselves
+  // are drawn as rows, emulators above what they emulate
+  const byLayer = new Map<number, string[]>();
+  for (const n of model.nodes) byLayer.set(n.layer, [...(byLayer.get(n.layer) ?? []), n.id]);
+  const widest = Math.max(...[...byLayer.values()].map((ids) => Math.min(ids.length, MAX_PER_ROW * Math.ceil(ids.length / MAX_PER_ROW))));
+  let y = 0;
+  for (const layer of [...byLayer.keys()].sort((a, b) => a - b)) {
+    const ids = byLayer.get(layer)!.sort((p, q) => graph.getNodeAttribute(p, "x") - graph.getNodeAttribute(q, "x"));
+    const rows = Math.ceil(ids.length / MAX_PER_ROW);
+    const spacing = (COLUMN * widest) / ids.length;
+    ids.forEach((id, i) => {
+      graph.setNodeAttribute(id, "x", (i - (ids.length - 1) / 2) * Math.min(spacing, COLUMN * 3));
+      graph.setNodeAttribute(id, "y", -(y + (i % rows) * ROW * 0.5));
+    });
+    y += ROW * (1 + 0.5 * (rows - 1));
   }
   return graph;
-}
-
-/** Nodes on one layer that ForceAtlas2 put on top of each other are pushed apart to a minimum gap. */
-function spreadLayers(graph: Graph<NodeAttrs, EdgeAttrs>, gap: number) {
-  const byRow = new Map<number, string[]>();
-  graph.forEachNode((id, a) => {
-    const row = byRow.get(a.y) ?? [];
-    row.push(id);
-    byRow.set(a.y, row);
-  });
-  for (const ids of byRow.values()) {
-    ids.sort((p, q) => graph.getNodeAttribute(p, "x") - graph.getNodeAttribute(q, "x"));
-    let last = -Infinity;
-    for (const id of ids) {
-      const x = Math.max(graph.getNodeAttribute(id, "x"), last + gap);
-      graph.setNodeAttribute(id, "x", x);
-      last = x;
-    }
-  }
 }
 
 function LoadGraph({ graph }: { graph: Graph<NodeAttrs, EdgeAttrs> }) {
@@ -111,7 +100,8 @@ function Interactions({ highlightRule, onOpenRule }: { highlightRule: number | n
         return { ...data, color: "#cbd5e1", label: "" };
       },
       edgeReducer: (edge, data) => {
-        if (!focus) return data;
+        // with many arrows the labels would cover each other: the colour carries k, the label shows on focus
+        if (!focus) return graph.size > 60 ? { ...data, label: "" } : data;
         const [s, t] = graph.extremities(edge);
         return s === focus || t === focus ? { ...data, size: 2.5 } : { ...data, hidden: true };
       },
@@ -150,7 +140,7 @@ export function HierarchyGraph({ model, highlightRule, onOpenRule }: HierarchyGr
     [],
   );
   return (
-    <div data-testid="hierarchy-graph" data-nodes={model.nodes.length} data-edges={model.edges.length} className="h-[640px] w-full overflow-hidden rounded-lg border border-slate-200 bg-white">
+    <div data-testid="hierarchy-graph" data-nodes={model.nodes.length} data-edges={model.edges.length} className="h-[720px] w-full overflow-hidden rounded-lg border border-slate-200 bg-white">
       <SigmaContainer<NodeAttrs, EdgeAttrs> style={{ height: "100%", width: "100%" }} settings={settings}>
         <LoadGraph graph={graph} />
         <Interactions highlightRule={highlightRule} onOpenRule={onOpenRule} />

@@ -82,7 +82,7 @@ describe("buildHierarchyGraph", () => {
       { source: 127, target: 247, minBlock: 3 },
     ]);
     const model = buildHierarchyGraph(pairs, classes, { minBlock: 1, maxBlock: 4, bySymmetryClass: true });
-    expect(model.nodes.map((n) => n.label)).toEqual(["1 (+1)", "2 (+3)"]);
+    expect(model.nodes.map((n) => [n.label, n.rules])).toEqual([["1", [1, 127]], ["2", [2, 16, 191, 247]]]);
     expect(model.edges.map((e) => [e.source, e.target, e.minBlock])).toEqual([["n1", "n2", 2]]);
   });
 });

@@ -46,7 +46,7 @@ export function buildHierarchyGraph(pairs: readonly HierarchyPair[], symmetryCla
     symmetryClasses.forEach((members, i) => {
       for (const r of members) unitOf[r] = i;
       unitRules.push([...members]);
-      unitLabels.push(members.length > 1 ? `${members[0]} (+${members.length - 1})` : String(members[0]));
+      unitLabels.push(String(members[0]));
     });
   } else {
     for (let r = 0; r < 256; r++) {

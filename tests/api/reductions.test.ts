@@ -1,0 +1,149 @@
+// Reductions through the API against the real database: a certificate enters review only when it verifies and
+// matches the stored models; reviewers decide and re-verify, everyone in the project can discuss; approved
+// reductions form the model hierarchy, where F0 -> F and F -> G compose into a verified F0 -> G.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { blockEmulationCertificate } from "../../shared/engine/certificates";
+import { searchBlockEmulation } from "../../shared/engine/emulation";
+import { compileDefinition, readRuleText } from "../../shared/engine/rules";
+import { signInAs, type Agent } from "../support/sessions";
+import { buildTestApp } from "../support/test-app";
+
+const t = buildTestApp();
+const DEMO_PROJECT = "00000000-0000-4000-8000-000000000001";
+const base = `/api/projects/${DEMO_PROJECT}`;
+const suffix = Date.now().toString(36);
+
+// The worked example of the README: F (a 4-cycle) emulates G (X' = !X) at t = 2 with block {P, Q} and codewords 00/11;
+// F0 (two synchronised copies of F) emulates F at t = 1.
+const rules = {
+  F0: "P1' = !Q1\nP2' = !Q2\nQ1' = P1\nQ2' = P2\n",
+  F: "P' = !Q\nQ' = P\n",
+  G: "X' = !X\n",
+};
+
+const network = (text: string) => compileDefinition(readRuleText(text));
+function certificate(sourceRules: string, targetRules: string, maxTime: number) {
+  const source = network(sourceRules);
+  const target = network(targetRules);
+  const r = searchBlockEmulation(source, target, { maxTime, maxBlock: 4 });
+  if (!r.witness) throw new Error("expected a witness");
+  return blockEmulationCertificate(source, target, r.witness);
+}
+
+let modeler: Agent;
+let reviewer: Agent;
+let viewer: Agent;
+const modelIds: Record<keyof typeof rules, string> = { F0: "", F: "", G: "" };
+
+beforeAll(async () => {
+  modeler = await signInAs(t.app, "modeler@demo.emulant.test");
+  reviewer = await signInAs(t.app, "reviewer@demo.emulant.test");
+  viewer = await signInAs(t.app, "viewer@demo.emulant.test");
+  for (const [key, ruleText] of Object.entries(rules) as [keyof typeof rules, string][]) {
+    const res = await modeler.post(`${base}/models`).send({ name: `Reduction test ${key} ${suffix}`, ruleText });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    modelIds[key] = res.body.data.model.id;
+  }
+});
+afterAll(() => t.close());
+
+async function upload(agent: Agent, source: keyof typeof rules, target: keyof typeof rules | undefined, cert: unknown) {
+  return agent.post(`${base}/reductions`).send({ sourceModelId: modelIds[source], targetModelId: target && modelIds[target], certificate: cert });
+}
+
+describe("POST /reductions (certificate upload)", () => {
+  it("refuses a tampered certificate with INVALID_CERTIFICATE and stores nothing", async () => {
+    const cert = certificate(rules.F, rules.G, 2);
+    const tampered = { ...cert, witness: { ...cert.witness, blocks: [{ ...cert.witness.blocks[0]!, one: "10" }] } };
+    const before = (await modeler.get(`${base}/reductions?sourceModelId=${modelIds.F}`)).body.data.length;
+    const res = await upload(modeler, "F", "G", tampered);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("INVALID_CERTIFICATE");
+    expect((await modeler.get(`${base}/reductions?sourceModelId=${modelIds.F}`)).body.data.length).toBe(before);
+  });
+
+  it("refuses a certificate whose source is not the chosen model", async () => {
+    const res = await upload(modeler, "G", undefined, certificate(rules.F, rules.G, 2));
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("SOURCE_MISMATCH");
+  });
+
+  it("rejects a malformed certificate at the edge, naming the field", async () => {
+    const res = await upload(modeler, "F", undefined, { format: "emulant-reduction", version: 1, notion: "block-emulation", time: 0 });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("INVALID_INPUT");
+    expect(res.body.error.message).toMatch(/^body\.certificate/);
+  });
+
+  it("does not let a viewer or a reviewer submit certificates", async () => {
+    expect((await upload(viewer, "F", "G", certificate(rules.F, rules.G, 2))).status).toBe(403);
+    expect((await upload(reviewer, "F", "G", certificate(rules.F, rules.G, 2))).status).toBe(403);
+  });
+});
+
+describe("review and the model hierarchy", () => {
+  let fToG = "";
+  let f0ToF = "";
+
+  it("stores a valid certificate once, as proposed and verified", async () => {
+    const first = await upload(modeler, "F", "G", certificate(rules.F, rules.G, 2));
+    expect(first.status).toBe(201);
+    expect(first.body.data).toMatchObject({ reviewState: "proposed", notion: "block-emulation", timeScale: 2, lastVerification: { isValid: true } });
+    fToG = first.body.data.id;
+    const again = await upload(modeler, "F", "G", certificate(rules.F, rules.G, 2));
+    expect(again.status).toBe(200);
+    expect(again.body.data.id).toBe(fToG);
+    const second = await upload(modeler, "F0", "F", certificate(rules.F0, rules.F, 1));
+    expect(second.status).toBe(201);
+    f0ToF = second.body.data.id;
+  });
+
+  it("lets only reviewers (and owners) decide", async () => {
+    expect((await modeler.post(`${base}/reductions/${fToG}/decision`).send({ decision: "approve" })).status).toBe(403);
+    expect((await viewer.post(`${base}/reductions/${fToG}/decision`).send({ decision: "approve" })).status).toBe(403);
+    expect((await reviewer.post(`${base}/reductions/${fToG}/decision`).send({ decision: "maybe" })).status).toBe(400);
+  });
+
+  it("records re-verification and threaded comments", async () => {
+    const v = await reviewer.post(`${base}/reductions/${fToG}/verify`);
+    expect(v.status).toBe(200);
+    expect(v.body.data.events.at(-1)).toMatchObject({ kind: "verify", outcome: { isValid: true } });
+    const c1 = await modeler.post(`${base}/reductions/${fToG}/comments`).send({ body: "Blocks {P, Q} carry X; is t = 2 expected?" });
+    expect(c1.status).toBe(201);
+    const parentId = c1.body.data.comments.at(-1).id;
+    const c2 = await reviewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "Yes: F is a 4-cycle, G a 2-cycle.", parentId });
+    expect(c2.body.data.comments.at(-1).parentId).toBe(parentId);
+    expect((await reviewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "   " })).status).toBe(400);
+    const badParent = await reviewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "x", parentId: "00000000-0000-4000-8000-00000000abcd" });
+    expect(badParent.status).toBe(400);
+    expect((await viewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "viewers only read" })).status).toBe(403);
+  });
+
+  it("shows approved reductions and their verified composition in the model hierarchy", async () => {
+    const hierarchyEdges = async () => (await viewer.get(`${base}/model-hierarchy`)).body.data.edges as { source: string; target: string; isComposed: boolean; timeScale: number }[];
+    const mine = (edges: Awaited<ReturnType<typeof hierarchyEdges>>) => edges.filter((e) => Object.values(modelIds).includes(e.source));
+    expect(mine(await hierarchyEdges())).toEqual([]);
+    for (const id of [fToG, f0ToF]) {
+      const res = await reviewer.post(`${base}/reductions/${id}/decision`).send({ decision: "approve", comment: "checked the runs" });
+      expect(res.status).toBe(200);
+      expect(res.body.data.reviewState).toBe("approved");
+    }
+    const edges = mine(await hierarchyEdges());
+    expect(edges).toContainEqual(expect.objectContaining({ source: modelIds.F, target: modelIds.G, isComposed: false, timeScale: 2 }));
+    expect(edges).toContainEqual(expect.objectContaining({ source: modelIds.F0, target: modelIds.F, isComposed: false, timeScale: 1 }));
+    expect(edges).toContainEqual(expect.objectContaining({ source: modelIds.F0, target: modelIds.G, isComposed: true, timeScale: 2 }));
+  });
+
+  it("writes every review step to the audit log", async () => {
+    const audit = await modeler.get(`${base}/audit?limit=200`);
+    const actions = (audit.body.data.items ?? audit.body.data).map((e: { action: string }) => e.action);
+    for (const a of ["reduction.upload", "reduction.verify", "reduction.comment", "reduction.approve"]) expect(actions).toContain(a);
+  });
+
+  it("serves the certificate as a download", async () => {
+    const res = await viewer.get(`${base}/reductions/${fToG}/certificate`);
+    expect(res.status).toBe(200);
+    expect(res.headers["content-disposition"]).toContain("attachment");
+    expect(JSON.parse(res.text)).toMatchObject({ format: "emulant-reduction", notion: "block-emulation", time: 2 });
+  });
+});

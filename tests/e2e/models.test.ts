@@ -1,0 +1,81 @@
+// The models screens in headless Chromium: import an SBML-qual file, see the wiring diagram and the attractor
+// table, edit a rule (with an inline error first), and see revision 2 with its own attractors.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { openBrowser, screenshot } from "../support/browser";
+import { MULTIVALUED_SBML, REPRESSOR_RING_SBML } from "../support/model-fixtures";
+import { startTestServer, type RunningServer } from "../support/test-app";
+
+const PROJECT = "00000000-0000-4000-8000-000000000001";
+
+let server: RunningServer;
+let browser: Awaited<ReturnType<typeof openBrowser>>;
+
+beforeAll(async () => {
+  server = await startTestServer();
+  browser = await openBrowser();
+  const res = await browser.context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email: "modeler@demo.emulant.test", password: "demo-password" } });
+  if (res.status() !== 200) throw new Error(`sign-in failed: ${res.status()}`);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+describe("models screens in headless Chromium", () => {
+  it("imports an SBML-qual file, shows its wiring and attractors, and a rule edit makes revision 2 with new attractors", async () => {
+    const { page } = browser;
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(e.message));
+
+    await page.goto(`${server.baseUrl}/projects/${PROJECT}/models`);
+    await expect.poll(() => page.getByTestId("models-table").isVisible(), { timeout: 30_000 }).toBe(true);
+    await screenshot(page, "models-list");
+    await page.getByTestId("new-model").click();
+    await page.getByTestId("mode-upload").click();
+
+    // A multi-valued file is refused with its reason shown, before anything is stored.
+    await page.getByTestId("upload-input").setInputFiles({ name: "multi.sbml", mimeType: "application/xml", buffer: Buffer.from(MULTIVALUED_SBML) });
+    await expect.poll(() => page.getByTestId("parse-errors").textContent()).toContain("CI has maxLevel 2");
+    await screenshot(page, "models-upload-error");
+
+    await page.getByTestId("upload-input").setInputFiles({ name: "ring.sbml", mimeType: "application/xml", buffer: Buffer.from(REPRESSOR_RING_SBML) });
+    await page.waitForURL(/\/models\/[0-9a-f-]{36}$/);
+    await expect.poll(() => page.getByTestId("model-title").textContent()).toBe("Repressor ring");
+    await expect.poll(() => page.getByTestId("wiring-diagram").getAttribute("data-nodes")).toBe("3");
+    expect(await page.getByTestId("wiring-diagram").getAttribute("data-edges")).toBe("3");
+    // sigma mounted its WebGL layers inside the diagram.
+    await expect.poll(() => page.locator("[data-testid=wiring-diagram] canvas").count()).toBeGreaterThan(1);
+    const table = page.getByTestId("attractor-table");
+    await expect.poll(() => table.getAttribute("data-count"), { timeout: 30_000 }).toBe("2");
+    // The odd repressor ring: a 6-cycle and the all-off/all-on 2-cycle, every state on a cycle.
+    expect(await page.getByTestId("attractor-basin").allTextContents()).toEqual(["6", "2"]);
+    await page.getByTestId("marker-LacI").click();
+    await expect.poll(() => page.getByTestId("attractor-phenotype").allTextContents()).toEqual(["~", "~"]);
+    await page.getByTestId("attractor-row").first().click();
+    await page.getByTestId("trajectory-run").click();
+    await expect.poll(() => page.getByTestId("trajectory-raster").getAttribute("data-steps")).toBe("21");
+    await page.getByTestId("wiring-diagram").scrollIntoViewIfNeeded();
+    await page.mouse.move(0, 0);
+    await screenshot(page, "models-detail-r1");
+
+    // An error in the editor is marked at its line before saving.
+    const editor = page.getByTestId("rule-editor");
+    await editor.fill("LacI' = !CI\nTetR' = LacI &\nCI' = !TetR\n");
+    await expect.poll(() => page.locator("[data-testid=editor-error-line]").getAttribute("data-line")).toBe("2");
+    await expect.poll(() => page.getByTestId("save-revision").isEnabled()).toBe(true);
+    await screenshot(page, "models-editor-error");
+
+    // TetR now follows LacI: the loop becomes positive, with two fixed points and two 3-cycles.
+    await editor.fill("LacI' = !CI\nTetR' = LacI\nCI' = !TetR\n");
+    await expect.poll(() => page.locator("[data-testid=editor-error-line]").count()).toBe(0);
+    await expect.poll(() => page.getByTestId("live-node-count").textContent()).toContain("3 nodes");
+    await page.getByTestId("save-revision").click();
+    await expect.poll(() => page.getByTestId("revision-label").getAttribute("data-revision")).toBe("2");
+    await expect.poll(() => table.getAttribute("data-count"), { timeout: 30_000 }).toBe("4");
+    const kinds = await page.locator("[data-testid=attractor-row] td:nth-child(2)").allTextContents();
+    expect(kinds.filter((k) => k === "fixed point")).toHaveLength(2);
+    expect(await page.getByTestId("revision-row").count()).toBe(2);
+    await screenshot(page, "models-detail-r2");
+    expect(errors).toEqual([]);
+  });
+});
