@@ -1,8 +1,8 @@
 // Turns the engine's hierarchy into the record the database stores: direct pairs with their minimal block size and
 // witness, plus the closure's composed pairs whose composed witness the engine's verifier confirmed.
 import { ecaHierarchy, type EcaHierarchy } from "../../shared/engine/block-emulation";
-import type { HierarchyPairWithWitness, HierarchyParameters, HierarchyRunResult } from "../../shared/schemas/automata";
-import type { HierarchyRecord } from "../db/repositories/eca-hierarchies";
+import { HierarchyRunResult, type HierarchyPairWithWitness, type HierarchyParameters } from "../../shared/schemas/automata";
+import type { FinishedHierarchyRun, HierarchyRecord } from "../db/repositories/eca-hierarchies";
 
 export function hierarchyPairsFromEngine(h: EcaHierarchy): { pairs: HierarchyPairWithWitness[]; unverifiedComposed: number } {
   const pairs: HierarchyPairWithWitness[] = h.relations.map((r) => ({
@@ -44,16 +44,27 @@ export function computeHierarchyRecord(
   };
 }
 
-/** The result a background run hands over, for the same storage. */
-export function recordFromRunResult(result: HierarchyRunResult, opts: { computedBy: string | null; runId: string }): HierarchyRecord {
+/** What a background run hands over: the engine's hierarchy, restated as the pairs this table stores. */
+export function runResultFromEngine(h: EcaHierarchy, computeMs: number): HierarchyRunResult {
+  return { maxBlock: h.maxBlock, timeMode: "block", radius: 1, pairs: hierarchyPairsFromEngine(h).pairs, emulateNothing: h.emulateNothing, computeMs };
+}
+
+/** The record to store from a finished run, or null when its result is not a hierarchy for these parameters. */
+export function recordFromRun(run: FinishedHierarchyRun, key: HierarchyParameters): HierarchyRecord | null {
+  const parsed = HierarchyRunResult.safeParse(run.result);
+  if (!parsed.success) return null;
+  const result = parsed.data;
+  if (result.maxBlock !== key.maxBlock || result.timeMode !== key.timeMode || result.radius !== key.radius) return null;
   return {
     maxBlock: result.maxBlock,
     timeMode: result.timeMode,
     radius: result.radius,
     pairs: result.pairs,
     emulateNothing: result.emulateNothing,
-    durationMs: result.computeMs,
-    computedBy: opts.computedBy,
-    runId: opts.runId,
+    // the wall time of the whole run (queueing excluded) is what the user waited; the summed compute time is kept
+    // when the run did not report its start
+    durationMs: run.wallMs ?? result.computeMs,
+    computedBy: run.startedBy,
+    runId: run.id,
   };
 }

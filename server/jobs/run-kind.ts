@@ -14,7 +14,11 @@ export interface RunKindDefinition<P = unknown> {
   /** Shard inputs; `revision` is the run's model revision when it has one. */
   plan(params: P, revision: { ruleText: string } | null): unknown[];
   merge(partials: unknown[], params: P): unknown;
+  /** When merging is itself long, a worker task that does it in the pool instead of `merge` (input: MergeTaskInput). */
+  mergeTaskFile?: string;
 }
+
+export interface MergeTaskInput { partials: unknown[]; params: unknown }
 
 const tasksDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../workers/tasks");
 export const taskFile = (name: string) => path.join(tasksDir, `${name}.ts`);

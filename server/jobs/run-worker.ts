@@ -12,7 +12,7 @@ import type { Logger } from "pino";
 import { isRunFinished, type Run, type RunError } from "../../shared/schemas/runs";
 import {
   claimShard, completeShard, mergeRunOnce, recordShardProgress, releaseShard, requeueStaleShard, runsAwaitingMerge,
-  setShardJob, shardsWithoutJob, staleShards, type Shard,
+  setShardJob, shardsOf, shardsWithoutJob, staleShards, type Shard,
 } from "../db/repositories/run-shards";
 import { finishRun, getRun, refreshRunProgress, runState, tryStartRun } from "../db/repositories/runs";
 import type { Mailer } from "../mail/mailer";
@@ -21,7 +21,7 @@ import { StopReason, type ShardTaskOutput, type TaskMessage } from "../workers/t
 import { retrying, SHARD_QUEUE, sendShardJob, startBoss, type ShardJobData } from "./boss";
 import { runKind } from "./kinds";
 import { notifyRunFinished } from "./notify";
-import type { RunKindDefinition } from "./run-kind";
+import type { MergeTaskInput, RunKindDefinition } from "./run-kind";
 import type { RunSettings } from "./run-settings";
 
 export interface RunWorkerDeps {
@@ -65,8 +65,25 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
   const mergeAndNotify = async (runId: string) => {
     const run = await retrying("read run", log, () => getRun(db, runId));
     const kind = run && runKind(run.kind);
-    if (!run || !kind) return;
-    const merged = await retrying("merge run", log, () => mergeRunOnce(db, runId, (partials) => kind.merge(partials, kind.params.parse(run.params))));
+    if (!run || !kind || run.state !== "running") return;
+    const params = kind.params.parse(run.params);
+    let merge = (partials: unknown[]) => kind.merge(partials, params);
+    if (kind.mergeTaskFile) {
+      // A long merge runs in the pool before taking the run's lock; done shards never change, so its input is final.
+      const shards = await retrying("read shards", log, () => shardsOf(db, runId));
+      if (shards.some((s) => s.state !== "done")) return;
+      let out: { ok: true; result: unknown } | { ok: false; error: RunError };
+      try {
+        out = await pool.run({ partials: shards.map((s) => s.partial), params } satisfies MergeTaskInput, { filename: kind.mergeTaskFile });
+      } catch (err) {
+        const oom = (err as { code?: string }).code === "ERR_WORKER_OUT_OF_MEMORY";
+        out = { ok: false, error: oom ? { code: "MEMORY_LIMIT", message: `Merging needed more than ${settings.workerMemoryMb} MB of memory` } : { code: "MERGE_FAILED", message: (err as Error).message } };
+      }
+      if (!out.ok) return finishAndNotify(runId, "failed", out.error);
+      const merged = out.result;
+      merge = () => merged;
+    }
+    const merged = await retrying("merge run", log, () => mergeRunOnce(db, runId, merge));
     if (!merged) return;
     log.info({ runId }, "run succeeded");
     const finished = await getRun(db, runId);
@@ -208,7 +225,12 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
   };
   // One pg-boss poller per thread, each handling one job at a time, keeps every thread busy and no more.
   for (let i = 0; i < Math.max(1, settings.threads); i++) {
-    await boss.work<ShardJobData>(SHARD_QUEUE, { batchSize: 1, pollingIntervalSeconds: 0.5, includeMetadata: true }, ([job]) => track(handleJob(job!)));
+    let pollerId = "";
+    pollerId = await boss.work<ShardJobData>(SHARD_QUEUE, { batchSize: 1, pollingIntervalSeconds: 0.5, includeMetadata: true }, async ([job]) => {
+      // pg-boss waits a polling interval after every fetch; while jobs keep coming, fetch the next one at once.
+      if (!stopping) boss.notifyWorker(pollerId);
+      return track(handleJob(job!));
+    });
   }
   const reaper = setInterval(() => void reap(), settings.reapEveryMs);
   log.info({ threads: settings.threads }, "run worker started");

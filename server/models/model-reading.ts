@@ -14,9 +14,9 @@ export interface ReadModel {
 function issueOf(e: unknown): ParseIssue | null {
   if (e instanceof ParseError) return { line: e.line, column: e.column, message: e.reason };
   if (e instanceof EngineError) {
-    // Importers name the line in the message (" (line 12)") when they know it; otherwise point at the start.
+    // Importers name the line in the message (" (line 12)") when they know it; line 0 means "the whole file".
     const at = / \(line (\d+)\)/.exec(e.message);
-    return { line: at ? Number(at[1]) : 1, column: 1, message: e.message.replace(/ \(line \d+\)/, "") };
+    return { line: at ? Number(at[1]) : 0, column: at ? 1 : 0, message: e.message.replace(/ \(line \d+\)/, "") };
   }
   return null;
 }

@@ -15,8 +15,8 @@ import {
   type WitnessReport,
 } from "../../shared/schemas/automata";
 import { hierarchySymmetryClasses, symmetryClassOf, witnessChecks } from "../automata/eca-engine";
-import { computeHierarchyRecord } from "../automata/eca-hierarchy-compute";
-import { findHierarchy, findPair, hierarchyPairs, listHierarchies, rulePairs, saveHierarchy, type StoredHierarchy } from "../db/repositories/eca-hierarchies";
+import { computeHierarchyRecord, recordFromRun } from "../automata/eca-hierarchy-compute";
+import { findFinishedHierarchyRun, findHierarchy, findPair, hierarchyPairs, listHierarchies, rulePairs, saveHierarchy, type StoredHierarchy } from "../db/repositories/eca-hierarchies";
 import { currentUser, requireUser } from "../http/auth";
 import { HttpError } from "../http/errors";
 import { validate } from "../http/validate";
@@ -44,6 +44,11 @@ export function automataRouter(deps: { db: Knex }): Router {
   async function storedOrInline(key: HierarchyParameters, userId: string): Promise<{ hierarchy: StoredHierarchy; computedNow: boolean }> {
     const found = await findHierarchy(db, key);
     if (found) return { hierarchy: found, computedNow: false };
+    const run = await findFinishedHierarchyRun(db, key);
+    if (run) {
+      const record = recordFromRun(run, key);
+      if (record) return { hierarchy: (await saveHierarchy(db, record)).hierarchy, computedNow: false };
+    }
     if (key.maxBlock > INLINE_MAX_BLOCK) throw notStored(key);
     const id = `${key.maxBlock}/${key.timeMode}/${key.radius}`;
     let pending = computing.get(id);

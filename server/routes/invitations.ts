@@ -21,7 +21,7 @@ import { setSessionCookie, signSession } from "../http/session";
 import { validate } from "../http/validate";
 import type { Mailer } from "../mail/mailer";
 
-export const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
+const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
 
 export interface InvitationDeps { db: Knex; log: Logger; mailer: Pick<Mailer, "send">; publicUrl?: string; sessionSecret: string }
 

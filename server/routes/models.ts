@@ -5,6 +5,7 @@ import { Router, type Request } from "express";
 import type { Knex } from "knex";
 import multer from "multer";
 import seedrandom from "seedrandom";
+import { z } from "zod";
 import { EngineError } from "../../shared/engine/errors";
 import type { BooleanNetwork } from "../../shared/engine/network";
 import { compileDefinition, printRule, printRuleText, type ModelDefinition } from "../../shared/engine/rules";
@@ -32,7 +33,7 @@ import {
 } from "../../shared/schemas/models";
 import { recordAudit } from "../db/repositories/audit-log";
 import { findModelFile, insertModelFile, type ModelFile } from "../db/repositories/model-files";
-import { findAnalysis, findRevision, insertRevision, listRevisions, storeAnalysis, type StoredRevision } from "../db/repositories/model-revisions";
+import { findAnalysis, findAttractorRunResult, findRevision, insertRevision, listRevisions, storeAnalysis, type StoredRevision } from "../db/repositories/model-revisions";
 import { findModel, insertModel, listModels, lockNextRevision, setLatestRevision } from "../db/repositories/models";
 import { currentProject, currentUser, projectAccess } from "../http/auth";
 import { HttpError } from "../http/errors";
@@ -46,6 +47,14 @@ import { perturbedDefinition } from "../models/perturbed-definition";
 import { synchronousAttractors, withPhenotypes } from "../models/synchronous-view";
 
 const ProjectParams = ModelParams.pick({ projectId: true });
+
+const AttractorRunResult = z.object({
+  nodeNames: z.array(z.string()),
+  stateCount: z.number().int(),
+  maxTransient: z.number().int(),
+  meanTransient: z.number(),
+  attractors: z.array(z.object({ length: z.number().int(), basin: z.number().int(), states: z.array(z.string()) })),
+});
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MODEL_UPLOAD_LIMIT_BYTES, files: 1, fields: 10 } });
 
@@ -118,13 +127,13 @@ export function modelsRouter(deps: { db: Knex }): Router {
     return compileDefinition(definition);
   }
 
-  function requireInlineSize(nodeCount: number): void {
+  function requireInlineSize(nodeCount: number, revisionId: string): void {
     if (nodeCount > INLINE_ANALYSIS_MAX_NODES) {
       throw new HttpError(
         409,
         "NEEDS_RUN",
         `This model has ${nodeCount} nodes; the exact synchronous analysis of more than ${INLINE_ANALYSIS_MAX_NODES} nodes runs as a background run (kind "attractors")`,
-        { kind: "attractors", nodeCount },
+        { kind: "attractors", nodeCount, revisionId },
       );
     }
   }
@@ -132,10 +141,23 @@ export function modelsRouter(deps: { db: Knex }): Router {
   async function synchronousOf(stored: StoredRevision): Promise<CachedSynchronous> {
     const cached = await findAnalysis<CachedSynchronous>(db, stored.id, "synchronous");
     if (cached) return cached;
-    requireInlineSize(stored.nodeCount);
+    const fromRun = fromAttractorRun(await findAttractorRunResult(db, stored.id));
+    if (fromRun) {
+      await storeAnalysis(db, stored.id, "synchronous", fromRun);
+      return fromRun;
+    }
+    requireInlineSize(stored.nodeCount, stored.id);
     const result = synchronousAttractors(compileStored(stored.definition));
     await storeAnalysis(db, stored.id, "synchronous", result);
     return result;
+  }
+
+  /** An "attractors" run result (server/workers/tasks/attractors.ts) in the shape this API answers with. */
+  function fromAttractorRun(result: unknown): CachedSynchronous | null {
+    const parsed = AttractorRunResult.safeParse(result);
+    if (!parsed.success) return null;
+    const r = parsed.data;
+    return { nodes: r.nodeNames, stateCount: r.stateCount, maxTransient: r.maxTransient, meanTransient: r.meanTransient, attractors: r.attractors.map((a) => ({ ...a, phenotype: null })) };
   }
 
   router.get("/", read, validate({ params: ProjectParams }), async (req, res) => {
@@ -181,7 +203,7 @@ export function modelsRouter(deps: { db: Knex }): Router {
   });
 
   router.post("/generate", write, validate({ params: ProjectParams, body: GenerateModelBody }), async (req, res) => {
-    const body = req.body as import("zod").infer<typeof GenerateModelBody>;
+    const body = req.body as z.infer<typeof GenerateModelBody>;
     const model = generatedModel(body.generator);
     const data = await createModel(req, {
       ...model,
@@ -266,8 +288,8 @@ export function modelsRouter(deps: { db: Knex }): Router {
 
   router.post("/:modelId/revisions/:revision/perturbation", read, validate({ params: RevisionParams, body: PerturbationBody }), async (req, res) => {
     const { stored } = await loadRevision(req);
-    const body = req.body as import("zod").infer<typeof PerturbationBody>;
-    requireInlineSize(stored.nodeCount);
+    const body = req.body as z.infer<typeof PerturbationBody>;
+    requireInlineSize(stored.nodeCount, stored.id);
     const view = perturbedDefinition(stored.definition, body);
     const before = withPhenotypes(await synchronousOf(stored), body.markers);
     const after = withPhenotypes(synchronousAttractors(compileStored(view)), body.markers);
@@ -292,7 +314,7 @@ export function modelsRouter(deps: { db: Knex }): Router {
 
   router.post("/:modelId/revisions/:revision/trajectory", read, validate({ params: RevisionParams, body: TrajectoryBody }), async (req, res) => {
     const { stored } = await loadRevision(req);
-    const body = req.body as import("zod").infer<typeof TrajectoryBody>;
+    const body = req.body as z.infer<typeof TrajectoryBody>;
     const net = compileStored(stored.definition);
     if (body.initial.length !== net.names.length) {
       throw new HttpError(400, "INVALID_INPUT", `The initial state has ${body.initial.length} values but the model has ${net.names.length} nodes`);

@@ -1,6 +1,7 @@
 // Projects: the caller's list, create, read, rename/archive, and delete with the name typed as confirmation.
 import { Router } from "express";
 import type { Knex } from "knex";
+import type { Logger } from "pino";
 import { CreateProjectBody, DeleteProjectBody, UpdateProjectBody } from "../../shared/schemas/projects";
 import { capabilitiesOf } from "../../shared/types/roles";
 import { recordAudit } from "../db/repositories/audit-log";
@@ -10,7 +11,7 @@ import { currentProject, currentUser, projectAccess, requireUser } from "../http
 import { HttpError } from "../http/errors";
 import { validate } from "../http/validate";
 
-export function projectsRouter(deps: { db: Knex }): Router {
+export function projectsRouter(deps: { db: Knex; log: Logger }): Router {
   const { db } = deps;
   const router = Router();
 
@@ -63,6 +64,8 @@ export function projectsRouter(deps: { db: Knex }): Router {
       throw new HttpError(400, "CONFIRMATION_MISMATCH", "Type the project's name exactly to confirm deleting it");
     }
     await deleteProject(db, access.id);
+    // The project's audit log goes with it, so the operator's log is where a deletion stays on record.
+    deps.log.info({ projectId: access.id, projectName: access.name, actorId: currentUser(req).id, requestId: req.id }, "project deleted");
     res.status(204).end();
   });
 

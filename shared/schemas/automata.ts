@@ -93,7 +93,7 @@ export const Hierarchy = HierarchySummary.extend({
    * of the transitive closure that hold only through composition (composed: true, block size a product).
    */
   pairs: z.array(HierarchyPair),
-  /** Rules that emulate no rule but themselves and their complement-conjugate with any 2 <= k <= maxBlock. */
+  /** Rules with no emulation at all (not even of themselves) at any block size 2 <= k <= maxBlock. */
   emulateNothing: z.array(z.number().int()),
   /** Classes of the 256 rules under reflection and 0/1 complement, each sorted, ordered by least member. */
   symmetryClasses: z.array(z.array(z.number().int())),

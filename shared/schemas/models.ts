@@ -10,6 +10,7 @@ const nodeName = z.string().regex(/^[A-Za-z_][A-Za-z0-9_]*$/, "must be a node na
 export const ModelParams = z.object({ projectId: z.uuid(), modelId: z.uuid() });
 export const RevisionParams = ModelParams.extend({ revision: z.coerce.number().int().min(1) });
 
+/** Where reading stopped (1-based); line 0 and column 0 when the problem concerns the whole file. */
 export const ParseIssue = z.object({ line: z.number().int(), column: z.number().int(), message: z.string() });
 export type ParseIssue = z.infer<typeof ParseIssue>;
 

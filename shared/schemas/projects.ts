@@ -11,7 +11,6 @@ export const ProjectName = z
 
 export const ProjectRoleSchema = z.enum(PROJECT_ROLES);
 
-export const ProjectIdParams = z.object({ projectId: z.string().uuid() });
 export const MemberParams = z.object({ projectId: z.string().uuid(), userId: z.string().uuid({ message: "Not a member id" }) });
 export const InvitationParams = z.object({ projectId: z.string().uuid(), invitationId: z.string().uuid({ message: "Not an invitation id" }) });
 export const TokenParams = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, { message: "This invitation link is malformed" }) });

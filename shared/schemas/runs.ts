@@ -1,5 +1,6 @@
 // Runs as the API and the client see them, plus the parameters each run kind accepts.
 import { z } from "zod";
+import { HierarchyRunParameters } from "./automata";
 
 export const RUN_STATES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
 export const RunState = z.enum(RUN_STATES);
@@ -9,13 +10,13 @@ export function isRunFinished(state: RunState): boolean {
   return FINISHED_RUN_STATES.includes(state);
 }
 
-export const RUN_KINDS = ["sleep-count", "attractors"] as const;
+export const RUN_KINDS = ["sleep-count", "eca-hierarchy", "attractors"] as const;
 export const RunKind = z.enum(RUN_KINDS);
 export type RunKind = z.infer<typeof RunKind>;
 
 /** Demonstration kind: sums a deterministic function over [0, itemCount) in shards, sleeping per item. */
 export const SleepCountParams = z.object({
-  itemCount: z.number().int().min(1).max(10_000_000),
+  itemCount: z.number().int().min(1).max(1_000_000_000),
   shardCount: z.number().int().min(1).max(64).default(4),
   delayMsPerItem: z.number().min(0).max(1000).default(0),
 });
@@ -30,6 +31,7 @@ export type AttractorsParams = z.infer<typeof AttractorsParams>;
 export const StartRunBody = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("sleep-count"), modelRevisionId: z.uuid().nullable().default(null), params: SleepCountParams }),
   z.object({ kind: z.literal("attractors"), modelRevisionId: z.uuid().nullable().default(null), params: AttractorsParams }),
+  z.object({ kind: z.literal("eca-hierarchy"), modelRevisionId: z.null().default(null), params: HierarchyRunParameters }),
 ]);
 export type StartRunBody = z.infer<typeof StartRunBody>;
 

@@ -241,6 +241,14 @@ describe("projects", () => {
     expect((await agent.post("/api/projects").send({ name: "y".repeat(121) })).status).toBe(400);
   });
 
+  it("stores a project name full of SQL metacharacters verbatim and finds it again", async () => {
+    const { agent } = await signUpFresh(t.app, "sqlname");
+    const name = `'; DROP TABLE projects; -- "x" \\ %_ ${randomUUID().slice(0, 4)}`;
+    const p = await newProject(agent, name);
+    expect(p.name).toBe(name);
+    expect((await agent.get("/api/projects")).body.data.map((x: { name: string }) => x.name)).toEqual([name]);
+  });
+
   it("deletes only when the typed name matches exactly", async () => {
     const { agent } = await signUpFresh(t.app, "delete");
     const p = await newProject(agent, "Doomed project");
@@ -291,6 +299,21 @@ describe("members and the last owner", () => {
     expect(demoted.body.data.role).toBe("viewer");
     // The former owner is now a viewer and may no longer manage the project.
     expect((await owner.agent.patch(`/api/projects/${p.id}`).send({ name: "Mine again" })).status).toBe(403);
+  });
+
+  it("lets exactly one of two owners demoting each other at the same moment succeed", async () => {
+    const a = await signUpFresh(t.app, "race-a");
+    const b = await signUpFresh(t.app, "race-b");
+    const p = await newProject(a.agent);
+    const token = await invite(a.agent, p.id, b.email, "owner");
+    expect((await b.agent.post(`/api/invitations/${token}/accept`).send({})).status).toBe(200);
+    const results = await Promise.all([
+      a.agent.patch(`/api/projects/${p.id}/members/${b.id}`).send({ role: "viewer" }),
+      b.agent.patch(`/api/projects/${p.id}/members/${a.id}`).send({ role: "viewer" }),
+    ]);
+    expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
+    const owners = await t.db("memberships").where({ project_id: p.id, role: "owner" });
+    expect(owners).toHaveLength(1);
   });
 
   it("refuses an unknown role and a member id that is not a uuid, changing nothing", async () => {

@@ -4,18 +4,24 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ecaRule } from "../../shared/engine/automata";
 import { verifyEmulation } from "../../shared/engine/block-emulation";
-import { deleteHierarchy, findHierarchy, hierarchyPairsWithWitnesses } from "../../server/db/repositories/eca-hierarchies";
+import { computeHierarchyRecord } from "../../server/automata/eca-hierarchy-compute";
+import { deleteHierarchy, findHierarchy, hierarchyPairs, hierarchyPairsWithWitnesses } from "../../server/db/repositories/eca-hierarchies";
+import { getRun } from "../../server/db/repositories/runs";
+import { loadRunSettings } from "../../server/jobs/run-settings";
+import { startRunWorker } from "../../server/jobs/run-worker";
+import { createLogger } from "../../server/logger";
 import { signInAs, type Agent } from "../support/sessions";
-import { buildTestApp } from "../support/test-app";
+import { buildTestApp, testConfig } from "../support/test-app";
 
 const t = buildTestApp();
+const DEMO_PROJECT = "00000000-0000-4000-8000-000000000001";
 let viewer: Agent;
 let viewerId: string;
 
 beforeAll(async () => {
   viewer = await signInAs(t.app, "viewer@demo.emulant.test");
   viewerId = (await viewer.get("/api/users/me")).body.data.id as string;
-  for (const maxBlock of [4, 11, 17]) await deleteHierarchy(t.db, { maxBlock, timeMode: "block", radius: 1 });
+  for (const maxBlock of [4, 5, 11, 17]) await deleteHierarchy(t.db, { maxBlock, timeMode: "block", radius: 1 });
 });
 afterAll(() => t.close());
 
@@ -151,5 +157,47 @@ describe("GET /api/automata/witness", () => {
     const range = await viewer.get("/api/automata/witness?source=18&target=300&maxBlock=11");
     expect(range.status).toBe(400);
     expect(range.body.error.message).toContain("query.target: target must be at most 255");
+  });
+});
+
+describe("hierarchies from background runs", () => {
+  it("a succeeded eca-hierarchy run's result is filed on the next read, attributed to the run, and reused after", async () => {
+    const config = testConfig();
+    const log = createLogger(config);
+    const worker = await startRunWorker({
+      db: t.db, log, databaseUrl: config.DATABASE_URL, mailer: null, publicUrl: config.publicUrl,
+      settings: { ...loadRunSettings({}, 2), notifyAfterSeconds: 3600 },
+    });
+    try {
+      const modeler = await signInAs(t.app, "modeler@demo.emulant.test");
+      const modelerId = (await modeler.get("/api/users/me")).body.data.id as string;
+      const started = await modeler.post(`/api/projects/${DEMO_PROJECT}/runs`).send({ kind: "eca-hierarchy", params: { maxBlock: 5 } });
+      expect(started.status).toBe(201);
+      const runId = started.body.data.id as string;
+      const deadline = Date.now() + 60_000;
+      let state = started.body.data.state as string;
+      while (!["succeeded", "failed", "cancelled"].includes(state) && Date.now() < deadline) {
+        await new Promise((r) => setTimeout(r, 200));
+        state = (await getRun(t.db, runId))!.state;
+      }
+      expect(state).toBe("succeeded");
+
+      const first = await viewer.get("/api/automata/hierarchy?maxBlock=5");
+      expect(first.status).toBe(200);
+      expect(first.body.data.computedNow).toBe(false);
+      expect(first.body.data.runId).toBe(runId);
+      expect(first.body.data.computedBy.id).toBe(modelerId);
+      // the run's shards and the inline computation must agree pair for pair
+      const inline = computeHierarchyRecord({ maxBlock: 5, timeMode: "block", radius: 1 }, { computedBy: null });
+      const stored = await hierarchyPairs(t.db, first.body.data.id);
+      expect(stored.map((p) => [p.source, p.target, p.minBlock])).toEqual(inline.pairs.map((p) => [p.source, p.target, p.minBlock]));
+
+      const again = await viewer.get("/api/automata/hierarchy?maxBlock=5");
+      expect(again.body.data.id).toBe(first.body.data.id);
+      const rows = await t.db("eca_hierarchies").where({ max_block: 5 }).count<{ count: string }[]>("* as count");
+      expect(Number(rows[0]!.count)).toBe(1);
+    } finally {
+      await worker.stop();
+    }
   });
 });

@@ -325,6 +325,37 @@ describe("analyses", () => {
   });
 });
 
+describe("large models", () => {
+  it("answers 409 NEEDS_RUN above 16 nodes, then serves and caches the result of a succeeded attractors run", async () => {
+    const names = Array.from({ length: 17 }, (_, i) => `G${i}`);
+    // A ring of 17 copies: each node takes its left neighbour's value, so the state rotates.
+    const ring = names.map((n, i) => `${n}' = ${names[(i + 16) % 17]}`).join("\n") + "\n";
+    const { model } = await createRules("Ring of 17", ring);
+    const refused = await viewer.get(`${base}/${model.id}/revisions/1/attractors`);
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.code).toBe("NEEDS_RUN");
+    const revisionId = refused.body.error.details.revisionId as string;
+    // What the runs worker stores for kind "attractors" (server/workers/tasks/attractors.ts), written directly here:
+    // this test is about reuse, the analysis itself is tested in the engine.
+    const result = {
+      nodeNames: names,
+      stateCount: 2 ** 17,
+      maxTransient: 0,
+      meanTransient: 0,
+      attractors: [{ length: 1, basin: 1, states: ["0".repeat(17)] }, { length: 1, basin: 1, states: ["1".repeat(17)] }],
+    };
+    await t.db("runs").insert({
+      project_id: PROJECT, model_revision_id: revisionId, kind: "attractors", params: "{}", params_hash: "test", time_limit_seconds: 60,
+      state: "succeeded", result: JSON.stringify(result), finished_at: t.db.fn.now(), shard_count: 0,
+    });
+    const served = await viewer.get(`${base}/${model.id}/revisions/1/attractors?markers=G0`);
+    expect(served.status).toBe(200);
+    expect(served.body.data.attractors.map((a: { phenotype: string }) => a.phenotype)).toEqual(["0", "1"]);
+    const [cached] = await t.db("model_analyses").where({ revision_id: revisionId }).count<{ count: string }[]>("* as count");
+    expect(Number(cached!.count)).toBe(1);
+  });
+});
+
 describe("permissions", () => {
   it("lets a viewer read but not write, and hides the models of a project from non-members", async () => {
     const denied = await viewer.post(base).send({ name: "Nope", ruleText: TOGGLE });

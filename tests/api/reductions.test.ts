@@ -54,6 +54,7 @@ async function upload(agent: Agent, source: keyof typeof rules, target: keyof ty
 describe("POST /reductions (certificate upload)", () => {
   it("refuses a tampered certificate with INVALID_CERTIFICATE and stores nothing", async () => {
     const cert = certificate(rules.F, rules.G, 2);
+    if (cert.notion !== "block-emulation") throw new Error("expected a block emulation certificate");
     const tampered = { ...cert, witness: { ...cert.witness, blocks: [{ ...cert.witness.blocks[0]!, one: "10" }] } };
     const before = (await modeler.get(`${base}/reductions?sourceModelId=${modelIds.F}`)).body.data.length;
     const res = await upload(modeler, "F", "G", tampered);

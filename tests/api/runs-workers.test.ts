@@ -150,6 +150,40 @@ describe("sharded runs across worker processes", () => {
   });
 });
 
+describe("a worker stopped with SIGTERM", () => {
+  it("hands its shards back with their checkpoints at once, and another worker finishes the run", async () => {
+    const stopping = await startWorkerProcess(2);
+    const stoppingPid = workerPids[workerPids.length - 1]!;
+    // Only this worker may take the shards, so that it holds some when it is stopped.
+    for (const pid of workerPids.slice(0, -1)) {
+      try {
+        process.kill(pid, "SIGKILL");
+      } catch {
+        // already gone
+      }
+    }
+    const run = await start({ itemCount: 1000, shardCount: 4, delayMsPerItem: 8 });
+    const held = await waitFor("a checkpointed shard of the worker", async () => {
+      const rows = await db("run_shards").where({ run_id: run.id, state: "running" }).whereNotNull("cursor").whereRaw("held_by like ?", [`%:${stoppingPid}`]);
+      return rows.length ? rows : null;
+    });
+    const exited = new Promise((r) => stopping.once("exit", r));
+    process.kill(stoppingPid, "SIGTERM");
+    await exited;
+    // Back in the queue right away (no heartbeat timeout), still with the cursor they had reached.
+    const after = await db("run_shards").whereIn("id", held.map((h) => h.id));
+    for (const s of after) {
+      expect(s.state).toBe("queued");
+      expect(s.boss_job_id).not.toBeNull();
+      expect(s.cursor).toBeGreaterThanOrEqual(held.find((h) => h.id === s.id)!.cursor);
+    }
+    await startWorkerProcess(2);
+    const done = await finished(run.id);
+    expect(done.state).toBe("succeeded");
+    expect(done.result).toEqual(reference(1000));
+  });
+});
+
 describe("a PostgreSQL restart during a run", () => {
   const dataDir = process.env.EMULANT_TEST_DATA_DIR ?? path.join(root, ".data/pg-test");
   const pgCtl = () => {

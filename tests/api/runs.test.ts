@@ -1,11 +1,13 @@
 // The runs API against the real PostgreSQL and pg-boss, with one in-process worker where a run must finish.
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { computeHierarchyRecord } from "../../server/automata/eca-hierarchy-compute";
 import { getRun } from "../../server/db/repositories/runs";
 import { loadRunSettings } from "../../server/jobs/run-settings";
 import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
 import { createLogger } from "../../server/logger";
 import { createFakeMailer } from "../../server/mail/mailer";
+import { HierarchyRunResult } from "../../shared/schemas/automata";
 import type { Run } from "../../shared/schemas/runs";
 import { signInAs, type Agent } from "../support/sessions";
 import { buildTestApp, testConfig } from "../support/test-app";
@@ -192,5 +194,24 @@ describe("runs with an in-process worker", () => {
     const fixed = result.attractors.filter((a) => a.length === 1).flatMap((a) => a.states).sort();
     expect(fixed).toEqual(["01", "10"]);
     expect(result.attractors.filter((a) => a.length === 2)).toHaveLength(1);
+  });
+});
+
+describe("the eca-hierarchy kind", () => {
+  beforeAll(() => startWorker());
+  afterAll(() => stopWorker());
+
+  it("computes the hierarchy in shards whose merge equals the one-call computation, as the automata pages expect it", async () => {
+    const res = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "eca-hierarchy", params: { maxBlock: 3 } });
+    expect(res.status).toBe(201);
+    expect(res.body.data.shardCount).toBe(8);
+    const done = await finished(res.body.data.id, 60_000);
+    expect(done.state).toBe("succeeded");
+    const result = done.result as { pairs: unknown[]; emulateNothing: number[]; maxBlock: number };
+    const inline = computeHierarchyRecord({ maxBlock: 3, timeMode: "block", radius: 1 }, { computedBy: null });
+    expect(result.maxBlock).toBe(3);
+    expect(result.pairs).toEqual(inline.pairs);
+    expect(result.emulateNothing).toEqual(inline.emulateNothing);
+    expect(HierarchyRunResult.safeParse(done.result).success).toBe(true);
   });
 });

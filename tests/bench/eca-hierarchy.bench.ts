@@ -3,11 +3,14 @@
 // codewords cell by cell. Each measurement runs in its own child process so that maxRSS belongs to that run alone.
 // Usage: npm run bench:eca   (wall-clock figures on a shared 2-core machine: expect noise)
 import { spawnSync } from "node:child_process";
-import { fileURLToPath } from "node:url";
-import { ecaHierarchy, naiveEcaMinBlocks } from "../../shared/engine/block-emulation";
+import { fileURLToPath, pathToFileURL } from "node:url";
+import { Worker, isMainThread, parentPort, workerData } from "node:worker_threads";
+import { ecaHierarchy, naiveEcaMinBlocks, runHierarchyShard, mergeHierarchyParts, assembleEcaHierarchy } from "../../shared/engine/block-emulation";
+import type { HierarchyPart } from "../../shared/engine/block-emulation";
 
 interface Measure {
   seconds: number;
+  cpuSeconds: number;
   maxRssMB: number;
   peakHeapMB: number;
   pairs: number;
@@ -24,12 +27,32 @@ function heapMB(): number {
   return (m.heapUsed + m.arrayBuffers) / 2 ** 20;
 }
 
-function measureChild(kind: string, a: number, b: number): void {
+/** The hierarchy split into `threads` shards, one worker thread each, merged and assembled on the main thread. */
+async function threadedHierarchy(maxBlock: number, threads: number, self: string): Promise<{ pairs: number; relations: number }> {
+  const parts = await Promise.all(
+    Array.from(
+      { length: threads },
+      (_, shardIndex) =>
+        new Promise<HierarchyPart>((resolve, reject) => {
+          // an eval'd bootstrap registers the tsx loader in the thread, then imports this file
+          const bootstrap = `import("tsx/esm/api").then((api) => { api.register(); return import(${JSON.stringify(pathToFileURL(self).href)}); })`;
+          const w = new Worker(bootstrap, { eval: true, workerData: { maxBlock, shardIndex, shardCount: threads } });
+          w.once("message", resolve);
+          w.once("error", reject);
+        }),
+    ),
+  );
+  const h = assembleEcaHierarchy(mergeHierarchyParts(parts));
+  return { pairs: h.pairsExamined, relations: h.relations.length };
+}
+
+async function measureChild(kind: string, a: number, b: number): Promise<void> {
   let peak = heapMB();
   const sample = () => {
     peak = Math.max(peak, heapMB());
   };
   const t0 = performance.now();
+  const cpu0 = process.cpuUsage();
   let pairs = 0;
   let relations: number | undefined;
   let rules: number | undefined;
@@ -37,6 +60,8 @@ function measureChild(kind: string, a: number, b: number): void {
     const h = ecaHierarchy(a, { onProgress: sample });
     pairs = h.pairsExamined;
     relations = h.relations.length;
+  } else if (kind === "threads") {
+    ({ pairs, relations } = await threadedHierarchy(a, b, fileURLToPath(import.meta.url)));
   } else {
     // naive: block size a on `b` source rules spread evenly over 0..255
     const sources = Array.from({ length: b }, (_, i) => Math.floor((i * 256) / b));
@@ -46,7 +71,9 @@ function measureChild(kind: string, a: number, b: number): void {
   }
   sample();
   const seconds = (performance.now() - t0) / 1000;
-  console.log(JSON.stringify({ seconds, maxRssMB: process.resourceUsage().maxRSS / 1024, peakHeapMB: peak, pairs, relations, rules }));
+  const cpu = process.cpuUsage(cpu0);
+  const cpuSeconds = (cpu.user + cpu.system) / 1e6;
+  console.log(JSON.stringify({ seconds, cpuSeconds, maxRssMB: process.resourceUsage().maxRSS / 1024, peakHeapMB: peak, pairs, relations, rules }));
 }
 
 function spawn(self: string, kind: string, a: number, b: number, timeoutS?: number): Measure | null {
@@ -64,10 +91,15 @@ function spawn(self: string, kind: string, a: number, b: number, timeoutS?: numb
 
 const naivePairs = (k: number) => 256 * 2 ** k * (2 ** k - 1);
 
-function main(): void {
+async function main(): Promise<void> {
+  if (!isMainThread) {
+    const { maxBlock, shardIndex, shardCount } = workerData as { maxBlock: number; shardIndex: number; shardCount: number };
+    parentPort!.postMessage(runHierarchyShard({ maxBlock, shardIndex, shardCount }).part);
+    return;
+  }
   const args = process.argv.slice(2);
   if (args[0] === "--one") {
-    measureChild(args[1]!, Number(args[2]), Number(args[3]));
+    await measureChild(args[1]!, Number(args[2]), Number(args[3]));
     return;
   }
   const self = fileURLToPath(import.meta.url);
@@ -75,6 +107,7 @@ function main(): void {
   const maxK = Math.max(...blocks);
   console.log("Block-emulation hierarchy of the 256 elementary rules, block sizes 1..K, time t = k. Shared 2-core machine: timings are noisy.");
   console.log("Targets: K=11 under 5 s, K=14 under 10 min (fast engine, one thread).");
+  console.log("CPU s is the run's own processor time (user + system): less sensitive than wall time to other work on the machine.");
   console.log("Memory: peak resident set of the run's own process (maxRSS, includes ~60 MB of Node/tsx runtime) and peak V8 heap + buffers.");
   console.log(`Naive reference: every ordered pair of distinct k-cell words, simulated cell by cell, for all 256 rules and every k <= K.`);
   console.log(`  Capped: a block size whose full run would exceed ${NAIVE_BUDGET_S} s is run on an even sample of source rules and scaled to 256;`);
@@ -82,6 +115,7 @@ function main(): void {
   console.log("");
   // naive, one block size at a time
   const naive: { k: number; seconds: number; how: string; maxRssMB: number; peakHeapMB: number }[] = [];
+  // the naive cost model uses wall time like the fast figures it is compared with
   let perPair = 0;
   let perPairK = 1;
   for (let k = 1; k <= maxK; k++) {
@@ -103,7 +137,7 @@ function main(): void {
   }
   console.log("naive per block size: " + naive.map((n) => `k=${n.k} ${n.seconds.toFixed(1)} s (${n.how})`).join("; "));
   console.log("");
-  console.log("K  | fast s   maxRSS MB  heap MB  pairs examined | naive s (how)                          maxRSS MB  heap MB  pairs examined | naive/fast time  pairs ratio");
+  console.log("K  | fast s  (CPU s)  maxRSS MB  heap MB  pairs examined | naive s (how)                          maxRSS MB  heap MB  pairs examined | naive/fast time  pairs ratio");
   for (const K of blocks) {
     const fast = spawn(self, "fast", K, 0)!;
     const parts = naive.filter((n) => n.k <= K);
@@ -114,18 +148,24 @@ function main(): void {
     const nRss = Math.max(...parts.map((n) => n.maxRssMB).filter((x) => !Number.isNaN(x)));
     const nHeap = Math.max(...parts.map((n) => n.peakHeapMB).filter((x) => !Number.isNaN(x)));
     console.log(
-      `${String(K).padEnd(2)} | ${fast.seconds.toFixed(2).padStart(6)}  ${fast.maxRssMB.toFixed(0).padStart(9)}  ${fast.peakHeapMB.toFixed(0).padStart(7)}  ${String(fast.pairs).padStart(14)} | ` +
+      `${String(K).padEnd(2)} | ${fast.seconds.toFixed(2).padStart(6)} (${fast.cpuSeconds.toFixed(2).padStart(6)})  ${fast.maxRssMB.toFixed(0).padStart(9)}  ${fast.peakHeapMB.toFixed(0).padStart(7)}  ${String(fast.pairs).padStart(14)} | ` +
         `${nSeconds.toFixed(1).padStart(8)} (${how})`.padEnd(40) +
         ` ${nRss.toFixed(0).padStart(9)}  ${nHeap.toFixed(0).padStart(7)}  ${String(nPairs).padStart(14)} | ${(nSeconds / fast.seconds).toFixed(0).padStart(15)}  ${(nPairs / fast.pairs).toFixed(0).padStart(11)}`,
     );
   }
   console.log("");
+  console.log("Same hierarchy split into 2 shards on 2 worker threads (CPU s counts both threads):");
+  for (const K of [11, 12]) {
+    const m = spawn(self, "threads", K, 2)!;
+    console.log(`K=${K}: ${m.seconds.toFixed(2)} s wall (${m.cpuSeconds.toFixed(2)} s CPU), maxRSS ${m.maxRssMB.toFixed(0)} MB, ${m.pairs} pairs examined, ${m.relations} relations`);
+  }
+  console.log("");
   const k14 = spawn(self, "fast", 14, 0, FULL_K14_LIMIT_S);
   if (k14) {
-    console.log(`K=14 fast hierarchy: ${k14.seconds.toFixed(1)} s, maxRSS ${k14.maxRssMB.toFixed(0)} MB, heap ${k14.peakHeapMB.toFixed(0)} MB, ${k14.pairs} pairs examined, ${k14.relations} relations`);
+    console.log(`K=14 fast hierarchy: ${k14.seconds.toFixed(1)} s wall (${k14.cpuSeconds.toFixed(1)} s CPU), maxRSS ${k14.maxRssMB.toFixed(0)} MB, heap ${k14.peakHeapMB.toFixed(0)} MB, ${k14.pairs} pairs examined, ${k14.relations} relations`);
   } else {
     console.log(`K=14 fast hierarchy: did not finish within ${FULL_K14_LIMIT_S} s`);
   }
 }
 
-main();
+void main();

@@ -10,7 +10,8 @@ let browser: Awaited<ReturnType<typeof openBrowser>>;
 beforeAll(async () => {
   server = await startTestServer();
   browser = await openBrowser();
-  const res = await browser.context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email: "viewer@demo.emulant.test", password: "demo-password" } });
+  // a modeler of the demo project may also start the background run for large block sizes
+  const res = await browser.context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email: "modeler@demo.emulant.test", password: "demo-password" } });
   if (res.status() !== 200) throw new Error(`sign-in failed: ${res.status()}`);
 });
 afterAll(async () => {
@@ -69,5 +70,22 @@ describe("automata screens in headless Chromium", () => {
     expect(await canvasHasDrawing('[data-testid="witness-source-run"]')).toBe(true);
     await screenshot(page, "automata-rule-18");
     expect(errors).toEqual([]);
+  });
+
+  it("above block size 11 the page offers a background run and follows it with a progress bar", async () => {
+    const { page } = browser;
+    await page.goto(server.baseUrl + "/automata?maxBlock=16");
+    await expect.poll(() => page.getByTestId("hierarchy-not-computed").isVisible(), { timeout: 30_000 }).toBe(true);
+    await page.getByRole("button", { name: "Compute block sizes up to 16 in the background" }).click();
+    await expect.poll(() => page.getByTestId("hierarchy-run-progress").getAttribute("data-state"), { timeout: 30_000 }).toMatch(/queued|running/);
+    expect(await page.getByRole("progressbar").count()).toBe(1);
+    await screenshot(page, "automata-background-run");
+    // no worker runs in this test: cancel the run so it does not hold a queue slot of the demo project
+    const runs = await browser.context.request.get(server.baseUrl + "/api/projects/00000000-0000-4000-8000-000000000001/runs?kind=eca-hierarchy");
+    for (const run of (await runs.json()).data as { id: string; state: string }[]) {
+      if (run.state === "queued" || run.state === "running") {
+        await browser.context.request.post(server.baseUrl + `/api/projects/00000000-0000-4000-8000-000000000001/runs/${run.id}/cancel`);
+      }
+    }
   });
 });

@@ -78,4 +78,33 @@ describe("models screens in headless Chromium", () => {
     await screenshot(page, "models-detail-r2");
     expect(errors).toEqual([]);
   });
+
+  it("offers a background run for the 24-node demo model and lays out its wiring", async () => {
+    const { page } = browser;
+    await page.goto(`${server.baseUrl}/projects/${PROJECT}/models/00000000-0000-4000-8000-000000000305`);
+    await expect.poll(() => page.getByTestId("wiring-diagram").getAttribute("data-nodes"), { timeout: 30_000 }).toBe("24");
+    await expect.poll(() => page.getByTestId("attractor-run-panel").isVisible()).toBe(true);
+    expect(await page.getByTestId("start-attractor-run").isVisible()).toBe(true);
+    await page.waitForTimeout(500);
+    await screenshot(page, "models-large-before-search");
+    await page.getByTestId("node-search").fill("Arr1");
+    await page.waitForTimeout(500);
+    await screenshot(page, "models-large");
+  });
+
+  it("hides the writing controls from a viewer", async () => {
+    const viewer = await openBrowser();
+    try {
+      const res = await viewer.context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email: "viewer@demo.emulant.test", password: "demo-password" } });
+      expect(res.status()).toBe(200);
+      await viewer.page.goto(`${server.baseUrl}/projects/${PROJECT}/models/00000000-0000-4000-8000-000000000302`);
+      await expect.poll(() => viewer.page.getByTestId("attractor-table").getAttribute("data-count"), { timeout: 30_000 }).toBe("12");
+      expect(await viewer.page.getByTestId("rule-editor").count()).toBe(0);
+      await viewer.page.goto(`${server.baseUrl}/projects/${PROJECT}/models`);
+      await expect.poll(() => viewer.page.getByTestId("models-table").isVisible()).toBe(true);
+      expect(await viewer.page.getByTestId("new-model").count()).toBe(0);
+    } finally {
+      await viewer.close();
+    }
+  });
 });

@@ -148,3 +148,21 @@ export async function saveHierarchy(db: Knex, record: HierarchyRecord): Promise<
 export async function deleteHierarchy(db: Knex, key: HierarchyKey): Promise<number> {
   return db("eca_hierarchies").where({ max_block: key.maxBlock, time_mode: key.timeMode, radius: key.radius }).delete();
 }
+
+export interface FinishedHierarchyRun { id: string; startedBy: string | null; result: unknown; wallMs: number | null }
+
+/**
+ * The latest succeeded background "eca-hierarchy" run for these parameters whose result has not been stored yet
+ * (the run queue merges results without knowing about this table, so the first reader files them).
+ */
+export async function findFinishedHierarchyRun(db: Knex, key: HierarchyKey): Promise<FinishedHierarchyRun | null> {
+  const row = (await db("runs")
+    .where({ kind: "eca-hierarchy", state: "succeeded" })
+    .whereRaw("(params->>'maxBlock')::int = ?", [key.maxBlock])
+    .whereRaw("coalesce(params->>'timeMode', 'block') = ?", [key.timeMode])
+    .whereNotNull("result")
+    .orderBy("finished_at", "desc")
+    .select("id", "started_by", "result", db.raw("extract(epoch from (finished_at - started_at)) * 1000 as wall_ms"))
+    .first()) as { id: string; started_by: string | null; result: unknown; wall_ms: string | number | null } | undefined;
+  return row ? { id: row.id, startedBy: row.started_by, result: row.result, wallMs: row.wall_ms === null ? null : Number(row.wall_ms) } : null;
+}

@@ -104,3 +104,12 @@ export async function storeAnalysis(db: Knex, revisionId: string, kind: "synchro
     .onConflict(["revision_id", "kind", "params_key"])
     .ignore();
 }
+
+/** The result of the newest succeeded "attractors" run of a revision (the runs feature computes large ones). */
+export async function findAttractorRunResult(db: Knex, revisionId: string): Promise<unknown | null> {
+  const row = (await db("runs")
+    .where({ model_revision_id: revisionId, kind: "attractors", state: "succeeded" })
+    .orderBy("finished_at", "desc")
+    .first("result")) as { result: unknown } | undefined;
+  return row?.result ?? null;
+}

@@ -1,3 +1,2 @@
 export { transpose32 } from "./transpose32";
 export { reverseBits, compareStateIndices, rotateToSmallest } from "./state-order";
-export { popcount32 } from "./popcount";

@@ -18,8 +18,8 @@ describe("blockEmulations", () => {
   });
 
   it("blockEmulations agrees with the reference for shorter time scales t < k", () => {
-    for (const [k, t] of [[3, 1], [4, 2], [5, 3], [5, 1], [6, 4]] as const) {
-      for (let f = 0; f < 256; f += k === 6 ? 3 : 1) {
+    for (const [k, t] of [[3, 1], [4, 2], [5, 3], [6, 4]] as const) {
+      for (let f = 0; f < 256; f += k >= 5 ? 3 : 1) {
         const rule = ecaRule(f);
         const fast = blockEmulations(rule, k, t);
         expect(targets(fast.emulations), `rule ${f}, k ${k}, t ${t}`).toEqual(targets(naiveEmulations(rule, k, t).emulations));

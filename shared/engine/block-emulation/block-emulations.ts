@@ -32,8 +32,8 @@ export interface BlockSearchOptions {
 
 const conjugate = Array.from({ length: 256 }, (_, g) => complementEca(g));
 
-/** Mixed triples p = 4a + 2b + c in the order they are checked; 000 and 111 are settled before pairing. */
-const MIXED = [1, 4, 2, 6, 3, 5];
+/** Below this many fixed points, plain pairing is cheaper than building the edge tables. */
+const EDGE_TABLE_MIN_FIXED = 48;
 
 export function blockEmulations(rule: RuleTable, block: number, time = block, options: BlockSearchOptions = {}): BlockEmulationResult {
   const map = middleBlockMap(rule, block, time);
@@ -73,12 +73,25 @@ function fixedPointSearch(map: ReturnType<typeof middleBlockMap>, shouldStop?: (
   };
   /** The target the pair encodes, given bits 0 and 7 already, or -1 when some mixed triple leaves the code. */
   const complete = (u0: number, u1: number, g: number): number => {
-    for (let q = 0; q < 6; q++) {
-      const p = MIXED[q]!;
-      const out = map.middle(p & 4 ? u1 : u0, p & 2 ? u1 : u0, p & 1 ? u1 : u0);
-      if (out === u1) g |= 1 << p;
-      else if (out !== u0) return -1;
-    }
+    // the mixed triples, the ones most often failing first; each output must be a codeword
+    let out = map.middle(u0, u0, u1);
+    if (out === u1) g |= 2;
+    else if (out !== u0) return -1;
+    out = map.middle(u1, u0, u0);
+    if (out === u1) g |= 16;
+    else if (out !== u0) return -1;
+    out = map.middle(u0, u1, u0);
+    if (out === u1) g |= 4;
+    else if (out !== u0) return -1;
+    out = map.middle(u1, u1, u0);
+    if (out === u1) g |= 64;
+    else if (out !== u0) return -1;
+    out = map.middle(u0, u1, u1);
+    if (out === u1) g |= 8;
+    else if (out !== u0) return -1;
+    out = map.middle(u1, u0, u1);
+    if (out === u1) g |= 32;
+    else if (out !== u0) return -1;
     return g;
   };
   const ring = new Int32Array(size);
@@ -103,18 +116,75 @@ function fixedPointSearch(map: ReturnType<typeof middleBlockMap>, shouldStop?: (
     if (g >= 0) record(g, u0, u1);
   }
   // both fixed: G(000) = 0, G(111) = 1; unordered pairs suffice since swapping gives the conjugate
-  const nf = fixed.length;
-  for (let i = 0; i < nf; i++) {
-    if (shouldStop && (i & 63) === 0 && shouldStop()) throw new CancelledError();
-    const u0 = fixed[i]!;
-    for (let j = i + 1; j < nf; j++) {
-      const u1 = fixed[j]!;
-      const g = complete(u0, u1, 0x80);
-      if (g >= 0) record(g, u0, u1);
-    }
-    pairs += nf - i - 1;
-  }
+  pairs += pairFixedPoints(map, fixed, complete, record, shouldStop);
   const list: PackedEmulation[] = [];
   for (let g = 0; g < 256; g++) if (has[g]) list.push({ target: g, u0: u0s[g]!, u1: u1s[g]! });
   return { list, pairsExamined: pairs };
+}
+
+/**
+ * Each unordered pair of fixed points once, filtered on the triples 001 and 100 where u1 sits at one edge only: the first c
+ * cells of M(u0, u0, u1) depend on u1's first c cells alone, and the last c cells of M(u1, u0, u0) on its last c
+ * cells, so per-u0 tables over those c cells admit u1 only from the few prefix buckets that can map to a codeword.
+ */
+function pairFixedPoints(
+  map: ReturnType<typeof middleBlockMap>,
+  fixed: number[],
+  complete: (u0: number, u1: number, g: number) => number,
+  record: (g: number, u0: number, u1: number) => void,
+  shouldStop?: () => boolean,
+): number {
+  const k = map.block;
+  const nf = fixed.length;
+  let pairs = 0;
+  if (nf < EDGE_TABLE_MIN_FIXED) {
+    for (let i = 0; i < nf; i++) {
+      const u0 = fixed[i]!;
+      for (let j = i + 1; j < nf; j++) {
+        const u1 = fixed[j]!;
+        pairs++;
+        const g = complete(u0, u1, 0x80);
+        if (g >= 0) record(g, u0, u1);
+      }
+    }
+    return pairs;
+  }
+  // cost ~ nf * 2^c for the tables plus nf^2 / 2^c for the buckets: balance at 2^c ~ sqrt(nf)
+  const c = Math.max(1, Math.min(k, Math.round(Math.log2(nf) / 2) + 1));
+  const width = 1 << c;
+  const cmask = width - 1;
+  const high = k - c;
+  // fixed points sorted by their first c cells, bucket b = sorted[start[b] .. start[b+1])
+  const start = new Int32Array(width + 1);
+  for (const u of fixed) start[(u & cmask) + 1]!++;
+  for (let b = 0; b < width; b++) start[b + 1]! += start[b]!;
+  const fill = start.slice(0, width);
+  const sorted = new Int32Array(nf);
+  for (const u of fixed) sorted[fill[u & cmask]!++] = u;
+  const left = new Int32Array(width);
+  const right = new Int32Array(width);
+  for (let i = 0; i < nf; i++) {
+    if (shouldStop && (i & 63) === 0 && shouldStop()) throw new CancelledError();
+    const u0 = sorted[i]!;
+    const u0head = u0 & cmask;
+    const u0tail = u0 >>> high;
+    for (let p = 0; p < width; p++) {
+      left[p] = map.middle(u0, u0, p) & cmask;
+      right[p] = map.middle(p << high, u0, u0) >>> high;
+    }
+    for (let p = 0; p < width; p++) {
+      const l = left[p]!;
+      if (l !== p && l !== u0head) continue;
+      for (let q = Math.max(start[p]!, i + 1); q < start[p + 1]!; q++) {
+        const u1 = sorted[q]!;
+        const tail = u1 >>> high;
+        const rt = right[tail]!;
+        if (rt !== tail && rt !== u0tail) continue;
+        pairs++;
+        const g = complete(u0, u1, 0x80);
+        if (g >= 0) record(g, u0, u1);
+      }
+    }
+  }
+  return pairs;
 }

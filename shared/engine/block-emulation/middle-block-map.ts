@@ -44,11 +44,27 @@ function chunkTable(rule: RuleTable, steps: number): Uint8Array {
   return table;
 }
 
-/** s steps on every (8 + 2rs)-cell word; each step goes through a one-step table of 8-cell chunks. */
+/**
+ * s steps on every (8 + 2rs)-cell word: one step through the one-step table of 8-cell chunks, then the cached
+ * (s-1)-step table, so each table costs a few lookups per entry.
+ */
 function buildChunkTable(rule: RuleTable, steps: number): Uint8Array {
   const r = rule.radius;
-  const oneIn = 8 + 2 * r;
-  const one = new Uint8Array(1 << oneIn);
+  if (steps > 1) {
+    const one = chunkTable(rule, 1);
+    const oneMask = one.length - 1;
+    const prev = chunkTable(rule, steps - 1);
+    const prevMask = prev.length - 1;
+    const prevBits = 8 + 2 * r * (steps - 1);
+    const table = new Uint8Array(1 << (8 + 2 * r * steps));
+    for (let w = 0; w < table.length; w++) {
+      let v = 0;
+      for (let shift = 0; shift < prevBits; shift += 8) v |= one[(w >>> shift) & oneMask]! << shift;
+      table[w] = prev[v & prevMask]!;
+    }
+    return table;
+  }
+  const one = new Uint8Array(1 << (8 + 2 * r));
   if (r === 1) {
     for (let w = 0; w < one.length; w++) one[w] = stepPackedWord(rule, w) & 255;
   } else {
@@ -63,19 +79,7 @@ function buildChunkTable(rule: RuleTable, steps: number): Uint8Array {
       one[w] = out;
     }
   }
-  const oneMask = one.length - 1;
-  const bits = 8 + 2 * r * steps;
-  const table = new Uint8Array(1 << bits);
-  for (let w = 0; w < table.length; w++) {
-    let v = w;
-    for (let s = 0; s < steps; s++) {
-      let next = 0;
-      for (let shift = 0; shift < bits; shift += 8) next |= one[(v >>> shift) & oneMask]! << shift;
-      v = next;
-    }
-    table[w] = v & 255;
-  }
-  return table;
+  return one;
 }
 
 export function checkBlockParameters(rule: RuleTable, block: number, time: number, maxBlock = MAX_SEARCH_BLOCK): void {

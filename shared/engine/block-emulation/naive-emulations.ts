@@ -30,6 +30,7 @@ export function naiveEmulations(rule: RuleTable, k: number, t = k, shouldStop?: 
     for (let i = 0; i < k; i++) cells[i] = (w >> i) & 1;
     words.push(cells);
   }
+  const tableMask = rule.table.length - 1;
   const found = new Map<number, Emulation>();
   let pairs = 0;
   for (let x0 = 0; x0 < size; x0++) {
@@ -47,9 +48,11 @@ export function naiveEmulations(rule: RuleTable, k: number, t = k, shouldStop?: 
         let nxt = b;
         let len = width;
         for (let s = 0; s < t; s++) {
+          // slide the neighbourhood index along the word: drop the leftmost cell, append the next one
+          let index = 0;
+          for (let j = 0; j < 2 * r; j++) index = 2 * index + cur[j]!;
           for (let i = 0; i < len - 2 * r; i++) {
-            let index = 0;
-            for (let j = 0; j <= 2 * r; j++) index = 2 * index + cur[i + j]!;
+            index = (2 * index + cur[i + 2 * r]!) & tableMask;
             nxt[i] = rule.table[index]!;
           }
           len -= 2 * r;

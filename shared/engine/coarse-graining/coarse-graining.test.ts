@@ -143,4 +143,12 @@ describe("coarse-graining", () => {
     expect(r2.closes).toBe(true);
     expect(Array.from(successorsOfNetwork(r2.target!))).toEqual([0, 1]);
   });
+
+  it("coarseGrain reports progress up to 1 and stops with CANCELLED when asked", () => {
+    const F = randomNetwork(seedrandom("1005"), 8, 2);
+    const fractions: number[] = [];
+    coarseGrain(F, [nodeObservable(F, 0)], 1, { onProgress: (f) => fractions.push(f) });
+    expect(fractions.at(-1)).toBe(1);
+    expect(() => coarseGrain(F, [nodeObservable(F, 0)], 1, { shouldStop: () => true })).toThrow(/cancelled/);
+  });
 });

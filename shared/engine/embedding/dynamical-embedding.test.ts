@@ -108,4 +108,12 @@ describe("dynamical embedding", () => {
       { seed: 904, numRuns: 40 },
     );
   });
+
+  it("searchDynamicalEmbedding reports progress up to 1 and stops with CANCELLED when asked", () => {
+    const F = randomNetwork(seedrandom("905"), 8, 2);
+    const fractions: number[] = [];
+    searchDynamicalEmbedding(F, F, 1, { onProgress: (f) => fractions.push(f) });
+    expect(fractions.at(-1)).toBe(1);
+    expect(() => searchDynamicalEmbedding(F, F, 2, { shouldStop: () => true })).toThrow(/cancelled/);
+  });
 });

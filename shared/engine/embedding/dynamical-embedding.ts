@@ -5,7 +5,7 @@
 import { CancelledError, EngineError } from "../errors";
 import type { BooleanNetwork } from "../network";
 import { successorsOfNetwork, transitionTable } from "../emulation";
-import { functionalGraph, ShapeRegistry, type FunctionalGraph } from "./functional-graph";
+import { functionalGraph, ShapeRegistry } from "./functional-graph";
 
 export interface EmbeddingResult {
   readonly found: boolean;
@@ -21,6 +21,7 @@ export interface EmbeddingControl {
 
 /** Decide whether the map `targetSucc` embeds into the map `sourceSucc`; return the embedding or null. */
 export function embedFunctionalGraph(sourceSucc: ArrayLike<number>, targetSucc: ArrayLike<number>, control: EmbeddingControl = {}): Uint32Array | null {
+  if (control.shouldStop?.()) throw new CancelledError();
   const registry = new ShapeRegistry();
   const F = functionalGraph(sourceSucc, registry);
   const G = functionalGraph(targetSucc, registry);

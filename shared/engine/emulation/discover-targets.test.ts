@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import seedrandom from "seedrandom";
-import { networkFromFunctions, type BooleanNetwork } from "../network";
+import { checkNetwork, networkFromFunctions, type BooleanNetwork } from "../network";
 import { blockEmulationCertificate, verifyCertificate } from "../certificates";
 import {
   canonicalTargetKey,
@@ -143,6 +143,27 @@ describe("discoverEmulatedTargets", () => {
         expect(canonicalTargetKey(moved, m)).toBe(canonicalTargetKey(succ, m));
       }),
       { seed: 804, numRuns: 100 },
+    );
+  });
+
+  it("discoverEmulatedTargets finds the same targets after renaming and reordering the source nodes", () => {
+    fc.assert(
+      fc.property(fc.integer(), fc.integer({ min: 2, max: 7 }), (seed, n) => {
+        const rng = seedrandom(String(seed));
+        const F = randomNetwork(rng, n, 2);
+        const perm = [...Array(n).keys()].sort(() => rng() - 0.5);
+        const inv = new Array<number>(n);
+        perm.forEach((old, i) => (inv[old] = i));
+        const F2 = checkNetwork({
+          names: perm.map((old) => `r${F.names[old]}`),
+          regulators: perm.map((old) => Int32Array.from(F.regulators[old]!, (r) => inv[r]!)),
+          tables: perm.map((old) => F.tables[old]!),
+        });
+        const bounds = { maxTargetNodes: 3, maxTime: 2, maxBlock: 2 };
+        const keys = (net: BooleanNetwork) => discoverEmulatedTargets(net, bounds).targets.map((d) => `${d.key}@${d.times.join(",")}x${d.encodings}`).sort();
+        expect(keys(F2)).toEqual(keys(F));
+      }),
+      { seed: 805, numRuns: 30 },
     );
   });
 });

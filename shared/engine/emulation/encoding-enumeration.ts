@@ -81,6 +81,7 @@ export function enumerateEncodings(
   };
   for (let v = 0; v < n; v++) if ((allowedMask >>> v) & 1) grow(1 << v, v, 1, v);
 
+  const last = exactNodes ?? M;
   const step = successorTable(source);
   let encodingsChecked = 0;
   const blocks: { mask: number; size: number }[] = [];
@@ -109,6 +110,7 @@ export function enumerateEncodings(
       FtTime = t;
     }
     const F = Ft;
+    if (popcount((F[s0]! ^ s0) >>> 0) > last * bounds.maxBlock) continue;
     const extend = (level: number, union: number, minStart: number) => {
       for (let v = minStart; v < n && !stopped; v++) {
         for (const b of blocksByMin[v]!) {
@@ -121,6 +123,7 @@ export function enumerateEncodings(
           // at nodes a later block (smallest node above v) could still cover.
           let closed = true;
           let viable = true;
+          let uncovered = 0;
           for (let x = 0; x < 1 << m && viable; x++) {
             let state = s0;
             for (let k = 0; k < m; k++) if ((x >>> k) & 1) state ^= blocks[k]!.mask;
@@ -138,10 +141,13 @@ export function enumerateEncodings(
             const rest = z & ~U & fullMask;
             if (rest !== 0) {
               closed = false;
+              uncovered |= rest;
               if ((rest & ((1 << (v + 1)) - 1)) !== 0) viable = false;
             }
             encoded[x] = y;
           }
+          // The remaining blocks (at most `last - m` of at most maxBlock nodes) must cover every uncovered bit.
+          if (viable && popcount(uncovered) > (last - m) * bounds.maxBlock) viable = false;
           if (viable && closed && (exactNodes === undefined || exactNodes === m) && (contextAllowed || absorbable(U, m))) {
             const masks = blocks.slice(0, m).map((q) => q.mask);
             const found: FoundEncoding = {
@@ -154,7 +160,7 @@ export function enumerateEncodings(
             };
             if (visit(found)) stopped = true;
           }
-          if (!stopped && viable && m < M) extend(m, U, v + 1);
+          if (!stopped && viable && m < last) extend(m, U, v + 1);
           blocks.pop();
           if (stopped) break;
         }

@@ -87,25 +87,28 @@ describe("searchBlockEmulation", () => {
         const G = randomNetwork(rng, m, 2, "g");
         const { source, witness } = plantEmulation(rng, G, m * 2 + extra, 2);
         expect(witnessHolds(source, successorsOfNetwork(G), witness)).toBe(true);
-        const r = searchBlockEmulation(source, G, { maxTime: 1, maxBlock: 2 });
-        expect(r.found).toBe(true);
-        expect(verifies(source, G, r.witness!)).toBe(true);
+        for (const method of ["sat", "enumeration"] as const) {
+          const r = searchBlockEmulation(source, G, { maxTime: 1, maxBlock: 2, method });
+          expect(r.found).toBe(true);
+          expect(verifies(source, G, r.witness!)).toBe(true);
+        }
       }),
       { seed: 701, numRuns: 40 },
     );
   });
 
-  it("searchBlockEmulation agrees with a brute-force enumeration of all encodings on small sources", () => {
+  it("searchBlockEmulation agrees with a brute-force enumeration of all encodings on small sources, by SAT and by enumeration", () => {
     fc.assert(
       fc.property(fc.integer(), fc.integer({ min: 2, max: 4 }), fc.integer({ min: 1, max: 2 }), fc.integer({ min: 1, max: 2 }), (seed, n, m, t) => {
         const rng = seedrandom(String(seed));
         const F = randomNetwork(rng, n, 2);
         const G = randomNetwork(rng, m, 2, "g");
-        const r = searchBlockEmulation(F, G, { maxTime: t, maxBlock: 2 });
-        const foundAt = r.found ? r.witness!.time : null;
         const expected = [...Array(t).keys()].map((k) => k + 1).find((k) => bruteForceEmulates(F, G, k, 2)) ?? null;
-        expect(foundAt).toBe(expected);
-        if (r.found) expect(verifies(F, G, r.witness!)).toBe(true);
+        for (const method of ["sat", "enumeration"] as const) {
+          const r = searchBlockEmulation(F, G, { maxTime: t, maxBlock: 2, method });
+          expect(r.found ? r.witness!.time : null).toBe(expected);
+          if (r.found) expect(verifies(F, G, r.witness!)).toBe(true);
+        }
       }),
       { seed: 702, numRuns: 60 },
     );
@@ -128,13 +131,13 @@ describe("searchBlockEmulation", () => {
     );
   });
 
-  it("mergeEmulationShards over any split equals the unsplit searchBlockEmulation run", () => {
+  it("mergeEmulationShards over any split equals the unsplit searchBlockEmulation run (both methods)", () => {
     fc.assert(
       fc.property(fc.integer(), fc.integer({ min: 2, max: 5 }), (seed, count) => {
         const rng = seedrandom(String(seed));
         const G = randomNetwork(rng, 2, 2, "g");
         const F = rng() < 0.5 ? plantEmulation(rng, G, 7, 2).source : randomNetwork(rng, 6, 2);
-        const bounds = { maxTime: 2, maxBlock: 2 };
+        const bounds = { maxTime: 2, maxBlock: 2, method: rng() < 0.5 ? ("sat" as const) : ("enumeration" as const) };
         const whole = searchBlockEmulation(F, G, bounds);
         const parts = [...Array(count).keys()].map((index) => searchBlockEmulation(F, G, bounds, { shard: { index, count } }));
         const merged = mergeEmulationShards(parts.reverse());
@@ -172,6 +175,7 @@ describe("searchBlockEmulation", () => {
         const F = randomNetwork(seedrandom(String(seed)), n, 3);
         const r = searchBlockEmulation(F, F, { maxTime: 1, maxBlock: 1, contextAllowed: false });
         expect(r.found).toBe(true);
+        if (n <= 4) expect(searchBlockEmulation(F, F, { maxTime: 1, maxBlock: 1, contextAllowed: false, method: "enumeration" }).found).toBe(true);
         const identity: BlockEmulationWitness = { time: 1, blocks: F.names.map((_, v) => ({ nodes: [v], zero: [0], one: [1] })), context: F.names.map(() => -1) };
         expect(verifies(F, F, identity)).toBe(true);
       }),
@@ -198,6 +202,8 @@ describe("searchBlockEmulation", () => {
     expect(searchBlockEmulation(F, G, { maxTime: 1, maxBlock: 2, allowedNodes: [0] }).found).toBe(true);
     const onlyB = searchBlockEmulation(F, G, { maxTime: 3, maxBlock: 2, allowedNodes: [1] });
     expect(onlyB.found).toBe(false);
-    expect(onlyB.bounds).toEqual({ maxTime: 3, maxBlock: 2, contextAllowed: true, allowedNodes: [1] });
+    expect(onlyB.bounds).toEqual({ maxTime: 3, maxBlock: 2, contextAllowed: true, allowedNodes: [1], method: "sat" });
+    expect(searchBlockEmulation(F, G, { maxTime: 3, maxBlock: 2, allowedNodes: [1], method: "enumeration" }).found).toBe(false);
+    expect(searchBlockEmulation(F, G, { maxTime: 1, maxBlock: 2, allowedNodes: [0], method: "enumeration" }).found).toBe(true);
   });
 });

@@ -4,6 +4,7 @@ import { networkFromFunctions } from "../network";
 import { analyseSynchronous, attractorsAsText } from "../state-graph";
 import { randomNK, slowSuccessor } from "../update/random-networks.test-support";
 import { successorTable } from "../update";
+import { faureCellCycle } from "../state-graph/faure-cell-cycle.test-support";
 import { compareAttractors, perturbNetwork } from "./index";
 
 describe("perturbation", () => {
@@ -53,5 +54,19 @@ describe("perturbation", () => {
     expect(() => perturbNetwork(net, { fixedInputs: new Map([[1, 1 as const]]) })).toThrow(/not an input/);
     expect(() => perturbNetwork(net, { knockOut: [1], overExpress: [1] })).toThrow(/both 0 and 1/);
     expect(() => perturbNetwork(net, { knockOut: [5] })).toThrow(/out of range/);
+  });
+
+  it("perturbNetwork with the growth input CycD held on leaves only the 7-state cycle of the Faure et al. (2006) model", () => {
+    // Faure et al., "Dynamical analysis of a generic Boolean model for the control of the mammalian cell cycle",
+    // Bioinformatics 2006: with CycD on, the synchronous dynamics has one attractor, a cycle of 7 states, and the
+    // quiescent stable state disappears (values from memory).
+    const net = faureCellCycle();
+    const before = attractorsAsText(analyseSynchronous(net));
+    const after = attractorsAsText(analyseSynchronous(perturbNetwork(net, { fixedInputs: { 0: 1 } })));
+    expect(after.map((a) => [a.length, a.basin])).toEqual([[7, 1024]]);
+    const cmp = compareAttractors(before, after);
+    expect(cmp.kept.map((m) => m.before.length)).toEqual([7]);
+    expect(cmp.lost.map((a) => a.states)).toEqual([["0100010100"]]);
+    expect(cmp.gained).toEqual([]);
   });
 });

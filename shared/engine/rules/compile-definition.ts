@@ -3,7 +3,7 @@
 // Threshold semantics follow Li, Long, Lu, Ouyang, Tang, "The yeast cell-cycle network is robustly designed", PNAS 2004.
 import { EngineError } from "../errors";
 import { checkNetwork, type BooleanNetwork } from "../network";
-import { isValidNodeName, variablesOf, type Expr, type ModelDefinition, type RuleSyntax } from "./syntax";
+import { chainOperands, isValidNodeName, variablesOf, type Expr, type ModelDefinition, type RuleSyntax } from "./syntax";
 
 /** Regulators of one rule as node indices in model order; a threshold rule with tie "keep" also reads its own node. */
 export function ruleRegulators(rule: RuleSyntax, self: number, indexOf: ReadonlyMap<string, number>, nodeName: string): number[] {
@@ -29,6 +29,7 @@ export function evaluateRule(rule: RuleSyntax, value: (name: string) => number, 
   return rule.tie === "keep" ? current : 0;
 }
 
+/** Evaluate an expression given each variable's value (one state at a time; the compiler uses truthTableOf). */
 export function evaluateExpr(e: Expr, value: (name: string) => number): number {
   switch (e.kind) {
     case "const":
@@ -37,13 +38,65 @@ export function evaluateExpr(e: Expr, value: (name: string) => number): number {
       return value(e.name);
     case "not":
       return 1 - evaluateExpr(e.arg, value);
-    case "and":
-      return evaluateExpr(e.left, value) & evaluateExpr(e.right, value);
-    case "or":
-      return evaluateExpr(e.left, value) | evaluateExpr(e.right, value);
-    case "xor":
-      return evaluateExpr(e.left, value) ^ evaluateExpr(e.right, value);
+    default: {
+      const values = chainOperands(e).map((o) => evaluateExpr(o, value));
+      return values.reduce((a, b) => (e.kind === "and" ? a & b : e.kind === "or" ? a | b : a ^ b));
+    }
   }
+}
+
+// Bit j of the row number, repeated over a 32-row word (rows 32w .. 32w+31), for j < 5.
+const LOW_PATTERNS = [0xaaaaaaaa, 0xcccccccc, 0xf0f0f0f0, 0xff00ff00, 0xffff0000];
+
+/**
+ * Truth table of an expression over the given inputs (row bit j = input j), evaluated 32 rows per machine word:
+ * each subexpression becomes a bit vector over all rows, so the cost is (expression size) x (rows / 32).
+ */
+export function truthTableOf(e: Expr, inputs: readonly string[]): Uint8Array {
+  const rows = 1 << inputs.length;
+  const words = Math.ceil(rows / 32);
+  const position = new Map(inputs.map((name, j) => [name, j] as const));
+  const patterns = new Map<string, Uint32Array>();
+  const varVector = (name: string): Uint32Array => {
+    let v = patterns.get(name);
+    if (!v) {
+      const j = position.get(name);
+      if (j === undefined) throw new EngineError("UNDEFINED_NODE", `${name} is not among the inputs of the table`);
+      v = new Uint32Array(words);
+      for (let w = 0; w < words; w++) v[w] = j < 5 ? LOW_PATTERNS[j]! : (w >> (j - 5)) & 1 ? 0xffffffff : 0;
+      patterns.set(name, v);
+    }
+    return v;
+  };
+  const evaluate = (x: Expr): Uint32Array => {
+    switch (x.kind) {
+      case "const":
+        return new Uint32Array(words).fill(x.value ? 0xffffffff : 0);
+      case "var":
+        return varVector(x.name);
+      case "not": {
+        const a = evaluate(x.arg);
+        const out = new Uint32Array(words);
+        for (let w = 0; w < words; w++) out[w] = ~a[w]!;
+        return out;
+      }
+      default: {
+        const [first, ...rest] = chainOperands(x);
+        const acc = Uint32Array.from(evaluate(first!)); // a copy: cached input patterns must stay intact
+        for (const o of rest) {
+          const b = evaluate(o);
+          if (x.kind === "and") for (let w = 0; w < words; w++) acc[w]! &= b[w]!;
+          else if (x.kind === "or") for (let w = 0; w < words; w++) acc[w]! |= b[w]!;
+          else for (let w = 0; w < words; w++) acc[w]! ^= b[w]!;
+        }
+        return acc;
+      }
+    }
+  };
+  const vector = evaluate(e);
+  const table = new Uint8Array(rows);
+  for (let row = 0; row < rows; row++) table[row] = (vector[row >>> 5]! >>> (row & 31)) & 1;
+  return table;
 }
 
 /** Check names and references of a model; throws EngineError naming the first problem. */
@@ -76,14 +129,18 @@ export function compileDefinition(model: ModelDefinition): BooleanNetwork {
   model.nodes.forEach((node, self) => {
     const regs = ruleRegulators(node.rule, self, indexOf, node.name);
     if (regs.length > 20) throw new EngineError("TOO_MANY_REGULATORS", `node ${node.name} reads ${regs.length} nodes; at most 20 are supported`);
-    const position = new Map(regs.map((r, j) => [names[r]!, j] as const));
-    const selfPosition = position.get(node.name);
-    const table = new Uint8Array(1 << regs.length);
-    for (let row = 0; row < table.length; row++) {
-      const value = (name: string) => (row >> position.get(name)!) & 1;
-      const current = selfPosition === undefined ? 0 : (row >> selfPosition) & 1;
-      table[row] = evaluateRule(node.rule, value, current);
-    }
+    const inputNames = regs.map((r) => names[r]!);
+    let table: Uint8Array;
+    if (node.rule.kind === "threshold") {
+      const position = new Map(inputNames.map((name, j) => [name, j] as const));
+      const selfPosition = position.get(node.name);
+      table = new Uint8Array(1 << regs.length);
+      for (let row = 0; row < table.length; row++) {
+        const value = (name: string) => (row >> position.get(name)!) & 1;
+        const current = selfPosition === undefined ? 0 : (row >> selfPosition) & 1;
+        table[row] = evaluateRule(node.rule, value, current);
+      }
+    } else table = truthTableOf(node.rule, inputNames);
     regulators.push(Int32Array.from(regs));
     tables.push(table);
   });

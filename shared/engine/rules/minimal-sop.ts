@@ -41,49 +41,68 @@ function quineMcCluskey(table: Uint8Array, k: number): Cube[] {
   if (minterms.length === 0) return [];
   if (minterms.length === table.length) return [{ mask: 0, value: 0 }];
 
-  // Implicants as (free-variable mask, value); combine pairs that differ in one cared-for bit.
+  // An implicant (mask, value) has the index mask * 2^k + value. Levels never share an index (their masks have
+  // different bit counts), so one membership array serves all of them.
+  const present = new Uint8Array(1 << (2 * k));
+  const combined = new Uint8Array(1 << (2 * k));
   const primes: Cube[] = [];
-  let level = new Map<string, Cube>();
-  for (const m of minterms) level.set(`${full}:${m}`, { mask: full, value: m });
-  while (level.size > 0) {
-    const next = new Map<string, Cube>();
-    const combined = new Set<string>();
-    for (const [k1, c] of level) {
+  let level = minterms.map((m) => (full << k) | m);
+  for (const i of level) present[i] = 1;
+  while (level.length > 0) {
+    const next: number[] = [];
+    for (const i of level) {
+      const mask = i >>> k;
+      const value = i & full;
       for (let b = 1; b <= full; b <<= 1) {
-        if (!(c.mask & b) || c.value & b) continue;
-        const partner = `${c.mask}:${c.value | b}`;
-        if (!level.has(partner)) continue;
-        combined.add(k1);
-        combined.add(partner);
-        const merged = { mask: c.mask & ~b, value: c.value };
-        next.set(`${merged.mask}:${merged.value}`, merged);
+        if (!(mask & b) || value & b) continue;
+        const partner = i | b;
+        if (!present[partner]) continue;
+        combined[i] = 1;
+        combined[partner] = 1;
+        const merged = ((mask & ~b) << k) | value;
+        if (!present[merged]) {
+          present[merged] = 1;
+          next.push(merged);
+        }
       }
     }
-    for (const [key, c] of level) if (!combined.has(key)) primes.push(c);
+    for (const i of level) if (!combined[i]) primes.push({ mask: i >>> k, value: i & full });
     level = next;
   }
 
-  const covers = (c: Cube, m: number) => (m & c.mask) === c.value;
-  const uncovered = new Set(minterms);
+  // Rows each prime covers: every assignment of its free variables.
+  const coverOf = primes.map((p) => {
+    const free = full & ~p.mask;
+    const rows: number[] = [];
+    for (let sub = free; ; sub = (sub - 1) & free) {
+      rows.push(p.value | sub);
+      if (sub === 0) break;
+    }
+    return rows;
+  });
+  const owners = new Int32Array(1 << k);
+  const lastOwner = new Int32Array(1 << k).fill(-1);
+  coverOf.forEach((rows, pi) => rows.forEach((r) => (owners[r]!++, (lastOwner[r] = pi))));
+  const covered = new Uint8Array(1 << k);
   const chosen: Cube[] = [];
-  for (const m of minterms) {
-    const owners = primes.filter((p) => covers(p, m));
-    if (owners.length === 1 && !chosen.includes(owners[0]!)) chosen.push(owners[0]!);
-  }
-  for (const c of chosen) for (const m of minterms) if (covers(c, m)) uncovered.delete(m);
-  while (uncovered.size > 0) {
-    let best = primes[0]!;
-    let bestCount = -1;
-    for (const p of primes) {
+  const choose = (pi: number) => {
+    chosen.push(primes[pi]!);
+    for (const r of coverOf[pi]!) covered[r] = 1;
+  };
+  // Essential primes first: the only cover of some row.
+  for (const m of minterms) if (owners[m] === 1 && !covered[m]) choose(lastOwner[m]!);
+  for (;;) {
+    let best = -1;
+    let bestCount = 0;
+    coverOf.forEach((rows, pi) => {
       let count = 0;
-      for (const m of uncovered) if (covers(p, m)) count++;
+      for (const r of rows) if (!covered[r]) count++;
       if (count > bestCount) {
-        best = p;
+        best = pi;
         bestCount = count;
       }
-    }
-    chosen.push(best);
-    for (const m of [...uncovered]) if (covers(best, m)) uncovered.delete(m);
+    });
+    if (best < 0) return chosen;
+    choose(best);
   }
-  return chosen;
 }

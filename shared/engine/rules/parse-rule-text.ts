@@ -31,6 +31,8 @@ export interface RuleTextResult {
   readonly rules: ParsedRule[];
 }
 
+const MAX_NESTING = 500;
+
 class LineError extends Error {
   constructor(
     readonly column: number,
@@ -130,13 +132,21 @@ class LineParser {
   private parseXor = (): Expr => this.parseBinary("xor", this.parseAnd);
   private parseAnd = (): Expr => this.parseBinary("and", this.parseUnary);
 
+  private depth = 0;
+
   private parseUnary = (): Expr => {
     const t = this.peek();
-    if (t.kind === "not") {
-      this.next();
-      return { kind: "not", arg: this.parseUnary(), pos: this.pos(t) };
+    // Nesting is bounded so that hostile input cannot exhaust the call stack.
+    if (++this.depth > MAX_NESTING) throw new LineError(t.column, `the expression is nested more than ${MAX_NESTING} levels deep`);
+    try {
+      if (t.kind === "not") {
+        this.next();
+        return { kind: "not", arg: this.parseUnary(), pos: this.pos(t) };
+      }
+      return this.parseAtom();
+    } finally {
+      this.depth--;
     }
-    return this.parseAtom();
   };
 
   private parseAtom(): Expr {
@@ -287,12 +297,14 @@ export function readRuleText(text: string): ModelDefinition {
 
 function usesOf(rule: RuleSyntax): { name: string; pos: { line: number; column: number } }[] {
   const out: { name: string; pos: { line: number; column: number } }[] = [];
-  const visit = (e: Expr): void => {
-    if (e.kind === "var") out.push({ name: e.name, pos: e.pos! });
-    else if (e.kind === "not") visit(e.arg);
-    else if (e.kind !== "const") {
-      visit(e.left);
-      visit(e.right);
+  const stack: Expr[] = [];
+  const visit = (root: Expr): void => {
+    stack.push(root);
+    while (stack.length > 0) {
+      const e = stack.pop()!;
+      if (e.kind === "var") out.push({ name: e.name, pos: e.pos! });
+      else if (e.kind === "not") stack.push(e.arg);
+      else if (e.kind !== "const") stack.push(e.right, e.left);
     }
   };
   if (rule.kind === "threshold") for (const t of rule.terms) out.push({ name: t.node, pos: t.pos! });

@@ -2,7 +2,7 @@
 // threshold options in a fixed order) so that parsing the output gives back the same model.
 // Parenthesisation follows operator precedence and left associativity, as in the grammar of parse-rule-text.ts.
 import { EngineError } from "../errors";
-import { isValidNodeName, type Expr, type ModelDefinition, type RuleSyntax } from "./syntax";
+import { chainOperands, isValidNodeName, type Expr, type ModelDefinition, type RuleSyntax } from "./syntax";
 
 const PRECEDENCE = { or: 1, xor: 2, and: 3, not: 4, const: 5, var: 5 } as const;
 const SYMBOL = { or: "|", xor: "^", and: "&" } as const;
@@ -20,12 +20,14 @@ export function printExpr(e: Expr): string {
     }
     default: {
       const p = PRECEDENCE[e.kind];
-      const left = printExpr(e.left);
-      const right = printExpr(e.right);
-      // Left-associative: an equal-precedence operator on the right needs parentheses, on the left it does not.
-      const l = PRECEDENCE[e.left.kind] < p ? `(${left})` : left;
-      const r = PRECEDENCE[e.right.kind] <= p ? `(${right})` : right;
-      return `${l} ${SYMBOL[e.kind]} ${r}`;
+      // Left-associative: the head of a chain never needs parentheses for the same operator; an operand on the
+      // right of equal precedence does.
+      return chainOperands(e)
+        .map((o, i) => {
+          const text = printExpr(o);
+          return PRECEDENCE[o.kind] < p || (i > 0 && PRECEDENCE[o.kind] === p) ? `(${text})` : text;
+        })
+        .join(` ${SYMBOL[e.kind]} `);
     }
   }
 }

@@ -58,26 +58,38 @@ export function isValidNodeName(name: string): boolean {
   return NAME_PATTERN.test(name) && !RESERVED_WORDS.has(name.toLowerCase());
 }
 
-/** Variables an expression or rule reads, each once, in first-use order. */
+export type BinaryExpr = Extract<Expr, { kind: BinaryOp }>;
+
+/**
+ * The operands of the longest left chain of one operator: for ((a & b) & c) & d it is [a, b, c, d].
+ * Long sums of products are such chains; walking them in a loop keeps recursion depth at the real nesting depth.
+ */
+export function chainOperands(e: BinaryExpr): Expr[] {
+  const rights: Expr[] = [];
+  let x: Expr = e;
+  while (x.kind === e.kind) {
+    const b = x as BinaryExpr;
+    rights.push(b.right);
+    x = b.left;
+  }
+  rights.push(x);
+  return rights.reverse();
+}
+
+/** Variables an expression or rule reads, each once, in first-use (left to right) order. */
 export function variablesOf(rule: RuleSyntax): string[] {
   const seen = new Set<string>();
-  const visit = (e: Expr): void => {
-    switch (e.kind) {
-      case "const":
-        return;
-      case "var":
-        seen.add(e.name);
-        return;
-      case "not":
-        visit(e.arg);
-        return;
-      default:
-        visit(e.left);
-        visit(e.right);
-    }
-  };
-  if (rule.kind === "threshold") for (const t of rule.terms) seen.add(t.node);
-  else visit(rule);
+  if (rule.kind === "threshold") {
+    for (const t of rule.terms) seen.add(t.node);
+    return [...seen];
+  }
+  const stack: Expr[] = [rule];
+  while (stack.length > 0) {
+    const e = stack.pop()!;
+    if (e.kind === "var") seen.add(e.name);
+    else if (e.kind === "not") stack.push(e.arg);
+    else if (e.kind !== "const") stack.push(e.right, e.left);
+  }
   return [...seen];
 }
 
@@ -97,7 +109,9 @@ function stripExpr(e: Expr): Expr {
       return { kind: "var", name: e.name };
     case "not":
       return { kind: "not", arg: stripExpr(e.arg) };
-    default:
-      return { kind: e.kind, left: stripExpr(e.left), right: stripExpr(e.right) };
+    default: {
+      const [first, ...rest] = chainOperands(e).map(stripExpr);
+      return rest.reduce<Expr>((left, right) => ({ kind: e.kind, left, right }), first!);
+    }
   }
 }

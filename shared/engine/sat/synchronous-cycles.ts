@@ -3,6 +3,7 @@
 // algorithm for finding attractors in synchronous Boolean networks", IEEE/ACM TCBB 2011) and enumerating models
 // with blocking clauses; all L rotations of a found cycle are blocked at once, and shorter periods are excluded.
 import Logic from "logic-solver";
+import { rotateToSmallest } from "../bits";
 import { CancelledError } from "../errors";
 import type { BooleanNetwork } from "../network";
 import type { LongTaskOptions } from "../update";
@@ -68,9 +69,7 @@ export function satCycles(net: BooleanNetwork, maxLength: number, options: SatOp
         states.push(s);
       }
       for (const s of states) solver.require(Logic.or(Array.from({ length: n }, (_, i) => (s[i] === "1" ? Logic.not(v(0, i)) : v(0, i)))));
-      let best = 0;
-      for (let q = 1; q < L; q++) if (states[q]! < states[best]!) best = q;
-      cycles.push({ length: L, states: [...states.slice(best), ...states.slice(0, best)] });
+      cycles.push({ length: L, states: rotateToSmallest(states, (a, b) => a < b) });
     }
   }
   onProgress?.(1, "done");

@@ -2,7 +2,7 @@
 // asynchronous state transition graph, where each successor of a state flips one node whose function disagrees
 // with its current value (Thomas, "Regulatory networks seen as asynchronous automata: a logical description",
 // J. Theor. Biol. 1991), found with an iterative form of Tarjan's algorithm (SIAM J. Computing, 1972).
-import { reverseBits } from "../bits";
+import { compareStateIndices } from "../bits";
 import { CancelledError, EngineError } from "../errors";
 import type { BooleanNetwork } from "../network";
 import { successorTable, type LongTaskOptions } from "../update";
@@ -13,7 +13,7 @@ export interface AsynchronousAttractor {
   /** Number of states in the terminal component (1 for a fixed point). */
   size: number;
   /** States of the component as indices, in the order of their node-ordered 0/1 text. */
-  states: number[];
+  states: Uint32Array;
 }
 
 export interface AsynchronousAnalysis {
@@ -91,7 +91,7 @@ export function asynchronousAttractors(net: BooleanNetwork, options: LongTaskOpt
           }
         }
         if (terminal) {
-          const states = Array.from(stack.subarray(bottom, sp)).sort((a, b) => reverseBits(a, n) - reverseBits(b, n));
+          const states = stack.slice(bottom, sp).sort((a, b) => compareStateIndices(a, b, n));
           attractors.push({ size: states.length, states });
         }
         sp = bottom;
@@ -102,7 +102,7 @@ export function asynchronousAttractors(net: BooleanNetwork, options: LongTaskOpt
       }
     }
   }
-  attractors.sort((a, b) => b.size - a.size || reverseBits(a.states[0]!, n) - reverseBits(b.states[0]!, n));
+  attractors.sort((a, b) => b.size - a.size || compareStateIndices(a.states[0]!, b.states[0]!, n));
   onProgress?.(1, "asynchronous components");
   return { nodeCount: n, attractors, componentCount: components };
 }

@@ -1,6 +1,7 @@
 // Attractors of large networks found by sampling: synchronous runs from seeded random initial states until the
 // trajectory closes a cycle, detected with Brent's method ("An improved Monte Carlo factorization algorithm",
 // BIT 1980). The result is a lower bound on the attractor set: states never sampled may lead elsewhere.
+import { rotateToSmallest } from "../bits";
 import { CancelledError } from "../errors";
 import type { BooleanNetwork } from "../network";
 import { bytesToString, synchronousStep, type LongTaskOptions } from "../update";
@@ -73,9 +74,7 @@ export function sampleAttractors(net: BooleanNetwork, options: SampleOptions): S
       cycle.push(bytesToString(x));
       x = synchronousStep(net, x);
     }
-    let best = 0;
-    for (let q = 1; q < cycle.length; q++) if (cycle[q]! < cycle[best]!) best = q;
-    const states = [...cycle.slice(best), ...cycle.slice(0, best)];
+    const states = rotateToSmallest(cycle, (a, b) => a < b);
     const known = byFirst.get(states[0]!);
     if (known) known.hits++;
     else byFirst.set(states[0]!, { length: states.length, states, hits: 1 });

@@ -1,7 +1,7 @@
 // Exact analysis of the synchronous state transition graph (a functional graph: one successor per state) for up
 // to 24 nodes: every attractor, basin sizes and transient lengths, in time linear in 2^n, as in the state-space
 // view of Kauffman, "Metabolic stability and epigenesis in randomly constructed genetic nets", J. Theor. Biol. 1969.
-import { reverseBits } from "../bits";
+import { compareStateIndices } from "../bits";
 import { CancelledError } from "../errors";
 import type { BooleanNetwork } from "../network";
 import { successorTable, type LongTaskOptions } from "../update";
@@ -12,7 +12,7 @@ export interface SynchronousAttractor {
   /** Number of states whose trajectory ends on this attractor (the attractor's own states included). */
   basin: number;
   /** Cycle states as indices, starting at the textually smallest state and following the dynamics. */
-  states: number[];
+  states: Uint32Array;
 }
 
 export interface SynchronousAnalysis {
@@ -42,6 +42,7 @@ export function analyseSynchronous(net: BooleanNetwork, options: LongTaskOptions
   const label = new Int32Array(N);
   const depth = new Uint32Array(N);
   const cycleEntry: number[] = [];
+  const cycleLengths: number[] = [];
   let walk = 0;
   for (let start = 0; start < N; start++) {
     if ((start & 0xffff) === 0 && start > 0) {
@@ -72,6 +73,7 @@ export function analyseSynchronous(net: BooleanNetwork, options: LongTaskOptions
         cycleLength++;
         y = succ[y]!;
       } while (y !== x);
+      cycleLengths.push(cycleLength);
       firstDepth = pathLength - cycleLength;
     } else {
       a = label[x]!;
@@ -94,18 +96,18 @@ export function analyseSynchronous(net: BooleanNetwork, options: LongTaskOptions
     if (d > maxTransient) maxTransient = d;
   }
   const found = cycleEntry.map((entry, i) => {
-    const cycle: number[] = [];
-    let y = entry;
-    do {
-      cycle.push(y);
+    // Walk the cycle twice (find its smallest state, then list from there) so a long cycle is held only once.
+    let smallest = entry;
+    for (let y = succ[entry]!; y !== entry; y = succ[y]!) if (compareStateIndices(y, smallest, n) < 0) smallest = y;
+    const states = new Uint32Array(cycleLengths[i]!);
+    let y = smallest;
+    for (let q = 0; q < states.length; q++) {
+      states[q] = y;
       y = succ[y]!;
-    } while (y !== entry);
-    let best = 0;
-    for (let q = 1; q < cycle.length; q++) if (reverseBits(cycle[q]!, n) < reverseBits(cycle[best]!, n)) best = q;
-    const states = [...cycle.slice(best), ...cycle.slice(0, best)];
+    }
     return { id: i + 1, attractor: { length: states.length, basin: basin[i + 1]!, states } };
   });
-  found.sort((p, q) => q.attractor.basin - p.attractor.basin || reverseBits(p.attractor.states[0]!, n) - reverseBits(q.attractor.states[0]!, n));
+  found.sort((p, q) => q.attractor.basin - p.attractor.basin || compareStateIndices(p.attractor.states[0]!, q.attractor.states[0]!, n));
   const remap = new Int32Array(cycleEntry.length + 1);
   found.forEach((f, index) => (remap[f.id] = index));
   for (let s = 0; s < N; s++) label[s] = remap[label[s]!]!;
@@ -131,7 +133,7 @@ export function forEachBasinState(analysis: SynchronousAnalysis, index: number, 
 /** The attractors with their states written as node-ordered 0/1 text. */
 export function attractorsAsText(analysis: SynchronousAnalysis): { length: number; basin: number; states: string[] }[] {
   const n = analysis.nodeCount;
-  return analysis.attractors.map((a) => ({ length: a.length, basin: a.basin, states: a.states.map((s) => stateText(s, n)) }));
+  return analysis.attractors.map((a) => ({ length: a.length, basin: a.basin, states: Array.from(a.states, (s) => stateText(s, n)) }));
 }
 
 function stateText(state: number, n: number): string {

@@ -13,7 +13,7 @@ export interface TrajectoryOptions {
   steps: number;
   /** Required for the asynchronous schemes: a seeded generator of numbers in [0, 1). */
   rng?: () => number;
-  /** Synchronous only: stop as soon as a state repeats (the last state then closes the cycle). */
+  /** Stop as soon as a state repeats (under synchronous update the last state then closes the cycle). */
   stopAtRepeat?: boolean;
 }
 

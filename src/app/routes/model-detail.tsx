@@ -11,6 +11,7 @@ import { useModel } from "@/features/models/api/get-model";
 import { can } from "@shared/types/roles";
 import { useStructure } from "@/features/models/api/get-structure";
 import { useRevisionList } from "@/features/models/api/list-revisions";
+import { AttractorRunPanel } from "@/features/models/components/attractor-run-panel";
 import { AttractorTable } from "@/features/models/components/attractor-table";
 import { BasinChart } from "@/features/models/components/basin-chart";
 import { Downloads } from "@/features/models/components/downloads";
@@ -29,8 +30,8 @@ function Section({ title, children, testId }: { title: string; children: React.R
   );
 }
 
-function Attractors({ projectId, modelId, revision, nodes, markers, setMarkers, selected, setSelected }: {
-  projectId: string; modelId: string; revision: number; nodes: readonly string[];
+function Attractors({ projectId, modelId, revision, revisionId, canStartRun, nodes, markers, setMarkers, selected, setSelected }: {
+  projectId: string; modelId: string; revision: number; revisionId: string; canStartRun: boolean; nodes: readonly string[];
   markers: string[]; setMarkers(m: string[]): void; selected: number | null; setSelected(i: number | null): void;
 }) {
   const result = useAttractors(projectId, modelId, revision, markers);
@@ -57,13 +58,7 @@ function Attractors({ projectId, modelId, revision, nodes, markers, setMarkers, 
       </div>
       {result.isPending && <p className="text-sm text-slate-500" data-testid="attractors-loading">Computing attractors…</p>}
       {error?.code === "NEEDS_RUN" && (
-        <Alert tone="info">
-          {error.message}.{" "}
-          <Link className="font-medium text-brand-700 underline" to={`/projects/${projectId}/runs`}>
-            Start it from Runs
-          </Link>
-          .
-        </Alert>
+        <AttractorRunPanel projectId={projectId} modelId={modelId} revision={revision} revisionId={revisionId} nodeCount={nodes.length} canStart={canStartRun} />
       )}
       {error && error.code !== "NEEDS_RUN" && <Alert>{error.message}</Alert>}
       {result.data && (
@@ -180,7 +175,7 @@ export function ModelDetailRoute() {
       </Section>
 
       <Section title="Attractors under synchronous update" testId="attractors-section">
-        <Attractors projectId={projectId} modelId={modelId} revision={rev.revision} nodes={nodes} markers={markers} setMarkers={setMarkers} selected={selected} setSelected={setSelected} />
+        <Attractors projectId={projectId} modelId={modelId} revision={rev.revision} revisionId={rev.id} canStartRun={can(project.role, project.siteRole, "run:start")} nodes={nodes} markers={markers} setMarkers={setMarkers} selected={selected} setSelected={setSelected} />
       </Section>
 
       <div className="grid gap-4 lg:grid-cols-2">

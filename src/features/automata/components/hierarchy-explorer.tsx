@@ -48,9 +48,10 @@ function Loaded({ hierarchy }: { hierarchy: Hierarchy }) {
     <div className="space-y-3">
       <HierarchyFilters values={filters} largestBlock={hierarchy.maxBlock} onChange={setFilters} searchError={searchError} />
       <p className="text-sm text-slate-600" data-testid="hierarchy-stats">
-        {hierarchy.pairs.filter((p) => p.source !== p.target).length} emulating pairs for block sizes up to {hierarchy.maxBlock}
+        {hierarchy.pairs.filter((p) => p.source !== p.target && !p.composed).length} emulating pairs for block sizes up to {hierarchy.maxBlock}
+        {" "}(plus {hierarchy.pairs.filter((p) => p.composed).length} more by composition)
         {" · "}drawn: {model.nodes.length} nodes and {model.edges.length} arrows (transitive reduction of {model.pairsInRange} pairs with
-        k in {filters.minBlock}..{filters.maxBlock}){" · "}{hierarchy.emulateNothing.length} rules emulate nothing beyond themselves
+        k in {filters.minBlock}..{filters.maxBlock}){" · "}{hierarchy.emulateNothing.length} rules emulate nothing with 2 ≤ k ≤ {hierarchy.maxBlock}
         {" · "}computed {new Date(hierarchy.computedAt).toLocaleString()} in {(hierarchy.durationMs / 1000).toFixed(1)} s
         {hierarchy.computedBy ? ` by ${hierarchy.computedBy.displayName}` : ""}
       </p>

@@ -20,7 +20,7 @@ export function edgeColour(minBlock: number): string {
 /** Sideways spacing, in graph units, between neighbours on one drawn row. */
 const COLUMN = 1;
 /** Vertical distance between drawn rows. */
-const ROW = 1.6;
+const ROW = 1;
 /** Layers with more nodes than this are drawn zig-zag over several rows so that labels do not collide. */
 const MAX_PER_ROW = 14;
 
@@ -45,14 +45,13 @@ function buildGraph(model: HierarchyGraphModel): Graph<NodeAttrs, EdgeAttrs> {
   // are drawn as rows, emulators above what they emulate
   const byLayer = new Map<number, string[]>();
   for (const n of model.nodes) byLayer.set(n.layer, [...(byLayer.get(n.layer) ?? []), n.id]);
-  const widest = Math.max(...[...byLayer.values()].map((ids) => Math.min(ids.length, MAX_PER_ROW * Math.ceil(ids.length / MAX_PER_ROW))));
   let y = 0;
   for (const layer of [...byLayer.keys()].sort((a, b) => a - b)) {
     const ids = byLayer.get(layer)!.sort((p, q) => graph.getNodeAttribute(p, "x") - graph.getNodeAttribute(q, "x"));
     const rows = Math.ceil(ids.length / MAX_PER_ROW);
-    const spacing = (COLUMN * widest) / ids.length;
+    const step = Math.min((COLUMN * MAX_PER_ROW) / ids.length, 2 * COLUMN);
     ids.forEach((id, i) => {
-      graph.setNodeAttribute(id, "x", (i - (ids.length - 1) / 2) * Math.min(spacing, COLUMN * 3));
+      graph.setNodeAttribute(id, "x", (i - (ids.length - 1) / 2) * step);
       graph.setNodeAttribute(id, "y", -(y + (i % rows) * ROW * 0.5));
     });
     y += ROW * (1 + 0.5 * (rows - 1));
@@ -95,8 +94,8 @@ function Interactions({ highlightRule, onOpenRule }: { highlightRule: number | n
     setSettings({
       nodeReducer: (node, data) => {
         if (!focus) return data;
-        if (node === searched) return { ...data, color: "#dc2626", highlighted: true, zIndex: 2 };
-        if (near.has(node)) return { ...data, zIndex: 1 };
+        if (node === searched) return { ...data, color: "#dc2626", highlighted: true, forceLabel: true, zIndex: 2 };
+        if (near.has(node)) return { ...data, forceLabel: true, zIndex: 1 };
         return { ...data, color: "#cbd5e1", label: "" };
       },
       edgeReducer: (edge, data) => {
@@ -106,10 +105,6 @@ function Interactions({ highlightRule, onOpenRule }: { highlightRule: number | n
         return s === focus || t === focus ? { ...data, size: 2.5 } : { ...data, hidden: true };
       },
     });
-    if (searched && !hovered) {
-      const pos = sigma.getNodeDisplayData(searched);
-      if (pos) sigma.getCamera().animate({ x: pos.x, y: pos.y, ratio: 0.6 }, { duration: 300 });
-    }
   }, [sigma, setSettings, hovered, highlightRule]);
   return null;
 }
@@ -134,13 +129,16 @@ export function HierarchyGraph({ model, highlightRule, onOpenRule }: HierarchyGr
       edgeLabelColor: { attribute: "color" },
       labelRenderedSizeThreshold: 0,
       labelDensity: 1,
+      labelGridCellSize: 60,
       zIndex: true,
       stagePadding: 40,
+      // the container can be momentarily zero-wide while the page lays out; sigma redraws on resize
+      allowInvalidContainer: true,
     }),
     [],
   );
   return (
-    <div data-testid="hierarchy-graph" data-nodes={model.nodes.length} data-edges={model.edges.length} className="h-[720px] w-full overflow-hidden rounded-lg border border-slate-200 bg-white">
+    <div data-testid="hierarchy-graph" data-nodes={model.nodes.length} data-edges={model.edges.length} className="h-[600px] w-full overflow-hidden rounded-lg border border-slate-200 bg-white">
       <SigmaContainer<NodeAttrs, EdgeAttrs> style={{ height: "100%", width: "100%" }} settings={settings}>
         <LoadGraph graph={graph} />
         <Interactions highlightRule={highlightRule} onOpenRule={onOpenRule} />

@@ -3,6 +3,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import type { HierarchyParameters } from "@shared/schemas/automata";
+import { useHierarchyRuns } from "../api/get-hierarchy-runs";
 import { useRun } from "../api/get-run";
 import { useRunnableProjects } from "../api/get-runnable-projects";
 import { automataKeys } from "../api/keys";
@@ -15,12 +16,16 @@ export function HierarchyRunPanel({ params }: { params: HierarchyParameters }) {
   const queryClient = useQueryClient();
   const [projectId, setProjectId] = useState<string>("");
   const [started, setStarted] = useState<{ projectId: string; runId: string } | null>(null);
-  const run = useRun(started?.projectId ?? null, started?.runId ?? null);
   const chosen = projectId || projects.data?.[0]?.id || "";
+  const startedRun = useRun(started?.projectId ?? null, started?.runId ?? null);
+  // a run for these parameters started earlier (another visit, another member) is followed instead of a new one
+  const earlier = useHierarchyRuns(started ? null : chosen);
+  const matching = earlier.data?.find((r) => (r.params as { maxBlock?: number } | null)?.maxBlock === params.maxBlock && r.state !== "cancelled");
+  const run = started ? startedRun.data : matching;
 
   useEffect(() => {
-    if (run.data?.state === "succeeded") void queryClient.invalidateQueries({ queryKey: automataKeys.hierarchy(params) });
-  }, [run.data?.state, queryClient, params]);
+    if (run?.state === "succeeded") void queryClient.invalidateQueries({ queryKey: automataKeys.hierarchy(params) });
+  }, [run?.state, queryClient, params]);
 
   if (projects.isPending) return <p className="text-sm text-slate-600" role="status">Looking for projects you can run in…</p>;
   if (projects.isError) return <p className="text-sm text-red-700" role="alert">{projects.error.message}</p>;
@@ -45,13 +50,13 @@ export function HierarchyRunPanel({ params }: { params: HierarchyParameters }) {
             {projects.data.map((p) => <option key={p.id} value={p.id}>{p.name}</option>)}
           </select>
         </label>
-        <button type="submit" disabled={start.isPending || (run.data !== undefined && run.data.state !== "failed" && run.data.state !== "cancelled")}
+        <button type="submit" disabled={start.isPending || (run !== undefined && run.state !== "failed")}
           className="rounded-md bg-brand-700 px-3 py-1.5 text-sm font-medium text-white hover:bg-brand-800 disabled:opacity-50">
           Compute block sizes up to {params.maxBlock} in the background
         </button>
       </form>
       {start.isError && <p className="text-sm text-red-700" role="alert">{start.error.message}</p>}
-      {run.data && <RunProgress run={run.data} />}
+      {run && <RunProgress run={run} />}
     </div>
   );
 }

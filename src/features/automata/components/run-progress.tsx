@@ -1,17 +1,17 @@
 // The state of a background hierarchy run: a progress bar while it goes, the outcome when it stops.
 import type { Run } from "@shared/schemas/runs";
+import { ProgressBar } from "@/components/ui/progress-bar";
 
 export function RunProgress({ run }: { run: Run }) {
-  const percent = Math.round(run.progressFraction * 100);
+  const going = run.state === "running" || run.state === "queued";
   return (
     <div className="space-y-1" data-testid="hierarchy-run-progress" data-state={run.state}>
       <div className="flex justify-between text-xs text-slate-600">
-        <span>{run.state === "running" || run.state === "queued" ? `${run.state} · ${run.progressPhase || "starting"}` : run.state}</span>
-        <span>{percent}% · {run.shardsDone}/{run.shardCount} shards</span>
+        <span>{going && run.progressPhase && run.progressPhase !== run.state ? `${run.state} · ${run.progressPhase}` : run.state}</span>
+        <span>{Math.round(run.progressFraction * 100)}% · {run.shardsDone}/{run.shardCount} shards</span>
       </div>
-      <div className="h-2 w-full overflow-hidden rounded bg-slate-200" role="progressbar" aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent}>
-        <div className={`h-full ${run.state === "failed" ? "bg-red-600" : "bg-brand-600"}`} style={{ width: `${percent}%` }} />
-      </div>
+      <ProgressBar fraction={run.progressFraction} label="Hierarchy run progress" tone={run.state === "failed" ? "danger" : going ? "brand" : "muted"} />
+      {run.state === "succeeded" && <p className="text-sm text-brand-700">Done: the hierarchy is stored and shown below once reloaded.</p>}
       {run.error && <p className="text-sm text-red-700">{run.error.message}</p>}
     </div>
   );

@@ -33,7 +33,7 @@ export function SpaceTimeCanvas({ cells, width, rows, cellWidth, cellHeight, blo
       for (let i = 0; i < width; i++) if (cells[s * width + i]) ctx.fillRect(i * cellWidth, s * cellHeight, cellWidth, cellHeight);
     }
     if (blockEvery && blockEvery > 1) {
-      ctx.strokeStyle = "rgba(13, 148, 136, 0.7)";
+      ctx.strokeStyle = "rgba(13, 148, 136, 0.45)";
       ctx.lineWidth = 1;
       ctx.beginPath();
       for (let i = 0; i <= width; i += blockEvery) {

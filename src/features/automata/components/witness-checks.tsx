@@ -30,11 +30,11 @@ export function WitnessChecks({ report }: { report: WitnessReport }) {
       </p>
       <div className="overflow-x-auto">
         <table className="min-w-full text-left text-sm">
-          <thead className="text-xs uppercase text-slate-500">
+          <thead className="text-xs text-slate-500">
             <tr>
               <th className="py-1 pr-4">a b c</th>
               <th className="py-1 pr-4">G(a,b,c)</th>
-              <th className="py-1 pr-4">u_a u_b u_c</th>
+              <th className="py-1 pr-4">u<sub>a</sub> u<sub>b</sub> u<sub>c</sub></th>
               <th className="py-1 pr-4">middle after {report.witness.time} steps of rule {report.source}</th>
               <th className="py-1">agrees</th>
             </tr>

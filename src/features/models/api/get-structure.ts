@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
+import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
 import { StructureResult } from "@shared/schemas/models";
 import { apiRequest } from "@/lib/api-client";
 import { modelKeys, revisionPath } from "./keys";
@@ -14,5 +14,5 @@ export const structureQuery = (projectId: string, modelId: string, revision: num
   });
 
 export function useStructure(projectId: string, modelId: string, revision: number, enabled = true) {
-  return useQuery({ ...structureQuery(projectId, modelId, revision), enabled });
+  return useQuery({ ...structureQuery(projectId, modelId, revision), enabled, placeholderData: keepPreviousData });
 }

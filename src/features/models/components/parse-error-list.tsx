@@ -9,7 +9,8 @@ export function ParseErrorList({ errors, title = "The model could not be read" }
       <ul className="mt-1 space-y-0.5">
         {errors.map((e, i) => (
           <li key={i} data-testid="parse-error" data-line={e.line} data-column={e.column}>
-            <span className="font-mono">line {e.line}, column {e.column}</span>: {e.message}
+            {e.line > 0 && <span className="font-mono">line {e.line}, column {e.column}: </span>}
+            {e.message}
           </li>
         ))}
       </ul>

@@ -111,7 +111,7 @@ export function WiringDiagram({ structure, state, pngName }: WiringDiagramProps)
       edgeProgramClasses: {
         activation: createEdgeArrowProgram<WiringNodeAttrs, WiringEdgeAttrs>(),
         // A short, wide head reads as the flat bar of a repression.
-        inhibition: createEdgeArrowProgram<WiringNodeAttrs, WiringEdgeAttrs>({ lengthToThicknessRatio: 1.2, widenessToThicknessRatio: 7 }),
+        inhibition: createEdgeArrowProgram<WiringNodeAttrs, WiringEdgeAttrs>({ lengthToThicknessRatio: 1.5, widenessToThicknessRatio: 8 }),
       },
       labelFont: '"Inter Variable", sans-serif',
       labelSize: 13,
@@ -120,6 +120,8 @@ export function WiringDiagram({ structure, state, pngName }: WiringDiagramProps)
       labelDensity: 2,
       zIndex: true,
       stagePadding: 40,
+      // The container is briefly detached when the revision changes; sigma must not throw then.
+      allowInvalidContainer: true,
     }),
     [],
   );

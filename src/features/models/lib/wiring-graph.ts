@@ -24,7 +24,7 @@ export function buildWiringGraph(structure: StructureResult): Graph<WiringNodeAt
     graph.addNode(node.name, {
       x: Math.cos(angle) * 10,
       y: Math.sin(angle) * 10,
-      size: 7 + Math.min(8, node.outDegree),
+      size: 11 + Math.min(8, node.outDegree),
       label: node.name,
       color: NODE_COLOUR,
       inDegree: node.inDegree,
@@ -36,7 +36,7 @@ export function buildWiringGraph(structure: StructureResult): Graph<WiringNodeAt
   for (const e of structure.edges) {
     if (e.source === e.target) continue; // sigma draws no self-loops; the hover panel lists them
     const style = signStyle[e.sign];
-    graph.addDirectedEdge(e.source, e.target, { size: 2, color: style.color, type: style.type, sign: e.sign });
+    graph.addDirectedEdge(e.source, e.target, { size: 3, color: style.color, type: style.type, sign: e.sign });
   }
   if (graph.order > 2 && graph.size > 0) {
     forceAtlas2.assign(graph, { iterations: 300, settings: { ...forceAtlas2.inferSettings(graph), adjustSizes: true } });

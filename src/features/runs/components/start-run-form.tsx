@@ -1,6 +1,8 @@
-// Starting a run by hand: the demonstration counter (to see sharding and progress) or attractors of rule text.
+// Starting a run by hand: the demonstration counter (to see sharding and progress), the elementary-rule hierarchy,
+// or attractors of rule text.
 // Analyses of a model revision are started from the model's page through the same endpoint.
 import { useState, type FormEvent } from "react";
+import { MAX_HIERARCHY_BLOCK } from "@shared/schemas/automata";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { useStartRun } from "../api/start-run";
@@ -9,7 +11,8 @@ const inputClass = "w-full rounded-md border border-slate-300 px-2 py-1.5 text-s
 
 export function StartRunForm({ projectId, onStarted }: { projectId: string; onStarted(runId: string, reused: boolean): void }) {
   const start = useStartRun(projectId);
-  const [kind, setKind] = useState<"sleep-count" | "attractors">("sleep-count");
+  const [kind, setKind] = useState<"sleep-count" | "eca-hierarchy" | "attractors">("sleep-count");
+  const [maxBlock, setMaxBlock] = useState(12);
   const [itemCount, setItemCount] = useState(2000);
   const [shardCount, setShardCount] = useState(4);
   const [delayMsPerItem, setDelay] = useState(5);
@@ -19,7 +22,9 @@ export function StartRunForm({ projectId, onStarted }: { projectId: string; onSt
     e.preventDefault();
     const body = kind === "sleep-count"
       ? { kind, params: { itemCount, shardCount, delayMsPerItem } }
-      : { kind, params: { ruleText } };
+      : kind === "eca-hierarchy"
+        ? { kind, params: { maxBlock, timeMode: "block" as const, radius: 1 as const } }
+        : { kind, params: { ruleText } };
     start.mutate(body, { onSuccess: (run) => onStarted(run.id, run.reused) });
   };
 
@@ -30,6 +35,7 @@ export function StartRunForm({ projectId, onStarted }: { projectId: string; onSt
           <span className="mb-1 block text-slate-600">Kind</span>
           <select className={inputClass} value={kind} onChange={(e) => setKind(e.target.value as typeof kind)} data-testid="start-kind">
             <option value="sleep-count">sleep-count (demonstration)</option>
+            <option value="eca-hierarchy">eca-hierarchy (elementary rules)</option>
             <option value="attractors">attractors (rule text)</option>
           </select>
         </label>
@@ -48,6 +54,11 @@ export function StartRunForm({ projectId, onStarted }: { projectId: string; onSt
               <input type="number" min={0} max={1000} className={inputClass} value={delayMsPerItem} onChange={(e) => setDelay(Number(e.target.value))} data-testid="start-delay" />
             </label>
           </>
+        ) : kind === "eca-hierarchy" ? (
+          <label className="text-sm">
+            <span className="mb-1 block text-slate-600">Largest block size</span>
+            <input type="number" min={1} max={MAX_HIERARCHY_BLOCK} className={inputClass} value={maxBlock} onChange={(e) => setMaxBlock(Number(e.target.value))} data-testid="start-max-block" />
+          </label>
         ) : (
           <label className="min-w-64 flex-1 text-sm">
             <span className="mb-1 block text-slate-600">Rule text</span>

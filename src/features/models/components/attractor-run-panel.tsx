@@ -1,0 +1,71 @@
+// For models too large to analyse within a request: start the exact analysis as a run, follow its progress, cancel
+// it, and reload the attractors when it has succeeded (the server then stores them with the revision).
+import { useQueryClient } from "@tanstack/react-query";
+import { useEffect, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { ProgressBar } from "@/components/ui/progress-bar";
+import { useCancelRun } from "../api/cancel-run";
+import { useRun } from "../api/get-run";
+import { modelKeys } from "../api/keys";
+import { useStartAttractorRun } from "../api/start-attractor-run";
+
+export interface AttractorRunPanelProps {
+  projectId: string;
+  modelId: string;
+  revision: number;
+  revisionId: string;
+  nodeCount: number;
+  canStart: boolean;
+}
+
+export function AttractorRunPanel({ projectId, modelId, revision, revisionId, nodeCount, canStart }: AttractorRunPanelProps) {
+  const qc = useQueryClient();
+  const start = useStartAttractorRun(projectId);
+  const cancel = useCancelRun(projectId);
+  const [runId, setRunId] = useState<string | null>(null);
+  const run = useRun(projectId, runId);
+  const state = run.data?.state;
+
+  useEffect(() => {
+    if (state === "succeeded") void qc.invalidateQueries({ queryKey: modelKeys.revision(projectId, modelId, revision) });
+  }, [state, qc, projectId, modelId, revision]);
+
+  return (
+    <div data-testid="attractor-run-panel" className="space-y-2 rounded-md border border-slate-200 bg-slate-50 p-3 text-sm">
+      <p className="text-slate-700">
+        This model has {nodeCount} nodes ({(2 ** nodeCount).toLocaleString()} states). Its exact synchronous analysis runs in the background; the
+        result is stored with revision {revision} and reused afterwards.
+      </p>
+      {!runId && canStart && (
+        <Button data-testid="start-attractor-run" disabled={start.isPending} onClick={() => start.mutate(revisionId, { onSuccess: (r) => setRunId(r.id) })}>
+          Compute attractors
+        </Button>
+      )}
+      {!runId && !canStart && <p className="text-slate-600">Ask a modeler or the project owner to start it.</p>}
+      {start.error && <p role="alert" className="text-red-700">{start.error.message}</p>}
+      {run.data && (state === "queued" || state === "running") && (
+        <div className="space-y-1">
+          <ProgressBar fraction={run.data.progressFraction} label="Attractor analysis progress" />
+          <div className="flex items-center justify-between text-xs text-slate-600">
+            <span>
+              {state === "queued" ? "Waiting for a worker…" : `${run.data.progressPhase} · ${Math.round(run.data.progressFraction * 100)}%`}
+            </span>
+            {canStart && (
+              <Button variant="secondary" size="sm" disabled={cancel.isPending} onClick={() => cancel.mutate(run.data!.id)}>
+                Cancel
+              </Button>
+            )}
+          </div>
+        </div>
+      )}
+      {(state === "failed" || state === "cancelled") && (
+        <p role="alert" className="text-red-700">
+          The run {state === "failed" ? `failed: ${run.data?.error?.message ?? "unknown error"}` : "was cancelled"}.{" "}
+          <button type="button" className="underline" onClick={() => setRunId(null)}>
+            Start again
+          </button>
+        </p>
+      )}
+    </div>
+  );
+}
