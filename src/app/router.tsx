@@ -17,9 +17,12 @@ import { ProjectAuditRoute } from "./routes/project-audit";
 import { ProjectLayoutRoute } from "./routes/project-layout";
 import { ProjectListRoute } from "./routes/project-list";
 import { ProjectMembersRoute } from "./routes/project-members";
+import { ProjectHierarchyRoute } from "./routes/project-hierarchy";
 import { ProjectModelsRoute } from "./routes/project-models";
 import { ProjectOverviewRoute } from "./routes/project-overview";
+import { ProjectReductionsRoute } from "./routes/project-reductions";
 import { ProjectRunsRoute } from "./routes/project-runs";
+import { ReductionDetailRoute } from "./routes/reduction-detail";
 import { RunDetailRoute } from "./routes/run-detail";
 import { RouteErrorBoundary } from "./routes/route-error";
 import { SignInRoute } from "./routes/sign-in";
@@ -52,6 +55,9 @@ export const routes = [
               { path: "models/:modelId", element: <ModelDetailRoute /> },
               { path: "runs", element: <ProjectRunsRoute /> },
               { path: "runs/:runId", element: <RunDetailRoute /> },
+              { path: "reductions", element: <ProjectReductionsRoute /> },
+              { path: "reductions/:reductionId", element: <ReductionDetailRoute /> },
+              { path: "hierarchy", element: <ProjectHierarchyRoute /> },
               { path: "members", element: <ProjectMembersRoute /> },
               { path: "audit", element: <ProjectAuditRoute /> },
             ],

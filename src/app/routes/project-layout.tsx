@@ -14,6 +14,8 @@ export const projectTabs: TabLink[] = [
   { to: "", label: "Overview", end: true },
   { to: "models", label: "Models" },
   { to: "runs", label: "Runs" },
+  { to: "reductions", label: "Reductions" },
+  { to: "hierarchy", label: "Model hierarchy" },
   { to: "members", label: "Members" },
   { to: "audit", label: "Audit log" },
 ];

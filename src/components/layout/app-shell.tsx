@@ -37,7 +37,7 @@ export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: Reac
               </NavLink>
             ))}
           </nav>
-          <div className="hidden md:ml-auto md:flex md:items-center md:gap-2">{notificationSlot}{accountSlot}</div>
+          <div className="flex items-center gap-2 md:ml-auto">{notificationSlot}{accountSlot}</div>
         </div>
       </header>
       <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
