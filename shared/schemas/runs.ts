@@ -5,14 +5,12 @@ import { HierarchyRunParameters } from "./automata";
 export const RUN_STATES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
 export const RunState = z.enum(RUN_STATES);
 export type RunState = z.infer<typeof RunState>;
-export const FINISHED_RUN_STATES: readonly RunState[] = ["succeeded", "failed", "cancelled"];
+const FINISHED_RUN_STATES: readonly RunState[] = ["succeeded", "failed", "cancelled"];
 export function isRunFinished(state: RunState): boolean {
   return FINISHED_RUN_STATES.includes(state);
 }
 
 export const RUN_KINDS = ["sleep-count", "eca-hierarchy", "attractors"] as const;
-export const RunKind = z.enum(RUN_KINDS);
-export type RunKind = z.infer<typeof RunKind>;
 
 /** Demonstration kind: sums a deterministic function over [0, itemCount) in shards, sleeping per item. */
 export const SleepCountParams = z.object({
@@ -73,7 +71,6 @@ export type RunListQuery = z.infer<typeof RunListQuery>;
 export const RunList = z.array(Run);
 
 export const RunParamsPath = z.object({ projectId: z.uuid(), runId: z.uuid() });
-export const ProjectParamsPath = z.object({ projectId: z.uuid() });
 
 export const Notification = z.object({
   id: z.uuid(),

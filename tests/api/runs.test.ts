@@ -58,6 +58,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
+  delete process.env.RUN_QUEUE_CAP;
   await stopWorker();
   await mailer.close();
   await t.close();
@@ -194,6 +195,22 @@ describe("runs with an in-process worker", () => {
     const fixed = result.attractors.filter((a) => a.length === 1).flatMap((a) => a.states).sort();
     expect(fixed).toEqual(["01", "10"]);
     expect(result.attractors.filter((a) => a.length === 2)).toHaveLength(1);
+  });
+
+  it("runs the attractors kind on a model revision of the project, and refuses a revision id from elsewhere with 404", async () => {
+    const model = await owner.post(`/api/projects/${projectId}/models`).send({ name: `Switch ${randomUUID().slice(0, 6)}`, ruleText: "a' = !b\nb' = !a" });
+    expect(model.status).toBe(201);
+    const revision = await t.db("model_revisions").where({ model_id: model.body.data.model.id }).first();
+    const res = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "attractors", modelRevisionId: revision.id, params: {} });
+    expect(res.status).toBe(201);
+    expect(res.body.data.modelRevisionId).toBe(revision.id);
+    const done = await finished(res.body.data.id);
+    expect(done.state).toBe("succeeded");
+    expect((done.result as { attractors: unknown[] }).attractors).toHaveLength(3);
+    const stranger = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "attractors", modelRevisionId: randomUUID(), params: {} });
+    expect(stranger.status).toBe(404);
+    const neither = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "attractors", params: {} });
+    expect(neither.status).toBe(400);
   });
 });
 

@@ -88,7 +88,7 @@ describe("models screens in headless Chromium", () => {
     await page.waitForTimeout(500);
     await screenshot(page, "models-large-before-search");
     await page.getByTestId("node-search").fill("Arr1");
-    await page.waitForTimeout(500);
+    await page.waitForTimeout(800);
     await screenshot(page, "models-large");
   });
 

@@ -72,4 +72,17 @@ describe("runs in the browser", () => {
     await screenshot(page, "runs-list-cancelled");
     expect(errors).toEqual([]);
   });
+
+  it("shows unread notifications on the header's bell, lists them when opened and marks them read", async () => {
+    const { page } = browser;
+    const owner = await server.db("users").where({ email: "owner@demo.emulant.test" }).first();
+    const title = `Your sleep-count run finished (${randomUUID().slice(0, 6)})`;
+    await server.db("notifications").insert({ user_id: owner.id, kind: "run.succeeded", title, body: "The run you started finished after 2 min.", link: `/projects/${projectId}/runs` });
+    await page.goto(`${server.baseUrl}/projects/${projectId}/runs`);
+    await expect.poll(async () => Number(await page.getByTestId("notification-count").textContent())).toBeGreaterThanOrEqual(1);
+    await page.getByTestId("notification-bell").click();
+    await expect.poll(() => page.getByRole("dialog", { name: "Notifications" }).getByText(title).isVisible()).toBe(true);
+    await screenshot(page, "runs-notifications");
+    await expect.poll(() => page.getByTestId("notification-count").count()).toBe(0);
+  });
 });

@@ -11,5 +11,3 @@ const kinds = new Map<string, RunKindDefinition<never>>(
 export function runKind(kind: string): RunKindDefinition<unknown> | undefined {
   return kinds.get(kind) as RunKindDefinition<unknown> | undefined;
 }
-
-export const runKindNames = () => [...kinds.keys()];

@@ -1,5 +1,5 @@
-// Words of cells packed into integers, bit i holding cell i (leftmost cell = least significant bit), and their
-// text form as '0'/'1' characters leftmost first, the convention of every word the engine prints.
+// Words of cells packed into integers, bit i holding cell i (leftmost cell = least significant bit, common practice
+// in bit-parallel simulation), and their text form as '0'/'1' characters leftmost first, as the engine prints them.
 import { EngineError } from "../errors";
 
 /** The most cells a packed word holds; bitwise operators work on 32-bit integers. */

@@ -1,5 +1,6 @@
-// One synchronous step of a radius-r rule on a finite word (open ends: the word loses r cells at each end) or on a
-// ring (periodic boundary), over plain cell arrays and over bit-packed words (bit i = cell i, leftmost cell first).
+// One synchronous step of a radius-r rule (Wolfram, "Statistical mechanics of cellular automata", Rev. Mod. Phys.
+// 55, 1983) on a finite word, which loses r cells at each end, or on a ring (periodic boundary), over plain cell
+// arrays and over bit-packed words (bit i = cell i, leftmost cell first).
 import { EngineError } from "../errors";
 import type { RuleTable } from "./rule-table";
 

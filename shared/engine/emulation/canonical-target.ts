@@ -3,18 +3,19 @@
 // (common practice in classifying reductions: constant, identity and decoupled maps are uninformative).
 import { EngineError } from "../errors";
 
-function permutations(m: number): number[][] {
+/** All orderings of 0..m-1. */
+export function permutations(m: number): number[][] {
   if (m === 0) return [[]];
   const out: number[][] = [];
   for (const p of permutations(m - 1)) for (let i = 0; i <= p.length; i++) out.push([...p.slice(0, i), m - 1, ...p.slice(i)]);
   return out;
 }
 
-/** The lexicographically smallest relabelling of `succ` (length 2^m) over all node renamings and value swaps. */
-export function canonicalTargetKey(succ: ArrayLike<number>, m: number): string {
-  if (m > 5) throw new EngineError("TOO_LARGE", "canonical forms are computed for targets of at most 5 nodes");
+/** Every table T g T^-1 for T a node renaming composed with value swaps (with repetitions when g has symmetries). */
+export function relabelledTables(succ: ArrayLike<number>, m: number): number[][] {
+  if (m > 5) throw new EngineError("TOO_LARGE", "relabellings are listed for targets of at most 5 nodes");
   const size = 2 ** m;
-  let best: number[] | null = null;
+  const out: number[][] = [];
   for (const perm of permutations(m)) {
     const move = (x: number) => {
       let y = 0;
@@ -22,12 +23,18 @@ export function canonicalTargetKey(succ: ArrayLike<number>, m: number): string {
       return y;
     };
     for (let flip = 0; flip < size; flip++) {
-      // Image map h(y) = T(g(T^-1(y))) with T(x) = move(x) ^ flip.
       const h = new Array<number>(size);
       for (let x = 0; x < size; x++) h[move(x) ^ flip] = move(succ[x]!) ^ flip;
-      if (best === null || lexLess(h, best)) best = h;
+      out.push(h);
     }
   }
+  return out;
+}
+
+/** The lexicographically smallest relabelling of `succ` (length 2^m) over all node renamings and value swaps. */
+export function canonicalTargetKey(succ: ArrayLike<number>, m: number): string {
+  let best: number[] | null = null;
+  for (const h of relabelledTables(succ, m)) if (best === null || lexLess(h, best)) best = h;
   return `${m}:${best!.join(",")}`;
 }
 

@@ -1,15 +1,31 @@
-// Discover mode: enumerate block encodings of 1..4 target nodes in a source network and keep every consistent one
-// (the encoded set is closed under F^t, so the induced map is a target network), up to renaming and codeword swaps.
+// Discover mode: find every target of 1..4 nodes that a source emulates within the bounds (an encoding whose encoded
+// set is closed under F^t induces a target network), up to renaming and codeword swaps. Sources up to 16 nodes are
+// enumerated; larger ones go to MiniSat with G's table bits as variables, excluding each found target's relabellings.
 // Block emulation as in Ollinger, "Intrinsic universality and cellular automata", Theoretical Computer Science, 2003.
+import { CancelledError, EngineError } from "../errors";
 import type { BooleanNetwork } from "../network";
 import type { BlockEmulationWitness } from "./block-witness";
 import { canonicalTargetKey, interactionCount, trivialityFlags, type TargetFlag } from "./canonical-target";
 import { networkFromSuccessors } from "./network-from-successors";
-import type { UnitRange } from "./search-units";
+import { shardRange, type UnitRange } from "./search-units";
+import { EmulationSatInstance } from "./emulation-sat";
+import { relabelledTables } from "./canonical-target";
 import type { SearchControl } from "./given-target-search";
 import { enumerateEncodings, enumerationUnitCount, type EnumerationBounds } from "./encoding-enumeration";
 
-export type DiscoverBounds = EnumerationBounds;
+export interface DiscoverBounds extends EnumerationBounds {
+  /** "enumeration" (default up to 16 source nodes) or "sat" (default above). */
+  readonly method?: "enumeration" | "sat";
+}
+
+/** Largest source that discover enumerates by default. */
+const DEFAULT_ENUMERATION_MAX_NODES = 16;
+/** Targets one SAT unit (a time scale and a target size) reports at most. */
+export const MAX_SAT_TARGETS_PER_UNIT = 256;
+
+function discoverMethod(source: BooleanNetwork, bounds: DiscoverBounds): "enumeration" | "sat" {
+  return bounds.method ?? (source.names.length <= DEFAULT_ENUMERATION_MAX_NODES ? "enumeration" : "sat");
+}
 
 export interface DiscoveredTarget {
   /** Canonical form of the target map; equal keys mean equal targets up to renaming and codeword swaps. */
@@ -18,7 +34,7 @@ export interface DiscoveredTarget {
   readonly witness: BlockEmulationWitness;
   /** Time scales at which some encoding shows this target. */
   readonly times: number[];
-  /** Encodings (base state, blocks, time) showing it. */
+  /** Encodings (base state, blocks, time) showing it; by SAT, the number of units (time, size) that found it. */
   readonly encodings: number;
   readonly flags: TargetFlag[];
   readonly trivial: boolean;
@@ -41,12 +57,14 @@ export interface DiscoverResult {
   readonly totalUnits: number;
 }
 
+/** Units: (t, base state) by enumeration; (t, target size) by SAT. */
 export function discoverUnitCount(source: BooleanNetwork, bounds: DiscoverBounds): number {
-  return enumerationUnitCount(source, bounds.maxTime);
+  return discoverMethod(source, bounds) === "sat" ? bounds.maxTime * bounds.maxTargetNodes : enumerationUnitCount(source, bounds.maxTime);
 }
 
 /** Run the discover enumeration over one shard (or all units) and return its findings in unit order. */
 export function discoverShard(source: BooleanNetwork, bounds: DiscoverBounds, control: SearchControl = {}): DiscoverShardResult {
+  if (discoverMethod(source, bounds) === "sat") return discoverShardBySat(source, bounds, control);
   const found = new Map<string, { succ: number[]; witness: BlockEmulationWitness; times: number[]; encodings: number; firstUnit: number }>();
   const run = enumerateEncodings(source, bounds, control, (e) => {
     const m = e.masks.length;
@@ -61,6 +79,56 @@ export function discoverShard(source: BooleanNetwork, bounds: DiscoverBounds, co
   });
   const targets = [...found.entries()].map(([key, e]) => describe(source, key, e));
   return { range: run.range, totalUnits: run.totalUnits, encodingsChecked: run.encodingsChecked, targets };
+}
+
+/** Discover by satisfiability: per unit (t, m), ask for targets one by one, excluding each one's relabellings. */
+function discoverShardBySat(source: BooleanNetwork, bounds: DiscoverBounds, control: SearchControl): DiscoverShardResult {
+  const n = source.names.length;
+  const M = bounds.maxTargetNodes;
+  if (!(M >= 1 && M <= 4)) throw new EngineError("BAD_BOUNDS", "discover looks for targets of 1 to 4 nodes");
+  if (!(bounds.maxTime >= 1) || !(bounds.maxBlock >= 1)) throw new EngineError("BAD_BOUNDS", "time scale and block size bounds must be at least 1");
+  const allowed = new Uint8Array(n);
+  for (const v of bounds.allowedNodes ?? [...Array(n).keys()]) {
+    if (!(v >= 0 && v < n)) throw new EngineError("BAD_BOUNDS", `allowed node ${v} is not a source node`);
+    allowed[v] = 1;
+  }
+  const totalUnits = bounds.maxTime * M;
+  const range = control.range ?? (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
+  const found = new Map<string, { succ: number[]; witness: BlockEmulationWitness; times: number[]; encodings: number; firstUnit: number }>();
+  let queries = 0;
+  const span = Math.max(1, range.end - range.start);
+  for (let unit = Math.max(range.start, control.resumeFrom ?? range.start); unit < range.end; unit++) {
+    control.onCursor?.(unit);
+    control.onProgress?.((unit - range.start) / span, "searching targets");
+    const time = Math.floor(unit / M) + 1;
+    const m = (unit % M) + 1;
+    if (m > n) continue;
+    const sat = new EmulationSatInstance({
+      source,
+      targetSucc: null,
+      targetNodes: m,
+      time,
+      maxBlock: bounds.maxBlock,
+      allowed,
+      contextAllowed: bounds.contextAllowed ?? true,
+    });
+    for (let k = 0; k < MAX_SAT_TARGETS_PER_UNIT; k++) {
+      if (control.shouldStop?.()) throw new CancelledError();
+      queries++;
+      const next = sat.nextTarget((succ) => relabelledTables(succ, m));
+      if (!next) break;
+      const key = canonicalTargetKey(next.succ, m);
+      const entry = found.get(key);
+      if (entry) {
+        entry.encodings++;
+        if (!entry.times.includes(time)) entry.times.push(time);
+      } else found.set(key, { succ: next.succ, witness: next.witness, times: [time], encodings: 1, firstUnit: unit });
+    }
+  }
+  control.onCursor?.(range.end);
+  control.onProgress?.(1, "searching targets");
+  const targets = [...found.entries()].map(([key, e]) => describe(source, key, e));
+  return { range, totalUnits, encodingsChecked: queries, targets };
 }
 
 function describe(

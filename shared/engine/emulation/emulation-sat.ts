@@ -7,8 +7,8 @@ import { MiniSatHandle } from "./minisat-handle";
 
 export interface EmulationSatProblem {
   readonly source: BooleanNetwork;
-  /** G's successor table over its 2^m states. */
-  readonly targetSucc: ArrayLike<number>;
+  /** G's successor table over its 2^m states, or null to leave G free (discover mode: G's table bits are variables). */
+  readonly targetSucc: ArrayLike<number> | null;
   readonly targetNodes: number;
   readonly time: number;
   readonly maxBlock: number;
@@ -25,6 +25,7 @@ export class EmulationSatInstance {
   private readonly sat = new MiniSatHandle();
   private readonly inVar: Int32Array; // v * m + j, 0 when v may not join blocks
   private readonly wVar: Int32Array; // v * states + x
+  private readonly gVar: Int32Array; // x * m + j: bit j of G(x) in discover mode
   private readonly impossible: boolean;
 
   constructor(private readonly p: EmulationSatProblem) {
@@ -36,6 +37,8 @@ export class EmulationSatInstance {
     const clause = (...lits: number[]) => sat.clause(lits);
     this.inVar = new Int32Array(n * m);
     this.wVar = new Int32Array(n * states);
+    const ctxVar = new Int32Array(n);
+    this.gVar = targetSucc ? new Int32Array(0) : Int32Array.from({ length: states * m }, () => sat.newVar());
     let impossible = false;
     for (let v = 0; v < n; v++) {
       if (!p.allowed[v]) {
@@ -48,6 +51,7 @@ export class EmulationSatInstance {
       for (let x = 0; x < states; x++) this.wVar[v * states + x] = sat.newVar();
       for (let j = 0; j < m; j++) this.inVar[v * m + j] = sat.newVar();
       const ctx = sat.newVar();
+      ctxVar[v] = ctx;
       const ins = Array.from(this.inVar.subarray(v * m, v * m + m));
       const w = (x: number) => this.wVar[v * states + x]!;
       clause(ctx, ...ins);
@@ -100,7 +104,7 @@ export class EmulationSatInstance {
         for (let v = 0; v < n; v++) {
           const regs = source.regulators[v]!;
           const table = source.tables[v]!;
-          const out = cur ? cur[v * states + x]! : this.wVar[v * states + targetSucc[x]!]!;
+          const out = cur ? cur[v * states + x]! : targetSucc ? this.wVar[v * states + targetSucc[x]!]! : this.freeImage(v, x, ctxVar[v]!);
           const inputs = Array.from(regs, (r) => prev[r * states + x]!);
           for (let row = 0; row < table.length; row++) {
             const lits: number[] = [];
@@ -113,6 +117,55 @@ export class EmulationSatInstance {
       if (cur) prev = cur;
     }
     this.impossible = impossible;
+  }
+
+  /**
+   * Discover mode: the variable for node v of e(G(x)), tied to G's table bits: a context node keeps its value, a
+   * node of block j takes its codeword bit for G(x)_j.
+   */
+  private freeImage(v: number, x: number, ctx: number): number {
+    const m = this.p.targetNodes;
+    const states = 2 ** m;
+    const a0 = this.wVar[v * states]!;
+    if (!this.p.allowed[v]) return a0;
+    const o = this.sat.newVar();
+    const clause = (...lits: number[]) => this.sat.clause(lits);
+    clause(-ctx, -o, a0);
+    clause(-ctx, o, -a0);
+    for (let j = 0; j < m; j++) {
+      const b = this.inVar[v * m + j]!;
+      const g = this.gVar[x * m + j]!;
+      const a1 = this.wVar[v * states + (1 << j)]!;
+      clause(-b, -g, -o, a1);
+      clause(-b, -g, o, -a1);
+      clause(-b, g, -o, a0);
+      clause(-b, g, o, -a0);
+    }
+    return o;
+  }
+
+  /**
+   * Discover mode: the next target (with its witness) not equal up to relabelling to any returned before, or null.
+   * `relabellings` lists, for a found table, every table equivalent to it; all of them are excluded afterwards.
+   */
+  nextTarget(relabellings: (succ: readonly number[]) => number[][]): { succ: number[]; witness: BlockEmulationWitness } | null {
+    if (this.impossible || this.p.targetSucc) return null;
+    const values = this.sat.solve();
+    if (!values) return null;
+    const m = this.p.targetNodes;
+    const succ = Array.from({ length: 2 ** m }, (_, x) => {
+      let y = 0;
+      for (let j = 0; j < m; j++) if (values[this.gVar[x * m + j]!] === true) y |= 1 << j;
+      return y;
+    });
+    for (const h of relabellings(succ)) {
+      const lits: number[] = [];
+      h.forEach((y, x) => {
+        for (let j = 0; j < m; j++) lits.push((y >>> j) & 1 ? -this.gVar[x * m + j]! : this.gVar[x * m + j]!);
+      });
+      this.sat.clause(lits);
+    }
+    return { succ, witness: this.witnessFrom(values) };
   }
 
   /** A witness whose block 0 has its smallest node in [lo, hi), or null when there is none. */

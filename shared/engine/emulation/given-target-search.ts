@@ -10,6 +10,7 @@ import { shardRange, type UnitRange } from "./search-units";
 import { cycleLengthCounts, cyclesFit } from "./cycle-prefilter";
 import { powerTable, successorTable } from "./network-step";
 import { enumerateEncodings, enumerationUnitCount, type EnumerationBounds } from "./encoding-enumeration";
+import { permutations } from "./canonical-target";
 
 /** Sources up to this size are first checked against G's attractors (F^t is tabulated). */
 const PREFILTER_MAX_NODES = 16;
@@ -92,7 +93,8 @@ export function searchBlockEmulation(
   });
   let satQueries = 0;
   if (method === "enumeration") {
-    const hit = enumerationSearch(source, targetSucc, m, { ...bounds, maxTargetNodes: m, allowedNodes: bounds.allowedNodes ?? undefined, contextAllowed }, { ...control, range });
+    const hit = enumerationSearch(source, targetSucc, m, { ...bounds, maxTargetNodes: m, contextAllowed }, { ...control, range });
+    if (hit) control.onProgress?.(1, "searching block emulations");
     return result(hit?.witness ?? null, hit?.unit ?? null);
   }
   let instance: { t: number; sat: EmulationSatInstance } | null = null;
@@ -143,7 +145,7 @@ export function searchBlockEmulation(
       satQueries++;
       const witness = new EmulationSatInstance(problem(t)).solveRange(v, v + 1);
       if (!witness) throw new EngineError("INTERNAL", "a satisfiable unit became unsatisfiable");
-      report((t - 1) * n + v);
+      control.onProgress?.(1, "searching block emulations");
       return result(witness, (t - 1) * n + v);
     }
     cursor = t * n > range.end ? range.end : t * n;
@@ -197,13 +199,6 @@ function enumerationSearch(
     m,
   );
   return hit;
-}
-
-function permutations(m: number): number[][] {
-  if (m === 0) return [[]];
-  const out: number[][] = [];
-  for (const p of permutations(m - 1)) for (let i = 0; i <= p.length; i++) out.push([...p.slice(0, i), m - 1, ...p.slice(i)]);
-  return out;
 }
 
 /** Merge shard results (any order) into what one unsplit run over their union reports. */

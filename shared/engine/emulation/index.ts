@@ -11,7 +11,7 @@ export {
   type EmulationSearchResult,
   type SearchControl,
 } from "./given-target-search";
-export { canonicalTargetKey, trivialityFlags, interactionCount, type TargetFlag } from "./canonical-target";
+export { canonicalTargetKey, relabelledTables, trivialityFlags, interactionCount, type TargetFlag } from "./canonical-target";
 export {
   discoverShard,
   mergeDiscoverShards,

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { analyseSynchronous, attractorsAsText } from "../state-graph";
 import { randomNK } from "../update/random-networks.test-support";
+import { YEAST_NAMES, yeastCellCycle } from "../state-graph/yeast-cell-cycle.test-support";
 import { groupByPhenotype, phenotypeLabel } from "./index";
 
 describe("phenotype", () => {
@@ -31,5 +32,13 @@ describe("phenotype", () => {
     const attractors = attractorsAsText(analyseSynchronous(randomNK(10, 2, 6)));
     const groups = groupByPhenotype(attractors, [0, 3], Array.from({ length: 10 }, (_, i) => `g${i}`));
     expect(groups.flatMap((g) => g.attractors).sort((a, b) => a - b)).toEqual(attractors.map((_, i) => i));
+  });
+
+  it("phenotypeLabel reads the biggest yeast cell-cycle attractor as the G1 state, Cdh1 and Sic1 on and Clb1,2 off", () => {
+    // Li et al., "The yeast cell-cycle network is robustly designed", PNAS 2004: the fixed point with the largest
+    // basin is the stationary G1 state, in which only Cdh1 and Sic1 are active (value from memory).
+    const [g1] = attractorsAsText(analyseSynchronous(yeastCellCycle()));
+    const markers = ["Cdh1", "Sic1", "Clb12"].map((m) => YEAST_NAMES.indexOf(m));
+    expect(phenotypeLabel(g1!.states, markers, YEAST_NAMES).label).toBe("Cdh1=1 Sic1=1 Clb12=0");
   });
 });

@@ -71,11 +71,27 @@ function Interactions({ search, state, onHover, pngName }: InteractionsProps) {
         return s === focus || t === focus ? { ...data, size: 3 } : { ...data, hidden: true };
       },
     });
-    if (found && !hovered) {
-      const pos = sigma.getNodeDisplayData(found);
-      if (pos) sigma.getCamera().animate({ x: pos.x, y: pos.y, ratio: 0.7 }, { duration: 300 });
-    }
   }, [sigma, setSettings, hovered, search, state]);
+
+  // Centre on a found node once per search result (not on every re-render).
+  const query = search.trim().toLowerCase();
+  useEffect(() => {
+    if (!query) return;
+    const graph = sigma.getGraph();
+    const found = graph.findNode((id) => id.toLowerCase() === query) ?? graph.findNode((id) => id.toLowerCase().includes(query));
+    if (!found) return;
+    // Display data are only normalised once sigma has rendered with the new reducers, so centre after that render.
+    const centre = () => {
+      const pos = sigma.getNodeDisplayData(found);
+      if (pos) sigma.getCamera().animate({ x: pos.x, y: pos.y, ratio: 0.8 }, { duration: 250 });
+    };
+    sigma.once("afterRender", centre);
+    sigma.scheduleRefresh();
+    return () => {
+      sigma.off("afterRender", centre);
+      sigma.getCamera().setState({ x: 0.5, y: 0.5, ratio: 1 });
+    };
+  }, [sigma, query]);
 
   return (
     <button
@@ -117,7 +133,9 @@ export function WiringDiagram({ structure, state, pngName }: WiringDiagramProps)
       labelSize: 13,
       labelWeight: "600",
       labelRenderedSizeThreshold: 0,
-      labelDensity: 2,
+      // Regulatory networks are small enough that every name should show.
+      labelDensity: 10,
+      labelGridCellSize: 40,
       zIndex: true,
       stagePadding: 40,
       // The container is briefly detached when the revision changes; sigma must not throw then.
