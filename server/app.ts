@@ -83,7 +83,7 @@ export function createApp(deps: AppDeps): Express {
   const runQueue = deps.runQueue ?? lazyRunQueue(deps.config.DATABASE_URL, deps.log);
   api.use("/projects/:projectId/runs", runsRouter({ db: deps.db, queue: runQueue, queueCap: loadRunSettings().queueCap }));
   api.use("/notifications", notificationsRouter(deps));
-  api.use("/projects/:projectId/reductions", reductionsRouter(deps));
+  api.use("/projects/:projectId/reductions", reductionsRouter({ db: deps.db, queue: runQueue, queueCap: loadRunSettings().queueCap }));
   api.use("/projects/:projectId/model-hierarchy", modelHierarchyRouter(deps));
   api.use("/automata", automataRouter(deps));
   api.use(notFound);

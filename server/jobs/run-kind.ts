@@ -3,6 +3,7 @@
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import type { z } from "zod";
+import type { AfterMerge } from "../db/repositories/run-shards";
 
 export interface RunKindDefinition<P = unknown> {
   kind: string;
@@ -16,6 +17,8 @@ export interface RunKindDefinition<P = unknown> {
   merge(partials: unknown[], params: P): unknown;
   /** When merging is itself long, a worker task that does it in the pool instead of `merge` (input: MergeTaskInput). */
   mergeTaskFile?: string;
+  /** Writes that belong to a successful result (in the transaction that marks the run succeeded). */
+  afterMerge?: AfterMerge;
 }
 
 export interface MergeTaskInput { partials: unknown[]; params: unknown }

@@ -83,7 +83,7 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
       const merged = out.result;
       merge = () => merged;
     }
-    const merged = await retrying("merge run", log, () => mergeRunOnce(db, runId, merge));
+    const merged = await retrying("merge run", log, () => mergeRunOnce(db, runId, merge, kind.afterMerge));
     if (!merged) return;
     log.info({ runId }, "run succeeded");
     const finished = await getRun(db, runId);

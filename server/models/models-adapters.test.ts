@@ -3,10 +3,10 @@ import { describe, expect, it } from "vitest";
 import { networkFromFunctions, type BooleanNetwork } from "../../shared/engine/network";
 import { compileDefinition, networkToDefinition, printRuleText, readRuleText } from "../../shared/engine/rules";
 import { bytesFromString, bytesToString, synchronousStep } from "../../shared/engine/update";
-import { edgeSign, signedEdges } from "./edge-signs";
 import { ruleTextIssues } from "./model-reading";
-import { perturbedDefinition } from "./perturbed-definition";
-import { phenotypeOf, synchronousAttractors } from "./synchronous-view";
+import { perturbedNetwork } from "./perturbed-network";
+import { structureView } from "./structure-view";
+import { synchronousAttractors, withPhenotypes } from "./synchronous-view";
 
 const SEED = { seed: 20261202, numRuns: 150 };
 
@@ -46,19 +46,23 @@ function referenceSign(table: Uint8Array, j: number): string {
   return "non-essential";
 }
 
-describe("edgeSign", () => {
-  it("agrees with a row-by-row reference on random tables", () => {
+describe("structureView", () => {
+  it("signs every edge as a row-by-row reference does on random networks", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 5 }).chain((k) => fc.tuple(fc.constant(k), fc.uint8Array({ min: 0, max: 1, minLength: 1 << k, maxLength: 1 << k }), fc.integer({ min: 0, max: k - 1 }))), ([, table, j]) => {
-        expect(edgeSign(table, j)).toBe(referenceSign(table, j));
+      fc.property(networkArb, (net) => {
+        for (const e of structureView(networkToDefinition(net), net, []).edges) {
+          const target = net.names.indexOf(e.target);
+          const j = Array.from(net.regulators[target]!).indexOf(net.names.indexOf(e.source));
+          expect(e.sign).toBe(referenceSign(net.tables[target]!, j));
+        }
       }),
       SEED,
     );
   });
 
-  it("signedEdges reads activation, repression and the dual input of a xor (common practice)", () => {
-    const net = compileDefinition(readRuleText("A' = A\nB' = A & !C\nC' = A ^ B\n"));
-    expect(signedEdges(net)).toEqual([
+  it("structureView reads activation, repression and the dual input of a xor (common practice)", () => {
+    const definition = readRuleText("A' = A\nB' = A & !C\nC' = A ^ B\n");
+    expect(structureView(definition, compileDefinition(definition), ["A"]).edges).toEqual([
       { source: "A", target: "A", sign: "positive" },
       { source: "A", target: "B", sign: "positive" },
       { source: "C", target: "B", sign: "negative" },
@@ -68,13 +72,15 @@ describe("edgeSign", () => {
   });
 });
 
-describe("phenotypeOf", () => {
+describe("withPhenotypes", () => {
   it("labels each marker 1 when always on, 0 when always off and ~ when it changes on the attractor", () => {
     fc.assert(
       fc.property(
-        fc.integer({ min: 1, max: 8 }).chain((n) => fc.tuple(fc.array(fc.array(fc.constantFrom("0", "1"), { minLength: n, maxLength: n }).map((c) => c.join("")), { minLength: 1, maxLength: 6 }), fc.array(fc.integer({ min: 0, max: n - 1 }), { maxLength: n }))),
+        fc.integer({ min: 1, max: 8 }).chain((n) => fc.tuple(fc.array(fc.array(fc.constantFrom("0", "1"), { minLength: n, maxLength: n }).map((c) => c.join("")), { minLength: 1, maxLength: 6 }), fc.array(fc.integer({ min: 0, max: n - 1 }), { minLength: 1, maxLength: n }))),
         ([states, markers]) => {
-          const label = phenotypeOf(states, markers);
+          const nodes = Array.from({ length: states[0]!.length }, (_, i) => `N${i}`);
+          const result = { nodes, stateCount: 0, maxTransient: 0, meanTransient: 0, attractors: [{ length: states.length, basin: 1, states, phenotype: null }] };
+          const label = withPhenotypes(result, markers.map((m) => nodes[m]!)).attractors[0]!.phenotype!;
           expect(label).toHaveLength(markers.length);
           markers.forEach((m, i) => {
             const values = states.map((s) => s[m]);
@@ -88,14 +94,13 @@ describe("phenotypeOf", () => {
   });
 });
 
-describe("perturbedDefinition", () => {
+describe("perturbedNetwork", () => {
   it("fixes perturbed nodes and leaves every other node's update exactly as it was", () => {
     fc.assert(
       fc.property(networkArb.chain((net) => fc.tuple(fc.constant(net), fc.array(fc.constantFrom(0, 1, 2), { minLength: net.names.length, maxLength: net.names.length }), fc.nat())), ([net, choice, stateSeed]) => {
-        const definition = networkToDefinition(net);
         const knockOut = net.names.filter((_, i) => choice[i] === 1);
         const overExpress = net.names.filter((_, i) => choice[i] === 2);
-        const view = compileDefinition(perturbedDefinition(definition, { knockOut, overExpress, fixed: {} }));
+        const view = perturbedNetwork(net, { knockOut, overExpress, fixed: {} });
         const n = net.names.length;
         const state = bytesFromString(Array.from({ length: n }, (_, i) => String((stateSeed >> i) & 1)).join(""));
         const before = synchronousStep(net, state);
@@ -111,9 +116,9 @@ describe("perturbedDefinition", () => {
   });
 
   it("refuses a node fixed both ways and a node the model does not have", () => {
-    const definition = readRuleText("A' = !B\nB' = !A\n");
-    expect(() => perturbedDefinition(definition, { knockOut: ["A"], overExpress: ["A"], fixed: {} })).toThrow(/both 0 and 1/);
-    expect(() => perturbedDefinition(definition, { knockOut: ["Z"], overExpress: [], fixed: {} })).toThrow(/not a node/);
+    const net = compileDefinition(readRuleText("A' = !B\nB' = !A\n"));
+    expect(() => perturbedNetwork(net, { knockOut: ["A"], overExpress: ["A"], fixed: {} })).toThrow(/both 0 and 1/);
+    expect(() => perturbedNetwork(net, { knockOut: ["Z"], overExpress: [], fixed: {} })).toThrow(/not a node/);
   });
 });
 

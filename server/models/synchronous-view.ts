@@ -2,21 +2,12 @@
 // pattern of the chosen marker nodes (the phenotype reading of attractors in Kauffman, "Metabolic stability and
 // epigenesis in randomly constructed genetic nets", J. Theor. Biol. 1969).
 import type { BooleanNetwork } from "../../shared/engine/network";
+import { phenotypeLabel } from "../../shared/engine/phenotype";
 import { analyseSynchronous, attractorsAsText } from "../../shared/engine/state-graph";
 import type { AttractorRow, SynchronousResult } from "../../shared/schemas/models";
 import { HttpError } from "../http/errors";
 
-/** Per marker: '1' on in every state of the attractor, '0' off in every state, '~' when it oscillates. */
-export function phenotypeOf(states: readonly string[], markerIndices: readonly number[]): string {
-  return markerIndices
-    .map((m) => {
-      const values = new Set(states.map((s) => s[m]));
-      return values.size > 1 ? "~" : (values.values().next().value ?? "0");
-    })
-    .join("");
-}
-
-export function markerIndices(nodes: readonly string[], markers: readonly string[]): number[] {
+function markerIndices(nodes: readonly string[], markers: readonly string[]): number[] {
   return markers.map((m) => {
     const i = nodes.indexOf(m);
     if (i < 0) throw new HttpError(400, "UNKNOWN_NODE", `marker ${m} is not a node of the model`);
@@ -38,6 +29,6 @@ export function synchronousAttractors(net: BooleanNetwork): Omit<SynchronousResu
 
 export function withPhenotypes(result: Omit<SynchronousResult, "markers">, markers: readonly string[]): SynchronousResult {
   const indices = markerIndices(result.nodes, markers);
-  const attractors: AttractorRow[] = result.attractors.map((a) => ({ ...a, phenotype: markers.length ? phenotypeOf(a.states, indices) : null }));
+  const attractors: AttractorRow[] = result.attractors.map((a) => ({ ...a, phenotype: markers.length ? phenotypeLabel(a.states, indices, result.nodes).pattern.join("") : null }));
   return { ...result, attractors, markers: [...markers] };
 }

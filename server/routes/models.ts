@@ -8,7 +8,7 @@ import seedrandom from "seedrandom";
 import { z } from "zod";
 import { EngineError } from "../../shared/engine/errors";
 import type { BooleanNetwork } from "../../shared/engine/network";
-import { compileDefinition, printRule, printRuleText, type ModelDefinition } from "../../shared/engine/rules";
+import { compileDefinition, printRuleText, type ModelDefinition } from "../../shared/engine/rules";
 import { bytesFromString, bytesToString, trajectory } from "../../shared/engine/update";
 import {
   AttractorsQuery,
@@ -38,12 +38,12 @@ import { findModel, insertModel, listModels, lockNextRevision, setLatestRevision
 import { currentProject, currentUser, projectAccess } from "../http/auth";
 import { HttpError } from "../http/errors";
 import { validate } from "../http/validate";
-import { signedEdges } from "../models/edge-signs";
 import { generatedModel } from "../models/generated-model";
 import { exportModel, readUpload } from "../models/model-formats";
 import { readRules, ruleTextIssues, type ReadModel } from "../models/model-reading";
 import { networkSummary } from "../models/network-summary";
-import { perturbedDefinition } from "../models/perturbed-definition";
+import { perturbedNetwork } from "../models/perturbed-network";
+import { structureView } from "../models/structure-view";
 import { synchronousAttractors, withPhenotypes } from "../models/synchronous-view";
 
 const ProjectParams = ModelParams.pick({ projectId: true });
@@ -290,9 +290,9 @@ export function modelsRouter(deps: { db: Knex }): Router {
     const { stored } = await loadRevision(req);
     const body = req.body as z.infer<typeof PerturbationBody>;
     requireInlineSize(stored.nodeCount, stored.id);
-    const view = perturbedDefinition(stored.definition, body);
+    const view = perturbedNetwork(compileStored(stored.definition), body);
     const before = withPhenotypes(await synchronousOf(stored), body.markers);
-    const after = withPhenotypes(synchronousAttractors(compileStored(view)), body.markers);
+    const after = withPhenotypes(synchronousAttractors(view), body.markers);
     const phenotypes = new Map<string, { basinBefore: number; basinAfter: number }>();
     const tally = (result: SynchronousResult, key: "basinBefore" | "basinAfter") => {
       for (const a of result.attractors) {
@@ -333,20 +333,7 @@ export function modelsRouter(deps: { db: Knex }): Router {
   router.get("/:modelId/revisions/:revision/structure", read, validate({ params: RevisionParams }), async (req, res) => {
     const { stored } = await loadRevision(req);
     const net = compileStored(stored.definition);
-    const edges = signedEdges(net);
-    const outDegree = new Map<string, number>();
-    for (const e of edges) outDegree.set(e.source, (outDegree.get(e.source) ?? 0) + 1);
-    const inputs = new Set(stored.network.inputs);
-    const data: StructureResult = {
-      nodes: stored.definition.nodes.map((n, i) => ({
-        name: n.name,
-        inDegree: net.regulators[i]!.length,
-        outDegree: outDegree.get(n.name) ?? 0,
-        isInput: inputs.has(n.name),
-        rule: printRule(n.rule),
-      })),
-      edges,
-    };
+    const data: StructureResult = structureView(stored.definition, net, stored.network.inputs);
     res.json({ data });
   });
 

@@ -10,6 +10,7 @@ import {
   DecisionBody,
   ReductionListQuery,
   ReductionParams,
+  SearchBody,
   type Verification,
 } from "../../shared/schemas/reductions";
 import { recordAudit } from "../db/repositories/audit-log";
@@ -23,10 +24,14 @@ import {
   setReviewState,
   setVerification,
 } from "../db/repositories/reductions";
+import { findRevision } from "../db/repositories/model-revisions";
 import { currentProject, currentUser, projectAccess } from "../http/auth";
 import { HttpError } from "../http/errors";
 import { validate } from "../http/validate";
-import { latestRevisionNetwork } from "../reductions/revision-network";
+import { RunRequestError } from "../jobs/run-errors";
+import { submitRun } from "../jobs/run-lifecycle";
+import type { RunQueue } from "../jobs/run-queue";
+import { latestRevisionNetwork, type RevisionNetwork } from "../reductions/revision-network";
 import { statementKey } from "../reductions/statement-key";
 
 const ProjectParams = z.object({ projectId: z.uuid() });
@@ -42,9 +47,53 @@ function verificationOf(certificate: unknown, checkedBy: { id: string; displayNa
   };
 }
 
-export function reductionsRouter(deps: { db: Knex }): Router {
+/** Largest sources the tabulating notions accept (2^22 states in typed arrays); block emulation has no such bound. */
+const MAX_TABULATED_SOURCE_NODES = 22;
+const MAX_TARGET_NODES = 12;
+
+/** Checks what zod cannot: sizes the engine accepts and node names that must exist in the source. */
+function checkSearch(search: SearchBody, source: RevisionNetwork, target: RevisionNetwork | null): void {
+  const n = source.network.names.length;
+  const tabulates = search.mode === "coarse-grain" || (search.mode === "given-target" && search.notion === "dynamical-embedding");
+  if (tabulates && n > MAX_TABULATED_SOURCE_NODES) {
+    throw new HttpError(400, "TOO_LARGE", `sourceModelId: "${source.modelName}" has ${n} nodes; this notion enumerates all states and accepts at most ${MAX_TABULATED_SOURCE_NODES}`);
+  }
+  if (target && target.network.names.length > MAX_TARGET_NODES) {
+    throw new HttpError(400, "TOO_LARGE", `targetModelId: "${target.modelName}" has ${target.network.names.length} nodes; targets have at most ${MAX_TARGET_NODES}`);
+  }
+  if (search.mode === "coarse-grain") {
+    const missing = search.observe.filter((name) => !source.network.names.includes(name));
+    if (missing.length) throw new HttpError(400, "INVALID_INPUT", `observe: ${missing.map((m) => `"${m}"`).join(", ")} ${missing.length > 1 ? "are not nodes" : "is not a node"} of "${source.modelName}"`, [{ field: "body.observe", message: "unknown node" }]);
+  }
+}
+
+export function reductionsRouter(deps: { db: Knex; queue: RunQueue; queueCap: number }): Router {
   const { db } = deps;
   const router = Router({ mergeParams: true });
+
+  // A search is a run of kind "reduction-search" on the source's latest revision; the networks are fixed at
+  // submission (rule text in the parameters), so a later edit of either model cannot change what the run proves.
+  router.post("/searches", projectAccess(db, "run:start"), validate({ params: ProjectParams, body: SearchBody }), async (req, res) => {
+    const search = req.body as z.infer<typeof SearchBody>;
+    const project = currentProject(req);
+    const user = currentUser(req);
+    const source = await latestRevisionNetwork(db, project.id, search.sourceModelId, "sourceModelId");
+    const target = search.mode === "given-target" ? await latestRevisionNetwork(db, project.id, search.targetModelId, "targetModelId") : null;
+    checkSearch(search, source, target);
+    const ruleTextOf = async (r: RevisionNetwork) => (await findRevision(db, r.modelId, r.revision))!.ruleText;
+    const params = {
+      search,
+      sourceRevisionId: source.revisionId,
+      targetRevisionId: target?.revisionId ?? null,
+      sourceRuleText: await ruleTextOf(source),
+      targetRuleText: target ? await ruleTextOf(target) : null,
+    };
+    const out = await submitRun(deps, { projectId: project.id, startedBy: user.id, body: { kind: "reduction-search", modelRevisionId: source.revisionId, params } }).catch((err) => {
+      throw err instanceof RunRequestError ? new HttpError(err.status, err.code, err.message) : err;
+    });
+    if (!out.reused) await recordAudit(db, { projectId: project.id, actorId: user.id, action: "reduction.search", target: out.run.id, details: { mode: search.mode } });
+    res.status(out.reused ? 200 : 201).json({ data: { ...out.run, reused: out.reused } });
+  });
 
   router.get("/", projectAccess(db, "project:read"), validate({ params: ProjectParams, query: ReductionListQuery }), async (req, res) => {
     const q = req.query as z.infer<typeof ReductionListQuery>;

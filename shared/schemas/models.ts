@@ -97,7 +97,8 @@ export const GeneratorSpec = z.discriminatedUnion("kind", [
   z.object({
     kind: z.literal("eca"),
     rule: z.number().int().min(0),
-    radius: z.number().int().min(1).max(3).default(1),
+    // Radius 3 rule numbers exceed what JSON numbers hold exactly, so the API stops at radius 2.
+    radius: z.number().int().min(1).max(2).default(1),
     cells: z.number().int().min(3).max(200),
   }),
   z.object({

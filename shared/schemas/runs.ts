@@ -1,6 +1,7 @@
 // Runs as the API and the client see them, plus the parameters each run kind accepts.
 import { z } from "zod";
 import { HierarchyRunParameters } from "./automata";
+import { ReductionSearchParams } from "./reductions";
 
 export const RUN_STATES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
 export const RunState = z.enum(RUN_STATES);
@@ -10,7 +11,7 @@ export function isRunFinished(state: RunState): boolean {
   return FINISHED_RUN_STATES.includes(state);
 }
 
-export const RUN_KINDS = ["sleep-count", "eca-hierarchy", "attractors"] as const;
+export const RUN_KINDS = ["sleep-count", "eca-hierarchy", "attractors", "reduction-search"] as const;
 
 /** Demonstration kind: sums a deterministic function over [0, itemCount) in shards, sleeping per item. */
 export const SleepCountParams = z.object({
@@ -30,6 +31,7 @@ export const StartRunBody = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("sleep-count"), modelRevisionId: z.uuid().nullable().default(null), params: SleepCountParams }),
   z.object({ kind: z.literal("attractors"), modelRevisionId: z.uuid().nullable().default(null), params: AttractorsParams }),
   z.object({ kind: z.literal("eca-hierarchy"), modelRevisionId: z.null().default(null), params: HierarchyRunParameters }),
+  z.object({ kind: z.literal("reduction-search"), modelRevisionId: z.uuid(), params: ReductionSearchParams }),
 ]);
 export type StartRunBody = z.infer<typeof StartRunBody>;
 

@@ -1,3 +1,7 @@
+import { execFileSync, spawnSync } from "node:child_process";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { MULTIVALUED_SBML, REPRESSOR_RING_SBML } from "../support/model-fixtures";
@@ -254,6 +258,30 @@ describe("exports", () => {
   });
 });
 
+// libSBML ("LibSBML: an API library for SBML", Bioinformatics 2008), through Debian's python3-sbml5, which
+// scripts/test.sh installs; the check script belongs to the SBML-qual format tests.
+const hasLibSbml = spawnSync("/usr/bin/python3", ["-c", "import libsbml"]).status === 0;
+
+describe.skipIf(!hasLibSbml)("SBML-qual export checked by libSBML", () => {
+  it("exports files with zero consistency errors for a threshold model, a generated ring and an SBML import", async () => {
+    const yeast = await createRules("Yeast libsbml", YEAST);
+    const ring = await modeler.post(`${base}/generate`).send({ name: "Ring libsbml", generator: { kind: "eca", rule: 110, radius: 1, cells: 6 } });
+    const imported = await modeler.post(`${base}/upload`).attach("file", Buffer.from(REPRESSOR_RING_SBML), { filename: "ring.sbml" });
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), "emulant-export-"));
+    const files: string[] = [];
+    for (const id of [yeast.model.id, ring.body.data.model.id, imported.body.data.model.id]) {
+      const exported = await download(`${base}/${id}/revisions/1/export?format=sbml`);
+      expect(exported.status).toBe(200);
+      const file = path.join(dir, `${id}.sbml`);
+      fs.writeFileSync(file, exported.text);
+      files.push(file);
+    }
+    const out = JSON.parse(execFileSync("/usr/bin/python3", [path.resolve("tests/fixtures/sbml/check-with-libsbml.py"), ...files], { encoding: "utf8" })) as { files: { errors: string[] }[] };
+    expect(out.files.map((f) => f.errors)).toEqual([[], [], []]);
+    fs.rmSync(dir, { recursive: true, force: true });
+  });
+});
+
 describe("analyses", () => {
   it("reproduces the seven fixed points and basins of the budding-yeast cell-cycle model, labelled by markers", async () => {
     const { model } = await createRules("Yeast for analysis", YEAST);
@@ -290,6 +318,13 @@ describe("analyses", () => {
     expect(res.body.data.before.attractors).toHaveLength(3);
     expect(res.body.data.after.attractors).toEqual([{ length: 1, basin: 4, states: ["10"], phenotype: "10" }]);
     expect(res.body.data.phenotypes).toContainEqual({ phenotype: "10", basinBefore: 1, basinAfter: 4 });
+  });
+
+  it("fixes an input condition: with Light held at 0 only the dark attractors of the bloom switch remain", async () => {
+    const { model } = await createRules("Light switch", "Light' = Light\nGene' = Light | Gene & !Light\n");
+    const res = await viewer.post(`${base}/${model.id}/revisions/1/perturbation`).send({ fixed: { Light: 0 }, markers: ["Gene"] });
+    expect(res.status).toBe(200);
+    expect(res.body.data.after.attractors.every((a: { states: string[] }) => a.states.every((s) => s[0] === "0"))).toBe(true);
   });
 
   it("refuses contradictory perturbations", async () => {
@@ -353,6 +388,16 @@ describe("large models", () => {
     expect(served.body.data.attractors.map((a: { phenotype: string }) => a.phenotype)).toEqual(["0", "1"]);
     const [cached] = await t.db("model_analyses").where({ revision_id: revisionId }).count<{ count: string }[]>("* as count");
     expect(Number(cached!.count)).toBe(1);
+  });
+});
+
+describe("audit", () => {
+  it("records who created, imported, generated and revised models", async () => {
+    const { model } = await createRules("Audited", TOGGLE);
+    await modeler.post(`${base}/${model.id}/revisions`).send({ ruleText: "A' = B\nB' = A\n" });
+    const rows = await t.db("audit_log").where({ project_id: PROJECT, target: model.id }).orderBy("id").select("action", "details");
+    expect(rows.map((r: { action: string }) => r.action)).toEqual(["model.create", "model.revise"]);
+    expect(rows[1].details).toMatchObject({ revision: 2, nodeCount: 2 });
   });
 });
 

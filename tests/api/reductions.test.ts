@@ -2,13 +2,24 @@
 // matches the stored models; reviewers decide and re-verify, everyone in the project can discuss; approved
 // reductions form the model hierarchy, where F0 -> F and F -> G compose into a verified F0 -> G.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { blockEmulationCertificate } from "../../shared/engine/certificates";
+import { getRun } from "../../server/db/repositories/runs";
+import { loadRunSettings } from "../../server/jobs/run-settings";
+import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
+import { createLogger } from "../../server/logger";
+import { createFakeMailer } from "../../server/mail/mailer";
+import { blockEmulationCertificate, verifyCertificate } from "../../shared/engine/certificates";
 import { searchBlockEmulation } from "../../shared/engine/emulation";
 import { compileDefinition, readRuleText } from "../../shared/engine/rules";
 import { signInAs, type Agent } from "../support/sessions";
-import { buildTestApp } from "../support/test-app";
+import { buildTestApp, testConfig } from "../support/test-app";
 
 const t = buildTestApp();
+const config = testConfig();
+const log = createLogger(config);
+const mailer = createFakeMailer(t.db, log);
+let worker: RunWorker | null = null;
+/** The demo seed's tide clock: a three-gene repressor ring hidden in two-node blocks (seeds/03-demo-models.ts). */
+const TIDE_CLOCK_MODEL = "00000000-0000-4000-8000-000000000302";
 const DEMO_PROJECT = "00000000-0000-4000-8000-000000000001";
 const base = `/api/projects/${DEMO_PROJECT}`;
 const suffix = Date.now().toString(36);
@@ -45,7 +56,21 @@ beforeAll(async () => {
     modelIds[key] = res.body.data.model.id;
   }
 });
-afterAll(() => t.close());
+afterAll(async () => {
+  await worker?.stop();
+  await mailer.close();
+  await t.close();
+});
+
+async function finishedRun(runId: string, timeoutMs = 60_000) {
+  const started = Date.now();
+  for (;;) {
+    const run = await getRun(t.db, runId);
+    if (run && ["succeeded", "failed", "cancelled"].includes(run.state)) return run;
+    if (Date.now() - started > timeoutMs) throw new Error(`run ${runId} still ${run?.state}`);
+    await new Promise((r) => setTimeout(r, 150));
+  }
+}
 
 async function upload(agent: Agent, source: keyof typeof rules, target: keyof typeof rules | undefined, cert: unknown) {
   return agent.post(`${base}/reductions`).send({ sourceModelId: modelIds[source], targetModelId: target && modelIds[target], certificate: cert });
@@ -146,5 +171,64 @@ describe("review and the model hierarchy", () => {
     expect(res.status).toBe(200);
     expect(res.headers["content-disposition"]).toContain("attachment");
     expect(JSON.parse(res.text)).toMatchObject({ format: "emulant-reduction", notion: "block-emulation", time: 2 });
+  });
+});
+
+describe("POST /reductions/searches (searches as background runs)", () => {
+  beforeAll(async () => {
+    worker = await startRunWorker({
+      db: t.db, log, databaseUrl: config.DATABASE_URL, mailer, publicUrl: config.publicUrl,
+      settings: { ...loadRunSettings({ RUN_HEARTBEAT_MS: "200", RUN_STALE_SECONDS: "5", RUN_REAP_EVERY_MS: "500" }, 2), notifyAfterSeconds: 3600 },
+    });
+  });
+
+  it("discovers the repressor ring hidden in the demo tide clock and stores it as a proposed, valid reduction", async () => {
+    const res = await modeler.post(`${base}/reductions/searches`).send({ mode: "discover", sourceModelId: TIDE_CLOCK_MODEL, maxTargetNodes: 3, maxTime: 1, maxBlock: 2 });
+    expect([200, 201]).toContain(res.status);
+    const run = await finishedRun(res.body.data.id);
+    expect(run.state, JSON.stringify(run.error)).toBe("succeeded");
+    const result = run.result as { reductionIds: string[]; findings: { certificate: { target: { nodes: { name: string; inputs: string[]; table: string }[] } } }[] };
+    expect(result.reductionIds.length).toBe(result.findings.length);
+    // The best-ranked target is the ring X1 -| X2 -| X3 -| X1: three nodes, each the negation of one other node.
+    const ring = result.findings[0]!.certificate.target.nodes;
+    expect(ring).toHaveLength(3);
+    for (const node of ring) expect(node).toMatchObject({ inputs: [expect.any(String)], table: "10" });
+    expect(new Set(ring.map((n) => n.inputs[0])).size).toBe(3);
+    const stored = await modeler.get(`${base}/reductions/${result.reductionIds[0]}`);
+    expect(stored.body.data).toMatchObject({ reviewState: "proposed", foundInRunId: run.id });
+    expect(verifyCertificate(stored.body.data.certificate).valid).toBe(true);
+  });
+
+  it("answers a repeated search with the stored run instead of searching again", async () => {
+    const body = { mode: "given-target", notion: "block-emulation", sourceModelId: modelIds.F, targetModelId: modelIds.G, maxTime: 2, maxBlock: 2 };
+    const first = await modeler.post(`${base}/reductions/searches`).send(body);
+    expect(first.status).toBe(201);
+    const run = await finishedRun(first.body.data.id);
+    expect(run.state).toBe("succeeded");
+    expect((run.result as { found: boolean }).found).toBe(true);
+    const again = await modeler.post(`${base}/reductions/searches`).send(body);
+    expect(again.status).toBe(200);
+    expect(again.body.data).toMatchObject({ id: run.id, reused: true });
+  });
+
+  it("reports a search that finds nothing as a succeeded run with no findings, within its bounds", async () => {
+    const res = await modeler.post(`${base}/reductions/searches`).send({ mode: "given-target", notion: "block-emulation", sourceModelId: modelIds.G, targetModelId: modelIds.F, maxTime: 1, maxBlock: 1 });
+    const run = await finishedRun(res.body.data.id);
+    expect(run.state).toBe("succeeded");
+    expect(run.result).toMatchObject({ found: false, findings: [], bounds: { maxTime: 1, maxBlock: 1 } });
+  });
+
+  it("refuses observables that are not nodes of the source, naming them", async () => {
+    const res = await modeler.post(`${base}/reductions/searches`).send({ mode: "coarse-grain", sourceModelId: modelIds.F, observe: ["P", "Nope"] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toContain('"Nope"');
+  });
+
+  it("refuses searches from viewers and reviewers, and for models of other projects", async () => {
+    const body = { mode: "discover", sourceModelId: modelIds.F, maxTargetNodes: 1 };
+    expect((await viewer.post(`${base}/reductions/searches`).send(body)).status).toBe(403);
+    expect((await reviewer.post(`${base}/reductions/searches`).send(body)).status).toBe(403);
+    const other = await modeler.post(`${base}/reductions/searches`).send({ ...body, sourceModelId: "00000000-0000-4000-8000-00000000ffff" });
+    expect(other.status).toBe(404);
   });
 });

@@ -18,6 +18,8 @@ import { testConfig } from "../support/test-app";
 const root = path.resolve(import.meta.dirname, "../..");
 const projectId = "00000000-0000-4000-8000-000000000001";
 // Fast failure detection so the test stays short: heartbeats every 250 ms, a holder silent for 3 s is dead.
+/** Each worker process takes ~6 s to start (tsx, pg-boss) when the shared 2-core machine is busy. */
+const PROCESS_TEST_TIMEOUT_MS = 120_000;
 const fastEnv = { RUN_STALE_SECONDS: "3", RUN_HEARTBEAT_MS: "250", RUN_REAP_EVERY_MS: "500", RUN_PROJECT_CONCURRENCY: "50", LOG_LEVEL: "warn" };
 
 const config = testConfig();
@@ -147,7 +149,7 @@ describe("sharded runs across worker processes", () => {
       expect(s.claims).toBeGreaterThanOrEqual(2);
       expect(String(s.held_by ?? "")).not.toContain(`:${victim}`);
     }
-  });
+  }, PROCESS_TEST_TIMEOUT_MS);
 });
 
 describe("a worker stopped with SIGTERM", () => {
@@ -181,7 +183,7 @@ describe("a worker stopped with SIGTERM", () => {
     const done = await finished(run.id);
     expect(done.state).toBe("succeeded");
     expect(done.result).toEqual(reference(1000));
-  });
+  }, PROCESS_TEST_TIMEOUT_MS);
 });
 
 describe("a PostgreSQL restart during a run", () => {
@@ -213,5 +215,5 @@ describe("a PostgreSQL restart during a run", () => {
       expect(s.state).toBe("done");
       expect(s.partial).toEqual(doneBefore.find((b) => b.id === s.id)!.partial);
     }
-  });
+  }, PROCESS_TEST_TIMEOUT_MS);
 });

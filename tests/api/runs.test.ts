@@ -124,9 +124,9 @@ describe("runs with an in-process worker", () => {
   });
 
   it("retries a cancelled run, keeping shards already done, and the result is complete", async () => {
-    const res = await owner.post(`/api/projects/${projectId}/runs`).send(sleepCount(300, { shardCount: 3, delayMsPerItem: 5 }));
+    const res = await owner.post(`/api/projects/${projectId}/runs`).send(sleepCount(900, { shardCount: 3, delayMsPerItem: 4 }));
     const id = res.body.data.id as string;
-    // Cancel once the first shard is done, so the retry has something to keep.
+    // Cancel once a shard is done (two run at once, ~1.2 s each, then the third), so the retry has something to keep.
     for (let i = 0; i < 200; i++) {
       const r = await getRun(t.db, id);
       if (r && r.shardsDone >= 1) break;
@@ -140,7 +140,7 @@ describe("runs with an in-process worker", () => {
     expect(retry.body.data).toMatchObject({ state: "queued", attempt: 2 });
     const done = await finished(id);
     expect(done.state).toBe("succeeded");
-    expect((done.result as { itemCount: number }).itemCount).toBe(300);
+    expect((done.result as { itemCount: number }).itemCount).toBe(900);
     const after = await t.db("run_shards").whereIn("id", kept.map((k) => k.id)).select("id", "completed_at");
     expect(after.map((a) => a.completed_at.getTime()).sort()).toEqual(kept.map((k) => k.completed_at.getTime()).sort());
     expect((await owner.post(`/api/projects/${projectId}/runs/${id}/retry`)).status).toBe(409);

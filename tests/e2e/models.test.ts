@@ -1,5 +1,7 @@
 // The models screens in headless Chromium: import an SBML-qual file, see the wiring diagram and the attractor
 // table, edit a rule (with an inline error first), and see revision 2 with its own attractors.
+import fs from "node:fs";
+import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { openBrowser, screenshot } from "../support/browser";
 import { MULTIVALUED_SBML, REPRESSOR_RING_SBML } from "../support/model-fixtures";
@@ -57,6 +59,12 @@ describe("models screens in headless Chromium", () => {
     await page.getByTestId("wiring-diagram").scrollIntoViewIfNeeded();
     await page.mouse.move(0, 0);
     await screenshot(page, "models-detail-r1");
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("download-png").click()]);
+    expect(download.suggestedFilename()).toBe("Repressor ring-r1.png");
+    const png = fs.readFileSync((await download.path())!);
+    expect(png.subarray(1, 4).toString("latin1")).toBe("PNG");
+    fs.mkdirSync(path.resolve("tests/e2e/screenshots"), { recursive: true });
+    fs.writeFileSync(path.resolve("tests/e2e/screenshots/models-diagram-download.png"), png);
 
     // An error in the editor is marked at its line before saving.
     const editor = page.getByTestId("rule-editor");
@@ -77,6 +85,30 @@ describe("models screens in headless Chromium", () => {
     expect(await page.getByTestId("revision-row").count()).toBe(2);
     await screenshot(page, "models-detail-r2");
     expect(errors).toEqual([]);
+  });
+
+  it("creates a model from written rules and another from the ring generator", async () => {
+    const { page } = browser;
+    await page.goto(`${server.baseUrl}/projects/${PROJECT}/models/new`);
+    await page.getByTestId("model-name").fill("Written pair");
+    await page.getByTestId("rule-editor").fill("P' = !Q\nQ' = P\n");
+    await expect.poll(() => page.getByTestId("live-node-count").textContent()).toContain("2 nodes");
+    await screenshot(page, "models-new-write");
+    await page.getByTestId("save-model").click();
+    await page.waitForURL(/\/models\/[0-9a-f-]{36}$/);
+    await expect.poll(() => page.getByTestId("model-title").textContent()).toBe("Written pair");
+    // P -| Q -> P is a negative loop of two: one 4-cycle through all states (common practice).
+    await expect.poll(() => page.getByTestId("attractor-basin").allTextContents()).toEqual(["4"]);
+
+    await page.goto(`${server.baseUrl}/projects/${PROJECT}/models/new`);
+    await page.getByTestId("mode-generate").click();
+    await page.getByTestId("gen-rule").fill("90");
+    await page.getByTestId("gen-cells").fill("6");
+    await screenshot(page, "models-new-generate");
+    await page.getByRole("button", { name: "Generate model" }).click();
+    await page.waitForURL(/\/models\/[0-9a-f-]{36}$/);
+    await expect.poll(() => page.getByTestId("model-title").textContent()).toBe("Rule 90 ring of 6");
+    await expect.poll(() => page.getByTestId("wiring-diagram").getAttribute("data-nodes")).toBe("6");
   });
 
   it("offers a background run for the 24-node demo model and lays out its wiring", async () => {

@@ -92,17 +92,27 @@ export async function runsAwaitingMerge(db: Knex): Promise<string[]> {
   return rows.map((r) => r.id as string);
 }
 
+/** Kind-specific writes of a merged result (e.g. reductions found by a search); answers the result to store. */
+export type AfterMerge = (trx: Knex, run: { id: string; projectId: string; startedBy: string | null }, result: unknown, params: unknown) => Promise<unknown>;
+
 /**
  * Merges the shards' partial results exactly once: the run row is locked, and the merge happens only while the
  * run is still running and every shard is done. Answers the merged result, or null when there was nothing to do.
  */
-export async function mergeRunOnce<R>(db: Knex, runId: string, merge: (partials: unknown[]) => R): Promise<{ result: R } | null> {
+export async function mergeRunOnce<R>(
+  db: Knex,
+  runId: string,
+  merge: (partials: unknown[]) => R,
+  afterMerge?: AfterMerge,
+): Promise<{ result: unknown } | null> {
   return db.transaction(async (trx) => {
     const run = await trx("runs").where({ id: runId }).forUpdate().first();
     if (!run || run.state !== "running") return null;
     const shards = await trx("run_shards").where({ run_id: runId }).orderBy("shard_index").select("state", "partial");
     if (shards.some((s) => s.state !== "done")) return null;
-    const result = merge(shards.map((s) => s.partial));
+    const merged = merge(shards.map((s) => s.partial));
+    // Whatever a kind stores from its result is written in this transaction, so the run never succeeds without it.
+    const result = afterMerge ? await afterMerge(trx, { id: run.id, projectId: run.project_id, startedBy: run.started_by }, merged, run.params) : merged;
     await trx("runs").where({ id: runId }).update({ state: "succeeded", result: JSON.stringify(result), finished_at: trx.fn.now(), progress_fraction: 1, progress_phase: "done" });
     return { result };
   });

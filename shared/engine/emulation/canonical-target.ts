@@ -45,7 +45,11 @@ function lexLess(a: readonly number[], b: readonly number[]): boolean {
 
 export type TargetFlag = "constant" | "identity" | "decoupled";
 
-/** Why a target map is uninformative: all states go to one state, nothing moves, or no node reads another node. */
+/**
+ * Why a target map is uninformative: all states go to one state, nothing moves, or (with two or more nodes) no node
+ * reads another, so the target is just smaller targets side by side. A one-node target reads no other node by
+ * definition; its negation (a period-2 oscillation) is informative and must not be flagged.
+ */
 export function trivialityFlags(succ: ArrayLike<number>, m: number): TargetFlag[] {
   const flags: TargetFlag[] = [];
   const size = 2 ** m;
@@ -57,7 +61,7 @@ export function trivialityFlags(succ: ArrayLike<number>, m: number): TargetFlag[
   }
   if (constant) flags.push("constant");
   if (identity) flags.push("identity");
-  if (interactionCount(succ, m) === 0) flags.push("decoupled");
+  if (m >= 2 && interactionCount(succ, m) === 0) flags.push("decoupled");
   return flags;
 }
 

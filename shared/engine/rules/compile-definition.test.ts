@@ -1,9 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { BooleanNetwork } from "../network";
-import { compileDefinition } from "./compile-definition";
+import { compileDefinition, evaluateExpr, truthTableOf } from "./compile-definition";
 import { readRuleText } from "./parse-rule-text";
-import { modelArb } from "./rules-arbitrary.test-support";
+import { exprArb, modelArb } from "./rules-arbitrary.test-support";
 import type { Expr, ModelDefinition, RuleSyntax } from "./syntax";
 
 /** Plain reference: the next value of node i from a full state, straight from the rule tree. */
@@ -88,6 +88,25 @@ describe("compileDefinition", () => {
         }
       }),
       { seed: 4201, numRuns: 300 },
+    );
+  });
+
+  it("truthTableOf agrees with one-row-at-a-time evaluation on sums of products over up to 12 inputs", () => {
+    const inputs = Array.from({ length: 12 }, (_, j) => `i${j}`);
+    const literal = fc.tuple(fc.constantFrom(...inputs), fc.boolean()).map(([name, neg]): Expr => (neg ? { kind: "not", arg: { kind: "var", name } } : { kind: "var", name }));
+    const product = fc.array(literal, { minLength: 1, maxLength: 6 }).map((ls) => ls.reduce((left, right): Expr => ({ kind: "and", left, right })));
+    const operand = fc.oneof(product, exprArb(inputs, 3));
+    const sum = fc.array(operand, { minLength: 1, maxLength: 12 }).map((ps) => ps.reduce((left, right): Expr => ({ kind: "or", left, right })));
+    fc.assert(
+      fc.property(sum, fc.integer({ min: 1, max: 12 }), (expr, k) => {
+        const used = new Set(inputs.slice(0, k));
+        const rename = (e: Expr): Expr =>
+          e.kind === "var" ? (used.has(e.name) ? e : { kind: "var", name: `i${Number(e.name.slice(1)) % k}` }) : e.kind === "not" ? { kind: "not", arg: rename(e.arg) } : e.kind === "const" ? e : { kind: e.kind, left: rename(e.left), right: rename(e.right) };
+        const inK = rename(expr);
+        const table = truthTableOf(inK, inputs.slice(0, k));
+        for (let row = 0; row < 1 << k; row++) expect(table[row]).toBe(evaluateExpr(inK, (name) => (row >> Number(name.slice(1))) & 1));
+      }),
+      { seed: 4203, numRuns: 300 },
     );
   });
 

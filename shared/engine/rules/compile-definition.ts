@@ -81,17 +81,57 @@ export function truthTableOf(e: Expr, inputs: readonly string[]): Uint8Array {
         return out;
       }
       default: {
+        if (x.kind === "or") return evaluateSum(chainOperands(x));
         const [first, ...rest] = chainOperands(x);
         const acc = Uint32Array.from(evaluate(first!)); // a copy: cached input patterns must stay intact
         for (const o of rest) {
           const b = evaluate(o);
           if (x.kind === "and") for (let w = 0; w < words; w++) acc[w]! &= b[w]!;
-          else if (x.kind === "or") for (let w = 0; w < words; w++) acc[w]! |= b[w]!;
           else for (let w = 0; w < words; w++) acc[w]! ^= b[w]!;
         }
         return acc;
       }
     }
+  };
+  // A product of literals covers 2^(free inputs) rows; setting those bits directly beats combining whole vectors
+  // when the product is long, as in the sums of products that networkToDefinition writes.
+  const literalCube = (x: Expr): { mask: number; value: number } | null => {
+    let mask = 0;
+    let value = 0;
+    for (const o of x.kind === "and" ? chainOperands(x) : [x]) {
+      const negated = o.kind === "not";
+      const v = negated ? o.arg : o;
+      if (v.kind !== "var") return null;
+      const bit = 1 << position.get(v.name)!;
+      if (mask & bit && ((value & bit) !== 0) === negated) return { mask: -1, value: 0 }; // x & !x covers nothing
+      mask |= bit;
+      if (!negated) value |= bit;
+    }
+    return { mask, value };
+  };
+  const full = rows - 1;
+  const evaluateSum = (operands: Expr[]): Uint32Array => {
+    const acc = new Uint32Array(words);
+    for (const o of operands) {
+      const cube = literalCube(o);
+      if (cube && cube.mask === -1) continue;
+      if (cube) {
+        const free = full & ~cube.mask;
+        let freeCount = 0;
+        for (let f = free; f; f &= f - 1) freeCount++;
+        if (2 ** freeCount <= words * 8) {
+          for (let sub = free; ; sub = (sub - 1) & free) {
+            const row = cube.value | sub;
+            acc[row >>> 5]! |= 1 << (row & 31);
+            if (sub === 0) break;
+          }
+          continue;
+        }
+      }
+      const b = evaluate(o);
+      for (let w = 0; w < words; w++) acc[w]! |= b[w]!;
+    }
+    return acc;
   };
   const vector = evaluate(e);
   const table = new Uint8Array(rows);

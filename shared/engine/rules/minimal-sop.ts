@@ -24,7 +24,7 @@ function shannon(table: Uint8Array, k: number): Cube[] {
   if (f0.every((v, i) => v === f1[i])) return c0;
   const c1 = minimalSop(f1, k - 1);
   const bit = half;
-  const key = (c: Cube) => `${c.mask}:${c.value}`;
+  const key = (c: Cube) => c.mask * 2 ** 20 + c.value;
   const in1 = new Set(c1.map(key));
   const shared = new Set(c0.filter((c) => in1.has(key(c))).map(key));
   // A cube found in both halves does not depend on the split variable.

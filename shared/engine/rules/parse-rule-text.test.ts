@@ -3,6 +3,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ParseError } from "../errors";
 import { parseRuleText, readRuleText } from "./parse-rule-text";
+import { compileDefinition } from "./compile-definition";
 import { printRuleText } from "./print-rule-text";
 import { modelArb } from "./rules-arbitrary.test-support";
 import type { Expr } from "./syntax";
@@ -86,6 +87,20 @@ describe("parseRuleText", () => {
     expect(parseRuleText("A' = A)").errors[0]!.reason).toBe('unmatched ")"');
     expect(parseRuleText("# nothing here\n\n").errors[0]!.reason).toMatch(/no rules/);
     expect(parseRuleText("3A' = 1").errors[0]!.reason).toMatch(/cannot start with a digit/);
+  });
+
+  it("parseRuleText refuses nesting deeper than 500 levels instead of exhausting the stack", () => {
+    expect(parseRuleText(`A' = ${"(".repeat(100_000)}A${")".repeat(100_000)}`).errors[0]!.reason).toBe("the expression is nested more than 500 levels deep");
+    expect(parseRuleText(`A' = ${"!".repeat(100_000)}A`).errors[0]!.reason).toBe("the expression is nested more than 500 levels deep");
+  });
+
+  it("readRuleText, printRuleText and compileDefinition handle a chain of 100000 terms", () => {
+    const names = Array.from({ length: 16 }, (_, i) => `g${i}`);
+    const terms = Array.from({ length: 100_000 }, (_, t) => `${t % 3 ? "!" : ""}${names[t % 16]} & ${names[(t * 7 + 3) % 16]}`);
+    const text = `${names.map((n) => `${n}' = ${n}`).join("\n")}\nX' = ${terms.join(" | ")}\n`;
+    const model = readRuleText(text);
+    expect(printRuleText(model)).toBe(text);
+    expect(compileDefinition(model).tables[16]!.length).toBe(1 << 16);
   });
 
   it("readRuleText throws the first error and counts the others", () => {

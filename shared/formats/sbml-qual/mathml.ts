@@ -2,7 +2,7 @@
 // Version 2.0", chapter 4; SBML Level 3 qual package, Version 1, section 3.6): logical operators, comparisons of
 // species levels with numbers, ci, cn, true and false. Reads it into rule expressions and writes expressions back.
 import { EngineError } from "../../engine/errors";
-import type { Expr } from "../../engine/rules";
+import { chainOperands, type Expr } from "../../engine/rules";
 import type { XmlElement } from "./xml-tree";
 
 /** A MathML value during reading: a Boolean expression, a 0/1 species level (which is also a Boolean), or a number. */
@@ -181,14 +181,7 @@ export function exprToMathMl(e: Expr, indent: string): string {
         return;
       default: {
         // Same-operator chains become one n-ary apply, as MathML writers usually do.
-        const operands: Expr[] = [];
-        const collect = (y: Expr): void => {
-          if (y.kind === x.kind) {
-            collect(y.left);
-            collect(y.right);
-          } else operands.push(y);
-        };
-        collect(x);
+        const operands = chainOperands(x);
         lines.push(`${depth}<apply>`, `${depth}  <${x.kind}/>`);
         for (const o of operands) emit(o, depth + "  ");
         lines.push(`${depth}</apply>`);

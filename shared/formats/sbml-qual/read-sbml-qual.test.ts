@@ -126,7 +126,7 @@ describe("readSbmlQual", () => {
   });
 
   it("readSbmlQual refuses a multi-valued species and names it", () => {
-    expect(() => readSbmlQual(fixture("multivalued.libsbml.sbml"))).toThrow(/species Kinase has maxLevel 2; Emulant reads Boolean models only/);
+    expect(() => readSbmlQual(fixture("multivalued.libsbml.sbml"))).toThrow(/species Kinase has maxLevel 2; Emulant reads Boolean models only \(maxLevel 1\), so multi-valued species must be made Boolean first \(line 9\)$/);
   });
 
   it("readSbmlQual reads every supported MathML operator and ignores the layout package", () => {
@@ -176,7 +176,7 @@ describe("readSbmlQual", () => {
   it("readSbmlQual names the transition when its math is outside the Boolean subset or names an unknown id", () => {
     const species = sp("A") + sp("B");
     expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, `<apply><plus/>${ci("A")}${cn(1)}</apply>`))))).toThrow(
-      /transition tB: MathML <plus> is not part of the Boolean subset/,
+      /transition tB: MathML <plus> is not part of the Boolean subset Emulant reads \(line 11\)$/,
     );
     expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, rel("eq", ci("Z"), cn(1))))))).toThrow(/transition tB: <ci>Z<\/ci> names neither/);
     expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, ci("A"))) + tr("tB2", "B", term(1, "<true/>"))))).toThrow(

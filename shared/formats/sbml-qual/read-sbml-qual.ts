@@ -57,12 +57,12 @@ export function readSbmlQual(text: string): SbmlQualModel {
     if (!isValidNodeName(id)) fail(`species id ${id} cannot be a node name (it is a reserved word: and, or, not, xor, threshold)`);
     const maxLevel = level(el.attrs["maxLevel"], `maxLevel of species ${id}`);
     if (maxLevel !== undefined && maxLevel > 1) {
-      fail(`species ${id} has maxLevel ${maxLevel}; Emulant reads Boolean models only (maxLevel 1), so multi-valued species must be made Boolean first`);
+      fail(`species ${id} has maxLevel ${maxLevel}; Emulant reads Boolean models only (maxLevel 1), so multi-valued species must be made Boolean first${whereIs(el)}`);
     }
     if (maxLevel === undefined) warnings.push(`species ${id} has no maxLevel; read as Boolean`);
     const initial = level(el.attrs["initialLevel"], `initialLevel of species ${id}`);
     if (initial !== undefined) {
-      if (initial > 1) fail(`species ${id} has initialLevel ${initial}, above the Boolean maximum 1`);
+      if (initial > 1) fail(`species ${id} has initialLevel ${initial}, above the Boolean maximum 1${whereIs(el)}`);
       initialLevels[id] = initial as 0 | 1;
     }
     const info = { id, constant: el.attrs["constant"] === "true", element: el };
@@ -86,18 +86,25 @@ export function readSbmlQual(text: string): SbmlQualModel {
     }
     const outputList = childNamed(tr, "listOfOutputs");
     const outputs = outputList ? childrenNamed(outputList, "output") : [];
-    if (outputs.length === 0) fail(`${where} has no output`);
+    if (outputs.length === 0) fail(`${where} has no output${whereIs(tr)}`);
     const termList = childNamed(tr, "listOfFunctionTerms") ?? fail(`${where} has no listOfFunctionTerms`);
     const resultLevel = (el: XmlElement, what: string): 0 | 1 => {
       const v = level(el.attrs["resultLevel"], `${where}: resultLevel of the ${what}`) ?? fail(`${where}: the ${what} has no resultLevel`);
-      if (v > 1) fail(`${where}: the ${what} has resultLevel ${v}; Emulant reads Boolean models only (levels 0 and 1)`);
+      if (v > 1) fail(`${where}: the ${what} has resultLevel ${v}; Emulant reads Boolean models only (levels 0 and 1)${whereIs(el)}`);
       return v as 0 | 1;
     };
     const defaultTerm = childNamed(termList, "defaultTerm") ?? fail(`${where} has no defaultTerm`);
     const ctx = { where, isSpecies: (id: string) => byId.has(id), inputThreshold: (id: string) => thresholds.get(id) };
     const terms = childrenNamed(termList, "functionTerm").map((ft, i) => {
       const math = childNamed(ft, "math") ?? fail(`${where}: function term ${i + 1} has no <math>`);
-      return { level: resultLevel(ft, `function term ${i + 1}`), condition: mathToExpr(math, ctx) };
+      let condition: Expr;
+      try {
+        condition = mathToExpr(math, ctx);
+      } catch (e) {
+        if (e instanceof EngineError && e.code === "SBML_MATH") throw new EngineError("SBML_MATH", `${e.message}${whereIs(ft)}`);
+        throw e;
+      }
+      return { level: resultLevel(ft, `function term ${i + 1}`), condition };
     });
     // The first function term whose condition holds gives the level; if none holds, the default term does.
     let expr: Expr = { kind: "const", value: resultLevel(defaultTerm, "defaultTerm") };
@@ -111,7 +118,7 @@ export function readSbmlQual(text: string): SbmlQualModel {
       const effect = out.attrs["transitionEffect"];
       if (effect !== undefined && effect !== "assignmentLevel") fail(`${where}: output ${sp} has transitionEffect ${effect}; only assignmentLevel is supported`);
       const earlier = rules.get(sp);
-      if (earlier) fail(`species ${sp} is the output of two transitions (${earlier.transition} and ${trId}); a node needs exactly one rule`);
+      if (earlier) fail(`species ${sp} is the output of two transitions (${earlier.transition} and ${trId}); a node needs exactly one rule${whereIs(tr)}`);
       rules.set(sp, { expr, transition: trId });
     }
   });

@@ -53,7 +53,7 @@ export function GeneratorForm({ projectId, onCreated }: { projectId: string; onC
         {kind === "eca" && (
           <>
             <NumberField label="Rule number" testId="gen-rule" value={eca.rule} min={0} onChange={(rule) => setEca({ ...eca, rule })} />
-            <NumberField label="Radius" testId="gen-radius" value={eca.radius} min={1} max={3} onChange={(radius) => setEca({ ...eca, radius })} />
+            <NumberField label="Radius" testId="gen-radius" value={eca.radius} min={1} max={2} onChange={(radius) => setEca({ ...eca, radius })} />
             <NumberField label="Cells" testId="gen-cells" value={eca.cells} min={3} max={200} onChange={(cells) => setEca({ ...eca, cells })} />
           </>
         )}
