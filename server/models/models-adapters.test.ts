@@ -96,18 +96,20 @@ describe("withPhenotypes", () => {
 
 describe("perturbedNetwork", () => {
   it("fixes perturbed nodes and leaves every other node's update exactly as it was", () => {
+    // choice per node: 0 untouched, 1 knocked out, 2 over-expressed, 3/4 a fixed condition at 0/1 (any node, input or not).
     fc.assert(
-      fc.property(networkArb.chain((net) => fc.tuple(fc.constant(net), fc.array(fc.constantFrom(0, 1, 2), { minLength: net.names.length, maxLength: net.names.length }), fc.nat())), ([net, choice, stateSeed]) => {
+      fc.property(networkArb.chain((net) => fc.tuple(fc.constant(net), fc.array(fc.constantFrom(0, 1, 2, 3, 4), { minLength: net.names.length, maxLength: net.names.length }), fc.nat())), ([net, choice, stateSeed]) => {
         const knockOut = net.names.filter((_, i) => choice[i] === 1);
         const overExpress = net.names.filter((_, i) => choice[i] === 2);
-        const view = perturbedNetwork(net, { knockOut, overExpress, fixed: {} });
+        const fixed = Object.fromEntries(net.names.flatMap((name, i) => (choice[i]! >= 3 ? [[name, (choice[i]! - 3) as 0 | 1]] : [])));
+        const view = perturbedNetwork(net, { knockOut, overExpress, fixed });
         const n = net.names.length;
         const state = bytesFromString(Array.from({ length: n }, (_, i) => String((stateSeed >> i) & 1)).join(""));
         const before = synchronousStep(net, state);
         const after = synchronousStep(view, state);
         for (let i = 0; i < n; i++) {
-          if (choice[i] === 1) expect(after[i]).toBe(0);
-          else if (choice[i] === 2) expect(after[i]).toBe(1);
+          if (choice[i] === 1 || choice[i] === 3) expect(after[i]).toBe(0);
+          else if (choice[i] === 2 || choice[i] === 4) expect(after[i]).toBe(1);
           else expect(after[i]).toBe(before[i]);
         }
       }),

@@ -7,6 +7,11 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { newInvitationToken } from "../../server/db/repositories/invitations";
 import { hashPassword } from "../../server/http/password-hash";
 import { SESSION_COOKIE, signSession } from "../../server/http/session";
+import { insertReduction } from "../../server/db/repositories/reductions";
+import { statementKey } from "../../server/reductions/statement-key";
+import { blockEmulationCertificate } from "../../shared/engine/certificates";
+import { compileDefinition, readRuleText } from "../../shared/engine/rules";
+import type { Certificate } from "../../shared/schemas/reductions";
 import { buildTestApp, testConfig } from "../support/test-app";
 
 const callers = ["anonymous", "nonMember", "viewer", "reviewer", "modeler", "owner", "admin"] as const;
@@ -29,6 +34,9 @@ interface Fixture {
   failedRunId: string;
   /** A two-node model with one revision that was uploaded from a file. */
   modelId: string;
+  /** A proposed reduction of that model onto itself, with the certificate that proves it. */
+  reductionId: string;
+  certificate: object;
 }
 
 /** One route; `path` may name any Fixture field in braces ({projectId}), which each cell fills from its own fixture. */
@@ -88,6 +96,15 @@ const rows: Row[] = [
   { method: "post", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/perturbation", body: () => ({ knockOut: ["A"] }), expected: [401, 404, 200, 200, 200, 200, 200] },
   { method: "post", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/trajectory", body: () => ({ initial: "01" }), expected: [401, 404, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/structure", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/projects/{projectId}/reductions", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/reductions", body: (f) => ({ sourceModelId: f.modelId, targetModelId: f.modelId, certificate: f.certificate }), expected: [401, 404, 403, 403, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/reductions/searches", body: (f) => ({ mode: "discover", sourceModelId: f.modelId, maxTargetNodes: 1 }), expected: [401, 404, 403, 403, 201, 201, 201] },
+  { method: "get", path: "/api/projects/{projectId}/reductions/{reductionId}", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/projects/{projectId}/reductions/{reductionId}/certificate", expected: [401, 404, 200, 200, 200, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/decision", body: () => ({ decision: "approve", comment: "matrix" }), expected: [401, 404, 403, 200, 403, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/verify", expected: [401, 404, 403, 200, 403, 200, 200] },
+  { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/comments", body: () => ({ body: "matrix comment" }), expected: [401, 404, 403, 201, 201, 201, 201] },
+  { method: "get", path: "/api/projects/{projectId}/model-hierarchy", expected: [401, 404, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/notifications", expected: [401, 200, 200, 200, 200, 200, 200] },
   { method: "post", path: "/api/notifications/read", body: () => ({ all: true }), expected: [401, 200, 200, 200, 200, 200, 200] },
   // automata: any signed-in user reads (block size 3 is computed inline in well under a second)
@@ -138,8 +155,11 @@ async function makeFixture(): Promise<Fixture> {
   const [queuedRun] = await t.db("runs").insert({ ...run, state: "queued" }).returning("id");
   const [failedRun] = await t.db("runs").insert({ ...run, state: "failed", error: JSON.stringify({ code: "MATRIX", message: "failed for the matrix" }) }).returning("id");
   const modelId = await insertMatrixModel(projectId);
+  const { reductionId, certificate } = await insertMatrixReduction(projectId, modelId);
   return {
     modelId,
+    reductionId,
+    certificate,
     runId: (queuedRun as { id: string }).id,
     failedRunId: (failedRun as { id: string }).id,
     projectId,
@@ -164,6 +184,22 @@ async function insertMatrixModel(projectId: string): Promise<string> {
   const bytes = Buffer.from("A' = !B\nB' = !A\n");
   await t.db("model_files").insert({ revision_id: (revision as { id: string }).id, file_name: "toggle.rules", media_type: "text/plain", bytes, size_bytes: bytes.length });
   return modelId;
+}
+
+/** The toggle emulates itself with one-node blocks (the identity encoding); stored as a proposed reduction. */
+async function insertMatrixReduction(projectId: string, modelId: string): Promise<{ reductionId: string; certificate: Certificate }> {
+  const revision = (await t.db("model_revisions").where({ model_id: modelId, revision: 1 }).first("id", "rule_text")) as { id: string; rule_text: string };
+  const net = compileDefinition(readRuleText(revision.rule_text));
+  const certificate = blockEmulationCertificate(net, net, {
+    time: 1,
+    blocks: [{ nodes: [0], zero: [0], one: [1] }, { nodes: [1], zero: [0], one: [1] }],
+    context: [-1, -1],
+  }) as Certificate;
+  const stored = await insertReduction(t.db, {
+    projectId, sourceRevisionId: revision.id, targetRevisionId: revision.id, notion: "block-emulation", timeScale: 1, certificate,
+    targetKey: statementKey(certificate, revision.id), flags: [], foundBy: userId.modeler, foundInRunId: null,
+  });
+  return { reductionId: stored.id, certificate };
 }
 
 beforeAll(async () => {

@@ -9,8 +9,7 @@ const USAGE = "usage: coarse-grain <model file> --observe A,B,... [--time t (1..
 
 export function run(args: string[]): Promise<number> {
   return runCommand("coarse-grain", USAGE, async () => {
-    const { values, positionals } = parseCommandArgs(args, { observe: { type: "string" }, time: { type: "string" }, json: { type: "boolean" } });
-    if (positionals.length > 1) throw new UsageError(`unexpected argument "${positionals[1]}"`);
+    const { values, positionals } = parseCommandArgs(args, { observe: { type: "string" }, time: { type: "string" }, json: { type: "boolean" } }, 1);
     const source = await readModelFile(positionals[0]);
     const observe = (values.observe ?? "").split(",").map((s) => s.trim()).filter(Boolean);
     if (observe.length === 0) throw new UsageError("--observe needs at least one node name");

@@ -1,7 +1,7 @@
 // `discover <file> --max-target-nodes m [--time t] [--max-block b] --json`: every smaller network (1..m nodes) the model
 // block-emulates within the bounds, up to renaming and codeword swaps, ranked, trivial ones flagged.
 import { mergeShards, searchShard } from "../../reductions/search-plan";
-import { integerOption, parseCommandArgs, printJson, readModelFile, runCommand, UsageError } from "../cli-io";
+import { integerOption, parseCommandArgs, printJson, readModelFile, runCommand } from "../cli-io";
 
 export const summary = "discover <file> --max-target-nodes m [--time t] [--max-block b] --json: smaller networks the model emulates";
 const USAGE = "usage: discover <model file> --max-target-nodes m (1..4) [--time t (1..8, default 1)] [--max-block b (1..4, default 2)] [--no-context] [--json]";
@@ -10,8 +10,7 @@ export function run(args: string[]): Promise<number> {
   return runCommand("discover", USAGE, async () => {
     const { values, positionals } = parseCommandArgs(args, {
       "max-target-nodes": { type: "string" }, time: { type: "string" }, "max-block": { type: "string" }, "no-context": { type: "boolean" }, json: { type: "boolean" },
-    });
-    if (positionals.length > 1) throw new UsageError(`unexpected argument "${positionals[1]}"`);
+    }, 1);
     const source = await readModelFile(positionals[0]);
     const search = {
       mode: "discover" as const, sourceModelId: "",

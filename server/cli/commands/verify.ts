@@ -8,8 +8,8 @@ const USAGE = "usage: verify <certificate.json> [--json]";
 
 export function run(args: string[]): Promise<number> {
   return runCommand("verify", USAGE, async () => {
-    const { values, positionals } = parseCommandArgs(args, { json: { type: "boolean" } });
-    if (positionals.length !== 1) throw new UsageError(positionals.length ? `unexpected argument "${positionals[1]}"` : "the certificate file is missing");
+    const { values, positionals } = parseCommandArgs(args, { json: { type: "boolean" } }, 1);
+    if (positionals.length === 0) throw new UsageError("the certificate file is missing");
     const text = await readTextFile(positionals[0]!);
     let certificate: unknown;
     try {

@@ -152,12 +152,13 @@ describe("readSbmlQual", () => {
     sameDynamics(expected, net);
   });
 
-  it("readSbmlQual keeps constant species and species without a transition at their value", () => {
-    const text = wrap(sp("A", 'qual:initialLevel="1"') + sp("K").replace('constant="false"', 'constant="true"') + sp("B"), tr("tK", "K", term(1, "<true/>")) + tr("tB", "B", term(1, rel("eq", ci("A"), cn(0)))));
+  it("readSbmlQual keeps constant species and species without a transition at their value, and reads names and initial levels", () => {
+    const text = wrap(sp("A", 'qual:initialLevel="1" qual:name="Antigen &amp; co"') + sp("K").replace('constant="false"', 'constant="true"') + sp("B"), tr("tK", "K", term(1, "<true/>")) + tr("tB", "B", term(1, rel("eq", ci("A"), cn(0)))));
     const model = readSbmlQual(text);
     expect(printRuleText(model.definition)).toBe("A' = A\nK' = K\nB' = !A\n");
     expect(model.warnings).toEqual(["species K is constant, so tK is not used"]);
     expect(model.initialLevels).toEqual({ A: 1 });
+    expect(model.speciesNames).toEqual({ A: "Antigen & co" });
   });
 
   it("readSbmlQual reports XML syntax errors with line and column, and refuses DTDs", () => {

@@ -12,6 +12,8 @@ export interface SbmlQualModel {
   /** Model id and name from the file, when given. */
   readonly modelId: string | null;
   readonly modelName: string | null;
+  /** Display name of each species that has a name attribute different from its id. */
+  readonly speciesNames: Readonly<Record<string, string>>;
   /** initialLevel of each species that declares one. */
   readonly initialLevels: Readonly<Record<string, 0 | 1>>;
   /** Things read but not used (kept short, one line each). */
@@ -51,6 +53,7 @@ export function readSbmlQual(text: string): SbmlQualModel {
   const species: SpeciesInfo[] = [];
   const byId = new Map<string, SpeciesInfo>();
   const initialLevels: Record<string, 0 | 1> = {};
+  const speciesNames: Record<string, string> = {};
   for (const el of speciesElements) {
     const id = el.attrs["id"] ?? fail(`a qualitative species has no id${whereIs(el)}`);
     if (byId.has(id)) fail(`species ${id} is declared twice${whereIs(el)}`);
@@ -65,6 +68,8 @@ export function readSbmlQual(text: string): SbmlQualModel {
       if (initial > 1) fail(`species ${id} has initialLevel ${initial}, above the Boolean maximum 1${whereIs(el)}`);
       initialLevels[id] = initial as 0 | 1;
     }
+    const displayName = el.attrs["name"];
+    if (displayName !== undefined && displayName !== id) speciesNames[id] = displayName;
     const info = { id, constant: el.attrs["constant"] === "true", element: el };
     species.push(info);
     byId.set(id, info);
@@ -132,5 +137,5 @@ export function readSbmlQual(text: string): SbmlQualModel {
     // A species no transition sets keeps its value: it is an input of the model.
     return { name: s.id, rule: rule ? rule.expr : { kind: "var", name: s.id } };
   });
-  return { definition: { nodes }, modelId: model.attrs["id"] ?? null, modelName: model.attrs["name"] ?? null, initialLevels, warnings };
+  return { definition: { nodes }, modelId: model.attrs["id"] ?? null, modelName: model.attrs["name"] ?? null, speciesNames, initialLevels, warnings };
 }

@@ -1,8 +1,8 @@
 // Choose an initial state and an update scheme, then see the trajectory raster.
 import { useState } from "react";
 import type { TrajectoryBody } from "@shared/schemas/models";
+import { StateRaster } from "@/components/raster/state-raster";
 import { useTrajectory } from "../api/get-trajectory";
-import { TrajectoryRaster } from "./trajectory-raster";
 
 type Scheme = NonNullable<TrajectoryBody["scheme"]>;
 
@@ -63,7 +63,7 @@ export function TrajectoryPanel({ projectId, modelId, revision, nodes, suggested
         ))}
       </div>
       {run.error && <p role="alert" className="text-sm text-red-700">{run.error.message}</p>}
-      {run.data && <TrajectoryRaster nodes={run.data.nodes} states={run.data.states} />}
+      {run.data && <StateRaster nodes={run.data.nodes} states={run.data.states} />}
     </div>
   );
 }
