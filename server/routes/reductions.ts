@@ -3,13 +3,15 @@
 import { Router } from "express";
 import type { Knex } from "knex";
 import { z } from "zod";
-import { networkToCertificate, verifyCertificate } from "../../shared/engine/certificates";
+import { networkFromCertificate, networkToCertificate, verifyCertificate } from "../../shared/engine/certificates";
+import { networkToDefinition, printRuleText } from "../../shared/engine/rules";
 import {
   Certificate,
   CommentBody,
   DecisionBody,
   ReductionListQuery,
   ReductionParams,
+  SaveTargetBody,
   SearchBody,
   type Verification,
 } from "../../shared/schemas/reductions";
@@ -22,15 +24,18 @@ import {
   insertReduction,
   listReductions,
   setReviewState,
+  setTargetRevision,
   setVerification,
 } from "../db/repositories/reductions";
-import { findRevision } from "../db/repositories/model-revisions";
+import { findRevision, insertRevision } from "../db/repositories/model-revisions";
+import { insertModel } from "../db/repositories/models";
 import { currentProject, currentUser, projectAccess } from "../http/auth";
 import { HttpError } from "../http/errors";
 import { validate } from "../http/validate";
 import { RunRequestError } from "../jobs/run-errors";
 import { submitRun } from "../jobs/run-lifecycle";
 import type { RunQueue } from "../jobs/run-queue";
+import { networkSummary } from "../models/network-summary";
 import { latestRevisionNetwork, type RevisionNetwork } from "../reductions/revision-network";
 import { statementKey } from "../reductions/statement-key";
 
@@ -201,6 +206,33 @@ export function reductionsRouter(deps: { db: Knex; queue: RunQueue; queueCap: nu
     await db.transaction(async (trx) => {
       const id = await insertComment(trx, { reductionId: r.id, parentId: body.parentId ?? null, authorId: user.id, body: body.body });
       await recordAudit(trx, { projectId: project.id, actorId: user.id, action: "reduction.comment", target: r.id, details: { commentId: id } });
+    });
+    res.status(201).json({ data: await load(project.id, r.id) });
+  });
+
+  // A discovered target becomes a model of the project (revision 1 is the certificate's target network), and the
+  // reduction now points at it, so that once approved it joins the model hierarchy.
+  router.post("/:reductionId/save-target", projectAccess(db, "model:write"), validate({ params: ReductionParams, body: SaveTargetBody }), async (req, res) => {
+    const body = req.body as z.infer<typeof SaveTargetBody>;
+    const project = currentProject(req);
+    const user = currentUser(req);
+    const r = await load(project.id, String(req.params.reductionId));
+    if (r.target) throw new HttpError(409, "ALREADY_SAVED", `The target is already the model "${r.target.modelName}"`);
+    const network = networkFromCertificate(r.certificate.target);
+    const definition = networkToDefinition(network);
+    await db.transaction(async (trx) => {
+      const modelId = await insertModel(trx, {
+        projectId: project.id,
+        name: body.name,
+        description: `Target of a ${r.notion} found in ${r.source.modelName} (revision ${r.source.revision}).`,
+        createdBy: user.id,
+      });
+      const revisionId = await insertRevision(trx, {
+        modelId, revision: 1, definition, ruleText: printRuleText(definition), network: networkSummary(definition, network),
+        source: "rules", message: `Saved from reduction ${r.id}`, createdBy: user.id,
+      });
+      await setTargetRevision(trx, r.id, revisionId);
+      await recordAudit(trx, { projectId: project.id, actorId: user.id, action: "reduction.save-target", target: r.id, details: { modelId, name: body.name } });
     });
     res.status(201).json({ data: await load(project.id, r.id) });
   });

@@ -195,8 +195,19 @@ describe("POST /reductions/searches (searches as background runs)", () => {
     for (const node of ring) expect(node).toMatchObject({ inputs: [expect.any(String)], table: "10" });
     expect(new Set(ring.map((n) => n.inputs[0])).size).toBe(3);
     const stored = await modeler.get(`${base}/reductions/${result.reductionIds[0]}`);
-    expect(stored.body.data).toMatchObject({ reviewState: "proposed", foundInRunId: run.id });
+    expect(stored.body.data).toMatchObject({ reviewState: "proposed", foundInRunId: run.id, target: null });
     expect(verifyCertificate(stored.body.data.certificate).valid).toBe(true);
+
+    // Saving the discovered ring as a model links the reduction to it; approving it puts the edge in the hierarchy.
+    const saved = await modeler.post(`${base}/reductions/${result.reductionIds[0]}/save-target`).send({ name: `Tide ring ${suffix}` });
+    expect(saved.status).toBe(201);
+    expect(saved.body.data.target).toMatchObject({ modelName: `Tide ring ${suffix}`, revision: 1 });
+    expect((await modeler.post(`${base}/reductions/${result.reductionIds[0]}/save-target`).send({ name: "again" })).status).toBe(409);
+    const ringModel = await modeler.get(`${base}/models/${saved.body.data.target.modelId}`);
+    expect(ringModel.body.data.revision.network.nodes).toHaveLength(3);
+    await reviewer.post(`${base}/reductions/${result.reductionIds[0]}/decision`).send({ decision: "approve" });
+    const edges = (await viewer.get(`${base}/model-hierarchy`)).body.data.edges;
+    expect(edges).toContainEqual(expect.objectContaining({ source: TIDE_CLOCK_MODEL, target: saved.body.data.target.modelId, isComposed: false }));
   });
 
   it("answers a repeated search with the stored run instead of searching again", async () => {

@@ -104,6 +104,7 @@ const rows: Row[] = [
   { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/decision", body: () => ({ decision: "approve", comment: "matrix" }), expected: [401, 404, 403, 200, 403, 200, 200] },
   { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/verify", expected: [401, 404, 403, 200, 403, 200, 200] },
   { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/comments", body: () => ({ body: "matrix comment" }), expected: [401, 404, 403, 201, 201, 201, 201] },
+  { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/save-target", body: () => ({ name: "Matrix target" }), expected: [401, 404, 403, 403, 409, 409, 409] },
   { method: "get", path: "/api/projects/{projectId}/model-hierarchy", expected: [401, 404, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/notifications", expected: [401, 200, 200, 200, 200, 200, 200] },
   { method: "post", path: "/api/notifications/read", body: () => ({ all: true }), expected: [401, 200, 200, 200, 200, 200, 200] },

@@ -3,17 +3,10 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { captureOutput } from "../capture-output.test-support";
 import { run } from "./attractors";
 
 const fixture = fileURLToPath(new URL("../../../tests/fixtures/sbml/faure-2006-cell-cycle.rules", import.meta.url));
-
-function capture() {
-  const out: string[] = [];
-  const err: string[] = [];
-  vi.spyOn(process.stdout, "write").mockImplementation((chunk) => (out.push(String(chunk)), true));
-  vi.spyOn(process.stderr, "write").mockImplementation((chunk) => (err.push(String(chunk)), true));
-  return { out, err };
-}
 
 afterEach(() => vi.restoreAllMocks());
 
@@ -22,7 +15,7 @@ describe("attractors command", () => {
     // Faure, Naldi, Chaouiya, Thieffry, "Dynamical analysis of a generic Boolean model for the control of the
     // mammalian cell cycle", Bioinformatics 2006: under synchronous update, a stable state when CycD is off and a
     // single cycle of 7 states when CycD is on (values from memory; the fixture's rules are also from memory).
-    const { out } = capture();
+    const { out } = captureOutput();
     expect(await run([fixture, "--json"])).toBe(0);
     expect(out).toHaveLength(1);
     const result = JSON.parse(out[0]!) as { nodes: string[]; stateCount: number; attractors: { length: number; basin: number; states: string[] }[] };
@@ -39,7 +32,7 @@ describe("attractors command", () => {
   });
 
   it("run without --json prints a readable table with one line per attractor", async () => {
-    const { out } = capture();
+    const { out } = captureOutput();
     expect(await run([fixture])).toBe(0);
     const text = out.join("");
     expect(text).toMatch(/10 nodes, 1024 states, 2 attractor\(s\)/);
@@ -50,13 +43,13 @@ describe("attractors command", () => {
     const dir = mkdtempSync(path.join(tmpdir(), "emulant-attractors-"));
     const file = path.join(dir, "bad.rules");
     writeFileSync(file, "A' = A\nB' = (A &\n");
-    const { err } = capture();
+    const { err } = captureOutput();
     expect(await run([file, "--json"])).toBe(1);
     expect(err.join("")).toMatch(/bad\.rules:2:\d+: /);
   });
 
   it("run refuses a missing file argument, an unknown option and an unknown extension with exit code 2", async () => {
-    capture();
+    captureOutput();
     expect(await run([])).toBe(2);
     expect(await run([fixture, "--fast"])).toBe(2);
     expect(await run(["model.json"])).toBe(2);

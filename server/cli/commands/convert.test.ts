@@ -5,6 +5,7 @@ import { afterAll, afterEach, describe, expect, it, vi } from "vitest";
 import { compileDefinition, readRuleText } from "../../../shared/engine/rules";
 import { readSbmlQual } from "../../../shared/formats/sbml-qual";
 import { readTruthTableCsv } from "../../../shared/formats/truth-table-csv";
+import { captureOutput } from "../capture-output.test-support";
 import { run } from "./convert";
 
 const dir = mkdtempSync(join(tmpdir(), "emulant-convert-"));
@@ -12,13 +13,10 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 afterEach(() => vi.restoreAllMocks());
 
 async function convert(args: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = "";
-  let err = "";
-  vi.spyOn(process.stdout, "write").mockImplementation((chunk: string | Uint8Array) => ((out += String(chunk)), true));
-  vi.spyOn(process.stderr, "write").mockImplementation((chunk: string | Uint8Array) => ((err += String(chunk)), true));
+  const io = captureOutput();
   const code = await run(args);
   vi.restoreAllMocks();
-  return { code, out, err };
+  return { code, out: io.out.join(""), err: io.err.join("") };
 }
 
 const RULES = "# toggle switch with an input\nS' = S\nU' = S | !V\nV' = !U\n";

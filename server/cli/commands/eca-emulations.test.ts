@@ -1,21 +1,14 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { captureOutput } from "../capture-output.test-support";
 import { run } from "./eca-emulations";
 import { ecaRule } from "../../../shared/engine/automata";
 import { verifyEmulation } from "../../../shared/engine/block-emulation";
-
-function capture() {
-  const out: string[] = [];
-  const err: string[] = [];
-  vi.spyOn(process.stdout, "write").mockImplementation((s) => (out.push(String(s)), true));
-  vi.spyOn(process.stderr, "write").mockImplementation((s) => (err.push(String(s)), true));
-  return { out, err };
-}
 
 afterEach(() => vi.restoreAllMocks());
 
 describe("eca-emulations command", () => {
   it("run prints the JSON document with targets ascending and witnesses the verifier accepts", async () => {
-    const io = capture();
+    const io = captureOutput();
     expect(await run(["--rule", "0", "--block", "3", "--json"])).toBe(0);
     expect(JSON.parse(io.out.join(""))).toEqual({
       rule: 0,
@@ -29,7 +22,7 @@ describe("eca-emulations command", () => {
   });
 
   it("run honours --time and every printed encoding is a valid witness", async () => {
-    const io = capture();
+    const io = captureOutput();
     expect(await run(["--rule", "1", "--block", "4", "--time", "2", "--json"])).toBe(0);
     const doc = JSON.parse(io.out.join(""));
     expect(doc.time).toBe(2);
@@ -38,7 +31,7 @@ describe("eca-emulations command", () => {
 
   it("run rejects bad arguments on stderr with exit code 2", async () => {
     for (const args of [["--rule", "256", "--block", "3"], ["--block", "3"], ["--rule", "1", "--block", "0"], ["--rule", "1", "--block", "3", "--time", "4"], ["--rule", "1", "--block", "3", "--frob"], ["--rule", "x", "--block", "3"]]) {
-      const io = capture();
+      const io = captureOutput();
       expect(await run(args)).toBe(2);
       expect(io.err.join("")).toMatch(/eca-emulations: .+\nusage:/);
       expect(io.out).toEqual([]);

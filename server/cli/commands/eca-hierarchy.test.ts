@@ -1,19 +1,12 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { captureOutput } from "../capture-output.test-support";
 import { run } from "./eca-hierarchy";
-
-function capture() {
-  const out: string[] = [];
-  const err: string[] = [];
-  vi.spyOn(process.stdout, "write").mockImplementation((s) => (out.push(String(s)), true));
-  vi.spyOn(process.stderr, "write").mockImplementation((s) => (err.push(String(s)), true));
-  return { out, err };
-}
 
 afterEach(() => vi.restoreAllMocks());
 
 describe("eca-hierarchy command", () => {
   it("run prints maxBlock, the sorted relations with least block sizes and the rules that emulate nothing", async () => {
-    const io = capture();
+    const io = captureOutput();
     expect(await run(["--max-block", "2", "--json"])).toBe(0);
     const doc = JSON.parse(io.out.join(""));
     expect(Object.keys(doc)).toEqual(["maxBlock", "relations", "emulateNothing"]);
@@ -29,7 +22,7 @@ describe("eca-hierarchy command", () => {
 
   it("run rejects a missing or out-of-range --max-block on stderr with exit code 2", async () => {
     for (const args of [[], ["--max-block"], ["--max-block", "0"], ["--max-block", "99"], ["--max-block", "3", "--x"]]) {
-      const io = capture();
+      const io = captureOutput();
       expect(await run(args)).toBe(2);
       expect(io.err.join("")).toMatch(/eca-hierarchy: .+\nusage:/);
       vi.restoreAllMocks();

@@ -8,6 +8,7 @@ import { CodewordTable } from "@/features/reductions/components/codeword-table";
 import { PairedTrajectories } from "@/features/reductions/components/paired-trajectories";
 import { ReductionDiagrams } from "@/features/reductions/components/reduction-diagrams";
 import { ReviewPanel } from "@/features/reductions/components/review-panel";
+import { SaveTargetForm } from "@/features/reductions/components/save-target-form";
 import { useProjectOutlet } from "./project-layout";
 
 const notionText = { "block-emulation": "emulates", "dynamical-embedding": "embeds", "coarse-graining": "coarse-grains onto" } as const;
@@ -31,6 +32,9 @@ export function ReductionDetailRoute() {
         {r.flags.length > 0 && <p className="text-sm text-amber-700">Flags: {r.flags.join(", ")}</p>}
         <p className="text-xs text-slate-500">A reduction is a statement about the model, not about the cell it describes.</p>
       </header>
+      {!r.target && can(project.role, project.siteRole, "model:write") && (
+        <SaveTargetForm projectId={projectId} reductionId={r.id} suggestedName={`${r.source.modelName}: ${r.targetNodeCount}-node reduction`} />
+      )}
       <ReductionDiagrams certificate={r.certificate} />
       <section className="space-y-2">
         <h3 className="font-semibold text-slate-800">Encoding</h3>
