@@ -3,7 +3,8 @@
 import type { Knex } from "knex";
 import { ReductionSearchParams, ReductionSearchResult } from "../../shared/schemas/reductions";
 import { recordAudit } from "../db/repositories/audit-log";
-import { insertReduction } from "../db/repositories/reductions";
+import { verifyCertificate } from "../../shared/engine/certificates";
+import { insertReduction, setVerification } from "../db/repositories/reductions";
 import { statementKey } from "./statement-key";
 
 export interface FinishedRun { id: string; projectId: string; startedBy: string | null }
@@ -26,7 +27,18 @@ export async function storeSearchFindings(trx: Knex, run: FinishedRun, rawResult
       flags: f.flags,
       foundBy: run.startedBy,
       foundInRunId: run.id,
+      rank: f.rank,
     });
+    // The independent verifier re-checks every finding before anyone sees it, so a search bug cannot vouch for itself.
+    if (stored.isNew) {
+      const report = verifyCertificate(f.certificate);
+      await setVerification(trx, stored.id, {
+        isValid: report.valid,
+        message: report.valid ? `valid: ${report.statesChecked} states re-simulated when found` : report.problems.join("; "),
+        checkedAt: new Date().toISOString(),
+        checkedBy: null,
+      });
+    }
     ids.push(stored.id);
   }
   if (ids.length) {

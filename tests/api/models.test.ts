@@ -4,6 +4,7 @@ import os from "node:os";
 import path from "node:path";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { YEAST_RULE_TEXT } from "../../shared/engine/rules/yeast-rule-text.test-support";
 import { MULTIVALUED_SBML, REPRESSOR_RING_SBML } from "../support/model-fixtures";
 import { signInAs } from "../support/sessions";
 import { buildTestApp } from "../support/test-app";
@@ -26,22 +27,6 @@ beforeAll(async () => {
 // Two mutually repressing genes: under synchronous update both single-on states are fixed points and the
 // both-off/both-on pair forms a 2-cycle (common practice: the textbook toggle switch as a Boolean network).
 const TOGGLE = "# toggle\nA' = !B\nB' = !A\n";
-
-// Li, Long, Lu, Ouyang, Tang, "The yeast cell-cycle network is robustly designed", PNAS 101 (2004), Fig. 1 and
-// Table 1: seven fixed points with basins 1764, 151, 109, 9, 7, 7, 1 of 2048 states; the G1 state (only Cdh1 and
-// Sic1 on) has the biggest basin. Wiring and basin sizes written from memory (value from memory).
-const YEAST = `Cln3' = threshold(; tie zero)
-MBF' = threshold(+1 Cln3, -1 Clb12; tie keep)
-SBF' = threshold(+1 Cln3, -1 Clb12; tie keep)
-Cln12' = threshold(+1 SBF; tie zero)
-Cdh1' = threshold(-1 Cln12, -1 Clb56, -1 Clb12, +1 Cdc20; tie keep)
-Swi5' = threshold(+1 Cdc20, +1 Mcm1, -1 Clb12; tie zero)
-Cdc20' = threshold(+1 Clb12, +1 Mcm1; tie zero)
-Clb56' = threshold(+1 MBF, -1 Sic1, -1 Cdc20; tie keep)
-Sic1' = threshold(-1 Cln12, -1 Clb56, -1 Clb12, +1 Cdc20, +1 Swi5; tie keep)
-Clb12' = threshold(+1 Clb56, +1 Mcm1, -1 Cdc20, -1 Cdh1, -1 Sic1; tie keep)
-Mcm1' = threshold(+1 Clb56, +1 Clb12; tie zero)
-`;
 
 async function counts() {
   const [m] = await t.db("models").count<{ count: string }[]>("* as count");
@@ -232,7 +217,7 @@ async function download(path: string): Promise<{ status: number; text: string; t
 describe("exports", () => {
   for (const [format, fileName] of [["sbml", "back.sbml"], ["csv", "back.csv"]] as const) {
     it(`exports ${format} that uploads back to a model with the same attractors`, async () => {
-      const { model } = await createRules(`Yeast ${format}`, YEAST);
+      const { model } = await createRules(`Yeast ${format}`, YEAST_RULE_TEXT);
       const exported = await download(`${base}/${model.id}/revisions/1/export?format=${format}`);
       expect(exported.status).toBe(200);
       const back = await modeler.post(`${base}/upload`).attach("file", Buffer.from(exported.text), { filename: fileName });
@@ -246,7 +231,7 @@ describe("exports", () => {
   }
 
   it("exports rule text that imports back to a model with the same attractors", async () => {
-    const { model } = await createRules("Yeast cell cycle", YEAST);
+    const { model } = await createRules("Yeast cell cycle", YEAST_RULE_TEXT);
     const exported = await viewer.get(`${base}/${model.id}/revisions/1/export?format=rules`);
     expect(exported.status).toBe(200);
     expect(exported.headers["content-disposition"]).toContain(".rules");
@@ -264,7 +249,7 @@ const hasLibSbml = spawnSync("/usr/bin/python3", ["-c", "import libsbml"]).statu
 
 describe.skipIf(!hasLibSbml)("SBML-qual export checked by libSBML", () => {
   it("exports files with zero consistency errors for a threshold model, a generated ring and an SBML import", async () => {
-    const yeast = await createRules("Yeast libsbml", YEAST);
+    const yeast = await createRules("Yeast libsbml", YEAST_RULE_TEXT);
     const ring = await modeler.post(`${base}/generate`).send({ name: "Ring libsbml", generator: { kind: "eca", rule: 110, radius: 1, cells: 6 } });
     const imported = await modeler.post(`${base}/upload`).attach("file", Buffer.from(REPRESSOR_RING_SBML), { filename: "ring.sbml" });
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), "emulant-export-"));
@@ -284,11 +269,13 @@ describe.skipIf(!hasLibSbml)("SBML-qual export checked by libSBML", () => {
 
 describe("analyses", () => {
   it("reproduces the seven fixed points and basins of the budding-yeast cell-cycle model, labelled by markers", async () => {
-    const { model } = await createRules("Yeast for analysis", YEAST);
+    const { model } = await createRules("Yeast for analysis", YEAST_RULE_TEXT);
     const res = await viewer.get(`${base}/${model.id}/revisions/1/attractors?markers=Cdh1,Sic1,Clb12`);
     expect(res.status).toBe(200);
     const data = res.body.data;
     expect(data.stateCount).toBe(2048);
+    // Li, Long, Lu, Ouyang, Tang, "The yeast cell-cycle network is robustly designed", PNAS 2004, Table 1 (value
+    // from memory; wiring in shared/engine/rules/yeast-rule-text.test-support.ts).
     expect(data.attractors.map((a: { basin: number }) => a.basin)).toEqual([1764, 151, 109, 9, 7, 7, 1]);
     expect(data.attractors.every((a: { length: number }) => a.length === 1)).toBe(true);
     // G1: Cdh1 and Sic1 on, Clb1,2 off.

@@ -195,7 +195,7 @@ describe("POST /reductions/searches (searches as background runs)", () => {
     for (const node of ring) expect(node).toMatchObject({ inputs: [expect.any(String)], table: "10" });
     expect(new Set(ring.map((n) => n.inputs[0])).size).toBe(3);
     const stored = await modeler.get(`${base}/reductions/${result.reductionIds[0]}`);
-    expect(stored.body.data).toMatchObject({ reviewState: "proposed", foundInRunId: run.id, target: null });
+    expect(stored.body.data).toMatchObject({ reviewState: "proposed", foundInRunId: run.id, target: null, lastVerification: { isValid: true, checkedBy: null } });
     expect(verifyCertificate(stored.body.data.certificate).valid).toBe(true);
 
     // Saving the discovered ring as a model links the reduction to it; approving it puts the edge in the hierarchy.

@@ -89,7 +89,8 @@ export async function listReductions(db: Knex, projectId: string, f: ReductionFi
   if (f.state) q.andWhere("red.review_state", f.state);
   if (f.notion) q.andWhere("red.notion", f.notion);
   if (f.sourceModelId) q.andWhere("sm.id", f.sourceModelId);
-  const rows = (await q.orderBy([{ column: "red.created_at", order: "desc" }, { column: "red.id" }]).limit(500)) as ReductionRow[];
+  // Findings of one search share a timestamp (one transaction); within it they keep the search's ranking.
+  const rows = (await q.orderBy("red.created_at", "desc").orderByRaw("coalesce((red.summary->>'rank')::int, 0)").orderBy("red.id").limit(500)) as ReductionRow[];
   return rows.map(toSummary);
 }
 
@@ -121,6 +122,8 @@ export interface NewReduction {
   flags: string[];
   foundBy: string | null;
   foundInRunId: string | null;
+  /** Position in the search's ranking (0 = best); 0 for single results. */
+  rank?: number;
 }
 
 /** Stores a reduction unless the same statement is already stored; returns its id and whether it was new. */
@@ -136,7 +139,7 @@ export async function insertReduction(db: Knex, r: NewReduction): Promise<{ id: 
       target_node_count: targetNames.length,
       target_key: r.targetKey,
       certificate: JSON.stringify(r.certificate),
-      summary: JSON.stringify({ targetNames, flags: r.flags }),
+      summary: JSON.stringify({ targetNames, flags: r.flags, rank: r.rank ?? 0 }),
       found_by: r.foundBy,
       found_in_run_id: r.foundInRunId,
     })

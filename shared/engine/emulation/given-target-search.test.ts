@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import seedrandom from "seedrandom";
-import { checkNetwork, networkFromFunctions, type BooleanNetwork } from "../network";
+import { networkFromFunctions, type BooleanNetwork } from "../network";
+import { reorderNodes } from "../network/reorder-nodes.test-support";
 import { blockEmulationCertificate, verifyCertificate } from "../certificates";
 import {
   mergeEmulationShards,
@@ -12,17 +13,6 @@ import {
   witnessHolds,
   type BlockEmulationWitness,
 } from "./index";
-
-/** Renames every node and lists them in the order `perm` (new node i is old node perm[i]). */
-function reorder(net: BooleanNetwork, perm: number[]): BooleanNetwork {
-  const inv = new Array<number>(perm.length);
-  perm.forEach((old, i) => (inv[old] = i));
-  return checkNetwork({
-    names: perm.map((old) => `renamed_${net.names[old]}`),
-    regulators: perm.map((old) => Int32Array.from(net.regulators[old]!, (r) => inv[r]!)),
-    tables: perm.map((old) => net.tables[old]!),
-  });
-}
 
 function randomPermutation(rng: () => number, n: number): number[] {
   const p = [...Array(n).keys()];
@@ -120,7 +110,7 @@ describe("searchBlockEmulation", () => {
         const rng = seedrandom(String(seed));
         const F = rng() < 0.5 ? randomNetwork(rng, n, 2) : plantEmulation(rng, randomNetwork(rng, m, 2, "g"), n, 2).source;
         const G = randomNetwork(rng, m, 2, "g");
-        const F2 = reorder(F, randomPermutation(rng, n));
+        const F2 = reorderNodes(F, randomPermutation(rng, n), "renamed_");
         const a = searchBlockEmulation(F, G, { maxTime: 2, maxBlock: 2 });
         const b = searchBlockEmulation(F2, G, { maxTime: 2, maxBlock: 2 });
         expect(b.found).toBe(a.found);

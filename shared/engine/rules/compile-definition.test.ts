@@ -5,6 +5,7 @@ import { compileDefinition, evaluateExpr, truthTableOf } from "./compile-definit
 import { readRuleText } from "./parse-rule-text";
 import { exprArb, modelArb } from "./rules-arbitrary.test-support";
 import type { Expr, ModelDefinition, RuleSyntax } from "./syntax";
+import { YEAST_RULE_TEXT } from "./yeast-rule-text.test-support";
 
 /** Plain reference: the next value of node i from a full state, straight from the rule tree. */
 function referenceNext(model: ModelDefinition, i: number, state: number): number {
@@ -117,25 +118,9 @@ describe("compileDefinition", () => {
   });
 
   it("compileDefinition of the budding-yeast threshold model has the published seven fixed points and basin sizes", () => {
-    // Li, Long, Lu, Ouyang, Tang, "The yeast cell-cycle network is robustly designed", PNAS 101 (2004), Fig. 1 and
-    // Table 1: a_g = 1, a_r = -1, threshold 0, ties keep the value except for the self-degrading nodes (Cln3, Cln1,2,
-    // Swi5, Cdc20&Cdc14, Mcm1/SFF). Wiring and the basin sizes 1764, 151, 109, 9, 7, 7, 1 are written from memory;
-    // the biggest basin (1764 of 2048 states) is the G1 state with only Cdh1 and Sic1 on.
-    const net = compileDefinition(
-      readRuleText(`# budding yeast cell cycle, threshold model (Li et al. 2004), wiring from memory
-Cln3' = threshold(; tie zero)
-MBF' = threshold(+1 Cln3, -1 Clb12; tie keep)
-SBF' = threshold(+1 Cln3, -1 Clb12; tie keep)
-Cln12' = threshold(+1 SBF; tie zero)
-Cdh1' = threshold(-1 Cln12, -1 Clb56, -1 Clb12, +1 Cdc20; tie keep)
-Swi5' = threshold(+1 Cdc20, +1 Mcm1, -1 Clb12; tie zero)
-Cdc20' = threshold(+1 Clb12, +1 Mcm1; tie zero)
-Clb56' = threshold(+1 MBF, -1 Sic1, -1 Cdc20; tie keep)
-Sic1' = threshold(-1 Cln12, -1 Clb56, -1 Clb12, +1 Cdc20, +1 Swi5; tie keep)
-Clb12' = threshold(+1 Clb56, +1 Mcm1, -1 Cdc20, -1 Cdh1, -1 Sic1; tie keep)
-Mcm1' = threshold(+1 Clb56, +1 Clb12; tie zero)
-`),
-    );
+    // Li et al., PNAS 2004 (see yeast-rule-text.test-support.ts): basins 1764, 151, 109, 9, 7, 7, 1 written from
+    // memory; the biggest basin (1764 of 2048 states) is the G1 state with only Cdh1 and Sic1 on.
+    const net = compileDefinition(readRuleText(YEAST_RULE_TEXT));
     const attractors = synchronousAttractorBasins(net);
     expect(attractors.every((a) => a.fixed)).toBe(true);
     expect(attractors.map((a) => a.basin)).toEqual([1764, 151, 109, 9, 7, 7, 1]);

@@ -60,6 +60,9 @@ export function NetworkGraph({ nodes, edges, height = 360, onNodeClick, testId }
           labelSize: 13,
           labelWeight: "600",
           labelRenderedSizeThreshold: 0,
+          // Small graphs: show every label rather than thinning them out where they crowd.
+          labelDensity: 10,
+          labelGridCellSize: 20,
           defaultEdgeType: "arrow",
           stagePadding: 36,
         }}

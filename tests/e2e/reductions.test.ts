@@ -1,0 +1,101 @@
+// The reductions journey in the browser: a modeler runs a discover search on the demo tide clock (a repressor ring
+// hidden in two-node blocks), opens the best reduction, sees F's diagram coloured by block and the two runs agreeing,
+// saves the target as a model; a reviewer approves it and it appears in the project's model hierarchy.
+import { randomUUID } from "node:crypto";
+import type { BrowserContext } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { loadRunSettings } from "../../server/jobs/run-settings";
+import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
+import { createLogger } from "../../server/logger";
+import { openBrowser, screenshot } from "../support/browser";
+import { startTestServer, testConfig, type RunningServer } from "../support/test-app";
+
+const DEMO_PROJECT = "00000000-0000-4000-8000-000000000001";
+const TIDE_CLOCK_MODEL = "00000000-0000-4000-8000-000000000302";
+
+let server: RunningServer;
+let browser: Awaited<ReturnType<typeof openBrowser>>;
+let worker: RunWorker;
+let projectId: string;
+
+async function signIn(context: BrowserContext, email: string) {
+  await context.clearCookies();
+  const res = await context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email, password: "demo-password" } });
+  if (res.status() !== 200) throw new Error(`sign-in as ${email} failed: ${res.status()}`);
+}
+
+beforeAll(async () => {
+  server = await startTestServer();
+  const config = testConfig();
+  worker = await startRunWorker({
+    db: server.db, log: createLogger(config), databaseUrl: config.DATABASE_URL, mailer: null, publicUrl: server.baseUrl,
+    settings: loadRunSettings({ RUN_HEARTBEAT_MS: "300" }, 2),
+  });
+  browser = await openBrowser();
+  // A fresh project owned by the demo owner, with the demo modeler and reviewer, and a copy of the tide clock, so no
+  // stored search result or earlier decision from another test is reused.
+  const { request } = browser.context;
+  await signIn(browser.context, "owner@demo.emulant.test");
+  const tide = await (await request.get(`${server.baseUrl}/api/projects/${DEMO_PROJECT}/models/${TIDE_CLOCK_MODEL}`)).json();
+  projectId = (await (await request.post(server.baseUrl + "/api/projects", { data: { name: `Reductions in the browser ${randomUUID().slice(0, 6)}` } })).json()).data.id;
+  for (const [email, role] of [["modeler@demo.emulant.test", "modeler"], ["reviewer@demo.emulant.test", "reviewer"]] as const) {
+    const user = await server.db("users").where({ email }).first("id");
+    await server.db("memberships").insert({ project_id: projectId, user_id: user.id, role });
+  }
+  await signIn(browser.context, "modeler@demo.emulant.test");
+  const created = await request.post(`${server.baseUrl}/api/projects/${projectId}/models`, { data: { name: "Tide clock (copy)", ruleText: tide.data.revision.ruleText } });
+  if (created.status() !== 201) throw new Error(`model copy failed: ${created.status()}`);
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await worker?.stop();
+  await server?.close();
+});
+
+describe("reductions in the browser", () => {
+  it("discovers, shows, saves, approves and draws a reduction", async () => {
+    const { page, context } = browser;
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(e.message));
+
+    await page.goto(`${server.baseUrl}/projects/${projectId}/reductions`);
+    await page.getByTestId("search-form").waitFor();
+    await page.getByTestId("mode-discover").click();
+    await page.getByTestId("max-target-nodes").fill("3");
+    await page.getByTestId("max-block").fill("2");
+    await screenshot(page, "reductions-search-form");
+    await page.getByTestId("start-search").click();
+    await page.getByTestId("search-started").waitFor();
+    await page.getByTestId("search-started").getByRole("link").click();
+    await expect.poll(() => page.getByTestId("run-state").getAttribute("data-state"), { timeout: 60_000 }).toBe("succeeded");
+
+    await page.goto(`${server.baseUrl}/projects/${projectId}/reductions`);
+    await page.getByTestId("reductions-table").waitFor();
+    await page.getByTestId("reductions-table").getByRole("link").first().click();
+    await page.getByTestId("reduction-detail").waitFor();
+    await page.locator('[data-testid="source-diagram"] canvas').first().waitFor();
+    expect(await page.getByTestId("codeword-table").textContent()).toContain("Tk1a");
+    await expect.poll(() => page.getByTestId("paired-trajectories").getAttribute("data-agrees")).toBe("true");
+    await expect.poll(() => page.getByTestId("review-state").textContent()).toBe("proposed");
+    await page.getByTestId("save-target-name").fill("Tide ring");
+    await page.getByTestId("save-target").getByRole("button").click();
+    await page.getByTestId("save-target").waitFor({ state: "detached" });
+    await screenshot(page, "reductions-detail");
+    const reductionUrl = page.url();
+
+    // The modeler sees no decision buttons; the reviewer does.
+    expect(await page.getByTestId("approve").count()).toBe(0);
+    await signIn(context, "reviewer@demo.emulant.test");
+    await page.goto(reductionUrl);
+    await page.getByTestId("approve").click();
+    await expect.poll(() => page.getByTestId("review-state").textContent()).toBe("approved");
+    await screenshot(page, "reductions-approved");
+
+    await page.goto(`${server.baseUrl}/projects/${projectId}/hierarchy`);
+    await expect.poll(() => page.getByTestId("model-hierarchy").getAttribute("data-edges")).toBe("1");
+    await page.locator('[data-testid="model-hierarchy-graph"] canvas').first().waitFor();
+    await screenshot(page, "reductions-model-hierarchy");
+    expect(errors).toEqual([]);
+  });
+});
