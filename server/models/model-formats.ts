@@ -1,16 +1,17 @@
 // File formats at the edge of the models API: which reader an upload goes to (by file name) and how a revision is
 // written for download. The readers and writers themselves live in shared/formats and shared/engine/rules.
 import { compileDefinition, networkToDefinition, printRuleText, type ModelDefinition } from "../../shared/engine/rules";
+import { modelFormatOf } from "../../shared/formats/read-model";
 import { readSbmlQual, writeSbmlQual } from "../../shared/formats/sbml-qual";
 import { parseTruthTableCsv, writeTruthTableCsv } from "../../shared/formats/truth-table-csv";
 import type { ExportFormat, ModelSource } from "../../shared/schemas/models";
 import { HttpError } from "../http/errors";
-import { compileOrFail, issueOf, parseFailure, readRules, sourceOfFileName, type ReadModel } from "./model-reading";
+import { compileOrFail, issueOf, parseFailure, readRules, type ReadModel } from "./model-reading";
 
 export interface UploadedModel extends ReadModel { source: ModelSource; ruleText: string; suggestedName?: string }
 
 export function readUpload(fileName: string, bytes: Buffer): UploadedModel {
-  const source = sourceOfFileName(fileName);
+  const source = modelFormatOf(fileName);
   if (!source) throw new HttpError(415, "UNSUPPORTED_FORMAT", `${fileName}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`);
   const text = bytes.toString("utf8");
   if (source === "rules") {

@@ -3,7 +3,7 @@
 import { EngineError, ParseError } from "../../shared/engine/errors";
 import { compileDefinition, parseRuleText, type ModelDefinition } from "../../shared/engine/rules";
 import type { BooleanNetwork } from "../../shared/engine/network";
-import type { ModelSource, ParseIssue } from "../../shared/schemas/models";
+import type { ParseIssue } from "../../shared/schemas/models";
 import { HttpError } from "../http/errors";
 
 export interface ReadModel {
@@ -55,14 +55,6 @@ export function compileOrFail(definition: ModelDefinition, what: string): ReadMo
     if (!issue) throw e;
     throw parseFailure([issue], what);
   }
-}
-
-export function sourceOfFileName(fileName: string): ModelSource | null {
-  const lower = fileName.toLowerCase();
-  if (lower.endsWith(".sbml") || lower.endsWith(".xml")) return "sbml";
-  if (lower.endsWith(".csv")) return "csv";
-  if (lower.endsWith(".rules") || lower.endsWith(".txt")) return "rules";
-  return null;
 }
 
 export { issueOf };
