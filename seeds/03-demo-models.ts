@@ -123,6 +123,20 @@ export const DEMO_MODELS: DemoModel[] = [
     revisions: [{ definition: networkToDefinition(cellularAutomaton(CILIA_RING)), source: "generator", generator: { ...CILIA_RING } }],
   },
   {
+    id: "00000000-0000-4000-8000-000000000306",
+    name: "Glimmerfin tide ring (3 genes)",
+    description: `${DEMO_NOTE} The three-gene repressor ring the tide clock was built around, written on its own.`,
+    author: "modeler@demo.emulant.test",
+    revisions: [{ ruleText: "# Each tide gene represses the next.\nTk1' = !Tk3\nTk2' = !Tk1\nTk3' = !Tk2\n", source: "rules" }],
+  },
+  {
+    id: "00000000-0000-4000-8000-000000000307",
+    name: "Glimmerfin tide pulse (1 gene)",
+    description: `${DEMO_NOTE} A single self-repressing gene: the smallest oscillator, on at every other step.`,
+    author: "modeler@demo.emulant.test",
+    revisions: [{ ruleText: "Pulse' = !Pulse\n", source: "rules" }],
+  },
+  {
     id: "00000000-0000-4000-8000-000000000305",
     name: "Glimmerfin stress-response atlas",
     description: `${DEMO_NOTE} 24 genes; heat, salt and UV pathways converging on growth arrest and encystment. Its exact attractor analysis runs as a background run.`,
