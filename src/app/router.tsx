@@ -34,14 +34,14 @@ export const routes = [
     errorElement: <RouteErrorBoundary />,
     children: [
       { index: true, element: <HomeRoute /> },
-      { path: "automata", element: <AutomataRoute /> },
-      { path: "automata/rules/:rule", element: <AutomataRuleRoute /> },
       { path: "sign-in", element: <SignInRoute /> },
       { path: "sign-up", element: <SignUpRoute /> },
       { path: "invitations/:token", element: <AcceptInvitationRoute /> },
       {
         element: <RequireSignIn />,
         children: [
+          { path: "automata", element: <AutomataRoute /> },
+          { path: "automata/rules/:rule", element: <AutomataRuleRoute /> },
           { path: "profile", element: <ProfileRoute /> },
           { path: "mailbox", element: <MailboxRoute /> },
           { path: "projects", element: <ProjectListRoute /> },

@@ -32,7 +32,7 @@ export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: Reac
           </button>
           <nav aria-label="Main" className={`${isMenuOpen ? "flex" : "hidden"} absolute left-0 right-0 top-14 z-20 flex-col gap-1 bg-slate-900 p-3 md:static md:flex md:flex-row md:p-0`}>
             {navItems.map((item) => (
-              <NavLink key={item.to} to={item.to} end className={navClass} onClick={() => setMenuOpen(false)}>
+              <NavLink key={item.to} to={item.to} end={item.to === "/"} className={navClass} onClick={() => setMenuOpen(false)}>
                 {item.label}
               </NavLink>
             ))}
