@@ -1,23 +1,18 @@
 // The automata screens in headless Chromium: the K = 11 hierarchy is drawn by sigma, and a rule page shows its
 // own diagram and a witness as two runs side by side that agree.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openBrowser, screenshot } from "../support/browser";
-import { startTestServer, type RunningServer } from "../support/test-app";
+import { screenshot } from "../support/browser";
+import { openBrowserSession, type BrowserSession } from "../support/browser-session";
 
-let server: RunningServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
+let browser: BrowserSession;
+let server: BrowserSession["server"];
 
 beforeAll(async () => {
-  server = await startTestServer();
-  browser = await openBrowser();
   // a modeler of the demo project may also start the background run for large block sizes
-  const res = await browser.context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email: "modeler@demo.emulant.test", password: "demo-password" } });
-  if (res.status() !== 200) throw new Error(`sign-in failed: ${res.status()}`);
+  browser = await openBrowserSession({ signInAs: "modeler@demo.emulant.test" });
+  server = browser.server;
 });
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+afterAll(() => browser?.close());
 
 /** Whether a canvas has at least two different pixel colours, i.e. something was drawn on it. */
 async function canvasHasDrawing(selector: string): Promise<boolean> {

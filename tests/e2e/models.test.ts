@@ -4,24 +4,19 @@ import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { openBrowser, screenshot } from "../support/browser";
+import { openBrowserSession, type BrowserSession } from "../support/browser-session";
 import { MULTIVALUED_SBML, REPRESSOR_RING_SBML } from "../support/model-fixtures";
-import { startTestServer, type RunningServer } from "../support/test-app";
 
 const PROJECT = "00000000-0000-4000-8000-000000000001";
 
-let server: RunningServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
+let browser: BrowserSession;
+let server: BrowserSession["server"];
 
 beforeAll(async () => {
-  server = await startTestServer();
-  browser = await openBrowser();
-  const res = await browser.context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email: "modeler@demo.emulant.test", password: "demo-password" } });
-  if (res.status() !== 200) throw new Error(`sign-in failed: ${res.status()}`);
+  browser = await openBrowserSession({ signInAs: "modeler@demo.emulant.test" });
+  server = browser.server;
 });
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+afterAll(() => browser?.close());
 
 describe("models screens in headless Chromium", () => {
   it("imports an SBML-qual file, shows its wiring and attractors, and a rule edit makes revision 2 with new attractors", async () => {

@@ -2,60 +2,40 @@
 // hidden in two-node blocks), opens the best reduction, sees F's diagram coloured by block and the two runs agreeing,
 // saves the target as a model; a reviewer approves it and it appears in the project's model hierarchy.
 import { randomUUID } from "node:crypto";
-import type { BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { loadRunSettings } from "../../server/jobs/run-settings";
-import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
-import { createLogger } from "../../server/logger";
-import { openBrowser, screenshot } from "../support/browser";
-import { startTestServer, testConfig, type RunningServer } from "../support/test-app";
+import { screenshot } from "../support/browser";
+import { openBrowserSession, type BrowserSession } from "../support/browser-session";
 
 const DEMO_PROJECT = "00000000-0000-4000-8000-000000000001";
 const TIDE_CLOCK_MODEL = "00000000-0000-4000-8000-000000000302";
 
-let server: RunningServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
-let worker: RunWorker;
+let browser: BrowserSession;
+let server: BrowserSession["server"];
 let projectId: string;
 
-async function signIn(context: BrowserContext, email: string) {
-  await context.clearCookies();
-  const res = await context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email, password: "demo-password" } });
-  if (res.status() !== 200) throw new Error(`sign-in as ${email} failed: ${res.status()}`);
-}
-
 beforeAll(async () => {
-  server = await startTestServer();
-  const config = testConfig();
-  worker = await startRunWorker({
-    db: server.db, log: createLogger(config), databaseUrl: config.DATABASE_URL, mailer: null, publicUrl: server.baseUrl,
-    settings: loadRunSettings({ RUN_HEARTBEAT_MS: "300" }, 2),
-  });
-  browser = await openBrowser();
+  browser = await openBrowserSession({ withWorker: true });
+  server = browser.server;
   // A fresh project owned by the demo owner, with the demo modeler and reviewer, and a copy of the tide clock, so no
   // stored search result or earlier decision from another test is reused.
   const { request } = browser.context;
-  await signIn(browser.context, "owner@demo.emulant.test");
+  await browser.signIn("owner@demo.emulant.test");
   const tide = await (await request.get(`${server.baseUrl}/api/projects/${DEMO_PROJECT}/models/${TIDE_CLOCK_MODEL}`)).json();
   projectId = (await (await request.post(server.baseUrl + "/api/projects", { data: { name: `Reductions in the browser ${randomUUID().slice(0, 6)}` } })).json()).data.id;
   for (const [email, role] of [["modeler@demo.emulant.test", "modeler"], ["reviewer@demo.emulant.test", "reviewer"]] as const) {
     const user = await server.db("users").where({ email }).first("id");
     await server.db("memberships").insert({ project_id: projectId, user_id: user.id, role });
   }
-  await signIn(browser.context, "modeler@demo.emulant.test");
+  await browser.signIn("modeler@demo.emulant.test");
   const created = await request.post(`${server.baseUrl}/api/projects/${projectId}/models`, { data: { name: "Tide clock (copy)", ruleText: tide.data.revision.ruleText } });
   if (created.status() !== 201) throw new Error(`model copy failed: ${created.status()}`);
 });
 
-afterAll(async () => {
-  await browser?.close();
-  await worker?.stop();
-  await server?.close();
-});
+afterAll(() => browser?.close());
 
 describe("reductions in the browser", () => {
   it("discovers, shows, saves, approves and draws a reduction", async () => {
-    const { page, context } = browser;
+    const { page } = browser;
     const errors: string[] = [];
     page.on("pageerror", (e) => errors.push(e.message));
 
@@ -86,7 +66,7 @@ describe("reductions in the browser", () => {
 
     // The modeler sees no decision buttons; the reviewer does.
     expect(await page.getByTestId("approve").count()).toBe(0);
-    await signIn(context, "reviewer@demo.emulant.test");
+    await browser.signIn("reviewer@demo.emulant.test");
     await page.goto(reductionUrl);
     await page.getByTestId("approve").click();
     await expect.poll(() => page.getByTestId("review-state").textContent()).toBe("approved");

@@ -2,37 +2,22 @@
 // the work is done by a real in-process worker on pg-boss, as under `npm start`.
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { loadRunSettings } from "../../server/jobs/run-settings";
-import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
-import { createLogger } from "../../server/logger";
-import { openBrowser, screenshot } from "../support/browser";
-import { startTestServer, testConfig, type RunningServer } from "../support/test-app";
+import { screenshot } from "../support/browser";
+import { openBrowserSession, type BrowserSession } from "../support/browser-session";
 
-let server: RunningServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
-let worker: RunWorker;
+let browser: BrowserSession;
+let server: BrowserSession["server"];
 let projectId: string;
 
 beforeAll(async () => {
-  server = await startTestServer();
-  const config = testConfig();
-  worker = await startRunWorker({
-    db: server.db, log: createLogger(config), databaseUrl: config.DATABASE_URL, mailer: null, publicUrl: server.baseUrl,
-    settings: loadRunSettings({ RUN_HEARTBEAT_MS: "300" }, 2),
-  });
-  browser = await openBrowser();
-  const signIn = await browser.context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email: "owner@demo.emulant.test", password: "demo-password" } });
-  if (signIn.status() !== 200) throw new Error(`sign-in failed: ${signIn.status()}`);
+  browser = await openBrowserSession({ withWorker: true, signInAs: "owner@demo.emulant.test" });
+  server = browser.server;
   // A fresh project: a stored result of an earlier test run would be reused instead of running.
   const created = await browser.context.request.post(server.baseUrl + "/api/projects", { data: { name: `Runs in the browser ${randomUUID().slice(0, 6)}` } });
   projectId = (await created.json()).data.id;
 });
 
-afterAll(async () => {
-  await browser?.close();
-  await worker?.stop();
-  await server?.close();
-});
+afterAll(() => browser?.close());
 
 describe("runs in the browser", () => {
   it("starts a run, shows the progress bar moving with elapsed time, cancels it and shows it cancelled", async () => {
