@@ -183,7 +183,9 @@ export function modelsRouter(deps: { db: Knex }): Router {
         if (err.code === "LIMIT_FILE_SIZE") return next(new HttpError(413, "TOO_LARGE", `Model files may be at most ${MODEL_UPLOAD_LIMIT_BYTES / (1024 * 1024)} MB`));
         return next(new HttpError(400, "INVALID_INPUT", `Upload refused: ${err.message}`));
       }
-      next(err);
+      // Anything else the form parser throws (no boundary, a truncated body) is a malformed request, not our failure.
+      if (err) return next(new HttpError(400, "INVALID_INPUT", `Upload refused: the form data could not be read (${(err as Error).message})`));
+      next();
     });
   }, validate({ body: UploadFields }), async (req, res) => {
     const file = req.file;

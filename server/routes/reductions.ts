@@ -111,6 +111,12 @@ export function reductionsRouter(deps: { db: Knex; queue: RunQueue; queueCap: nu
     const body = req.body as z.infer<typeof UploadBody>;
     const project = currentProject(req);
     const user = currentUser(req);
+    // Verification re-simulates every target state within this request; searches never produce larger targets.
+    if (body.certificate.target.nodes.length > MAX_TARGET_NODES) {
+      throw new HttpError(400, "TOO_LARGE", `certificate.target: it has ${body.certificate.target.nodes.length} nodes; targets have at most ${MAX_TARGET_NODES}`, [
+        { field: "body.certificate.target.nodes", message: `at most ${MAX_TARGET_NODES} nodes` },
+      ]);
+    }
     const source = await latestRevisionNetwork(db, project.id, body.sourceModelId, "sourceModelId");
     if (JSON.stringify(networkToCertificate(source.network)) !== JSON.stringify(body.certificate.source)) {
       throw new HttpError(400, "SOURCE_MISMATCH", `certificate.source: it is not the network of "${source.modelName}" revision ${source.revision}`);

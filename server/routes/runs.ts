@@ -31,6 +31,12 @@ export function runsRouter(deps: RunsRouterDeps): Router {
     const project = currentProject(req);
     const user = currentUser(req);
     const body = req.body as StartRunBody;
+    // Its parameters (revision ids, rule texts) are trusted by the merge step, so only the server may assemble them.
+    if (body.kind === "reduction-search") {
+      throw new HttpError(400, "INVALID_INPUT", "body.kind: start reduction searches with POST /api/projects/:projectId/reductions/searches", [
+        { field: "body.kind", message: "use the reductions searches endpoint" },
+      ]);
+    }
     const out = await submitRun(deps, { projectId: project.id, startedBy: user.id, body }).catch((err) => { throw asHttp(err); });
     if (!out.reused) {
       await recordAudit(db, { projectId: project.id, actorId: user.id, action: "run.start", target: out.run.id, details: { kind: out.run.kind } });

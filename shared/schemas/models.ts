@@ -8,7 +8,7 @@ export const INLINE_ANALYSIS_MAX_NODES = 16;
 const nodeName = z.string().regex(/^[A-Za-z_][A-Za-z0-9_]*$/, "must be a node name");
 
 export const ModelParams = z.object({ projectId: z.uuid(), modelId: z.uuid() });
-export const RevisionParams = ModelParams.extend({ revision: z.coerce.number().int().min(1) });
+export const RevisionParams = ModelParams.extend({ revision: z.coerce.number().int().min(1).max(2_147_483_647) });
 
 /** Where reading stopped (1-based); line 0 and column 0 when the problem concerns the whole file. */
 export const ParseIssue = z.object({ line: z.number().int(), column: z.number().int(), message: z.string() });

@@ -45,6 +45,8 @@ let modeler: Agent;
 let reviewer: Agent;
 let viewer: Agent;
 const modelIds: Record<keyof typeof rules, string> = { F0: "", F: "", G: "" };
+/** A fresh copy of the demo tide clock, so no stored search result of an earlier run on this database is reused. */
+let tideClock = "";
 
 beforeAll(async () => {
   modeler = await signInAs(t.app, "modeler@demo.emulant.test");
@@ -55,6 +57,10 @@ beforeAll(async () => {
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     modelIds[key] = res.body.data.model.id;
   }
+  const demo = await modeler.get(`${base}/models/${TIDE_CLOCK_MODEL}`);
+  const copy = await modeler.post(`${base}/models`).send({ name: `Tide clock copy ${suffix}`, ruleText: demo.body.data.revision.ruleText });
+  expect(copy.status).toBe(201);
+  tideClock = copy.body.data.model.id;
 });
 afterAll(async () => {
   await worker?.stop();
@@ -183,7 +189,7 @@ describe("POST /reductions/searches (searches as background runs)", () => {
   });
 
   it("discovers the repressor ring hidden in the demo tide clock and stores it as a proposed, valid reduction", async () => {
-    const res = await modeler.post(`${base}/reductions/searches`).send({ mode: "discover", sourceModelId: TIDE_CLOCK_MODEL, maxTargetNodes: 3, maxTime: 1, maxBlock: 2 });
+    const res = await modeler.post(`${base}/reductions/searches`).send({ mode: "discover", sourceModelId: tideClock, maxTargetNodes: 3, maxTime: 1, maxBlock: 2 });
     expect([200, 201]).toContain(res.status);
     const run = await finishedRun(res.body.data.id);
     expect(run.state, JSON.stringify(run.error)).toBe("succeeded");
@@ -207,7 +213,7 @@ describe("POST /reductions/searches (searches as background runs)", () => {
     expect(ringModel.body.data.revision.network.nodes).toHaveLength(3);
     await reviewer.post(`${base}/reductions/${result.reductionIds[0]}/decision`).send({ decision: "approve" });
     const edges = (await viewer.get(`${base}/model-hierarchy`)).body.data.edges;
-    expect(edges).toContainEqual(expect.objectContaining({ source: TIDE_CLOCK_MODEL, target: saved.body.data.target.modelId, isComposed: false }));
+    expect(edges).toContainEqual(expect.objectContaining({ source: tideClock, target: saved.body.data.target.modelId, isComposed: false }));
   });
 
   it("answers a repeated search with the stored run instead of searching again", async () => {
