@@ -54,6 +54,9 @@ export function NetworkGraph({ nodes, edges, height = 360, onNodeClick, testId }
       <SigmaContainer
         style={{ height: "100%", width: "100%" }}
         settings={{
+          // A container can be 0 px wide for a frame while the page lays out (route changes, grids); sigma then
+          // throws unless told to wait for the resize that follows.
+          allowInvalidContainer: true,
           renderEdgeLabels: true,
           labelFont: '"Inter Variable", sans-serif',
           edgeLabelFont: '"Inter Variable", sans-serif',
