@@ -2,20 +2,17 @@
 // search, sort and paging, and deleting a project only after typing its name.
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openBrowser, screenshot } from "../support/browser";
-import { startTestServer, type RunningServer } from "../support/test-app";
+import { screenshot } from "../support/browser";
+import { openBrowserSession, type BrowserSession } from "../support/browser-session";
 
-let server: RunningServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
+let browser: BrowserSession;
+let server: BrowserSession["server"];
 
 beforeAll(async () => {
-  server = await startTestServer();
-  browser = await openBrowser();
+  browser = await openBrowserSession();
+  server = browser.server;
 });
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+afterAll(() => browser?.close());
 
 describe("accounts and projects in headless Chromium", () => {
   it("signs up with checked input, renames on the profile page, and pages, sorts, searches and deletes projects", async () => {

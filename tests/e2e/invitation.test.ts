@@ -4,20 +4,17 @@
 import { randomUUID } from "node:crypto";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openBrowser, screenshot } from "../support/browser";
-import { startTestServer, type RunningServer } from "../support/test-app";
+import { screenshot } from "../support/browser";
+import { openBrowserSession, type BrowserSession } from "../support/browser-session";
 
-let server: RunningServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
+let browser: BrowserSession;
+let server: BrowserSession["server"];
 
 beforeAll(async () => {
-  server = await startTestServer();
-  browser = await openBrowser();
+  browser = await openBrowserSession();
+  server = browser.server;
 });
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+afterAll(() => browser?.close());
 
 async function signIn(page: Page, email: string, password: string) {
   await page.getByLabel("E-mail address").fill(email);

@@ -1,18 +1,15 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openBrowser, screenshot } from "../support/browser";
-import { startTestServer, type RunningServer } from "../support/test-app";
+import { screenshot } from "../support/browser";
+import { openBrowserSession, type BrowserSession } from "../support/browser-session";
 
-let server: RunningServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
+let browser: BrowserSession;
+let server: BrowserSession["server"];
 
 beforeAll(async () => {
-  server = await startTestServer();
-  browser = await openBrowser();
+  browser = await openBrowserSession();
+  server = browser.server;
 });
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+afterAll(() => browser?.close());
 
 describe("application shell in headless Chromium", () => {
   it("renders the shell in the shipped Inter font and shows the database as up", async () => {
