@@ -3,8 +3,8 @@
 import type { Knex } from "knex";
 import { ReductionSearchParams, ReductionSearchResult } from "../../shared/schemas/reductions";
 import { recordAudit } from "../db/repositories/audit-log";
-import { verifyCertificate } from "../../shared/engine/certificates";
 import { insertReduction, setVerification } from "../db/repositories/reductions";
+import { checkCertificate } from "./check-certificate";
 import { statementKey } from "./statement-key";
 
 export interface FinishedRun { id: string; projectId: string; startedBy: string | null }
@@ -31,13 +31,7 @@ export async function storeSearchFindings(trx: Knex, run: FinishedRun, rawResult
     });
     // The independent verifier re-checks every finding before anyone sees it, so a search bug cannot vouch for itself.
     if (stored.isNew) {
-      const report = verifyCertificate(f.certificate);
-      await setVerification(trx, stored.id, {
-        isValid: report.valid,
-        message: report.valid ? `valid: ${report.statesChecked} states re-simulated when found` : report.problems.join("; "),
-        checkedAt: new Date().toISOString(),
-        checkedBy: null,
-      });
+      await setVerification(trx, stored.id, checkCertificate(f.certificate, null, " when found"));
     }
     ids.push(stored.id);
   }

@@ -3,7 +3,7 @@
 import { Router } from "express";
 import type { Knex } from "knex";
 import { z } from "zod";
-import { networkFromCertificate, networkToCertificate, verifyCertificate } from "../../shared/engine/certificates";
+import { networkFromCertificate, networkToCertificate } from "../../shared/engine/certificates";
 import { networkToDefinition, printRuleText } from "../../shared/engine/rules";
 import {
   Certificate,
@@ -13,7 +13,6 @@ import {
   ReductionParams,
   SaveTargetBody,
   SearchBody,
-  type Verification,
 } from "../../shared/schemas/reductions";
 import { recordAudit } from "../db/repositories/audit-log";
 import {
@@ -37,20 +36,11 @@ import { submitRun } from "../jobs/run-lifecycle";
 import type { RunQueue } from "../jobs/run-queue";
 import { networkSummary } from "../models/network-summary";
 import { latestRevisionNetwork, type RevisionNetwork } from "../reductions/revision-network";
+import { checkCertificate } from "../reductions/check-certificate";
 import { statementKey } from "../reductions/statement-key";
 
 const ProjectParams = z.object({ projectId: z.uuid() });
 const UploadBody = z.object({ sourceModelId: z.uuid(), targetModelId: z.uuid().optional(), certificate: Certificate });
-
-function verificationOf(certificate: unknown, checkedBy: { id: string; displayName: string } | null): Verification {
-  const report = verifyCertificate(certificate);
-  return {
-    isValid: report.valid,
-    message: report.valid ? `valid: ${report.statesChecked} states re-simulated` : report.problems.join("; "),
-    checkedAt: new Date().toISOString(),
-    checkedBy,
-  };
-}
 
 /** Largest sources the tabulating notions accept (2^22 states in typed arrays); block emulation has no such bound. */
 const MAX_TABULATED_SOURCE_NODES = 22;
@@ -129,7 +119,7 @@ export function reductionsRouter(deps: { db: Knex; queue: RunQueue; queueCap: nu
       }
       targetRevisionId = target.revisionId;
     }
-    const verification = verificationOf(body.certificate, { id: user.id, displayName: user.displayName });
+    const verification = checkCertificate(body.certificate, { id: user.id, displayName: user.displayName });
     if (!verification.isValid) throw new HttpError(400, "INVALID_CERTIFICATE", `The certificate does not verify: ${verification.message}`);
     const stored = await db.transaction(async (trx) => {
       const r = await insertReduction(trx, {
@@ -177,7 +167,7 @@ export function reductionsRouter(deps: { db: Knex; queue: RunQueue; queueCap: nu
     const state = body.decision === "approve" ? "approved" : "rejected";
     if (state === "approved") {
       // Approval puts the reduction into the model hierarchy, so it must still verify at this moment.
-      const verification = verificationOf(r.certificate, { id: user.id, displayName: user.displayName });
+      const verification = checkCertificate(r.certificate, { id: user.id, displayName: user.displayName });
       if (!verification.isValid) throw new HttpError(409, "INVALID_CERTIFICATE", `It cannot be approved: the certificate does not verify (${verification.message})`);
     }
     await db.transaction(async (trx) => {
@@ -192,7 +182,7 @@ export function reductionsRouter(deps: { db: Knex; queue: RunQueue; queueCap: nu
     const project = currentProject(req);
     const user = currentUser(req);
     const r = await load(project.id, String(req.params.reductionId));
-    const verification = verificationOf(r.certificate, { id: user.id, displayName: user.displayName });
+    const verification = checkCertificate(r.certificate, { id: user.id, displayName: user.displayName });
     await db.transaction(async (trx) => {
       await setVerification(trx, r.id, verification);
       await insertEvent(trx, { reductionId: r.id, actorId: user.id, kind: "verify", comment: "", outcome: { isValid: verification.isValid, message: verification.message } });
