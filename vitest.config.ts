@@ -9,9 +9,40 @@ import { aliases } from "./aliases.ts";
 export default defineConfig({
   test: {
     projects: [
-      { resolve: { alias: aliases }, test: { name: "unit", include: ["shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.ts"], environment: "node", testTimeout: 120_000, sequence: { groupOrder: 0 } } },
-      { resolve: { alias: aliases }, test: { name: "api", include: ["tests/api/**/*.test.ts"], environment: "node", testTimeout: 90_000, hookTimeout: 120_000, fileParallelism: false, sequence: { groupOrder: 1 } } },
-      { resolve: { alias: aliases }, test: { name: "e2e", include: ["tests/e2e/**/*.test.ts"], environment: "node", testTimeout: 120_000, hookTimeout: 180_000, fileParallelism: false, sequence: { groupOrder: 2 } } },
+      {
+        resolve: { alias: aliases },
+        test: {
+          name: "unit",
+          include: ["shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.ts"],
+          environment: "node",
+          testTimeout: 120_000,
+          sequence: { groupOrder: 0 },
+        },
+      },
+      {
+        resolve: { alias: aliases },
+        test: {
+          name: "api",
+          include: ["tests/api/**/*.test.ts"],
+          environment: "node",
+          testTimeout: 90_000,
+          hookTimeout: 120_000,
+          fileParallelism: false,
+          sequence: { groupOrder: 1 },
+        },
+      },
+      {
+        resolve: { alias: aliases },
+        test: {
+          name: "e2e",
+          include: ["tests/e2e/**/*.test.ts"],
+          environment: "node",
+          testTimeout: 120_000,
+          hookTimeout: 180_000,
+          fileParallelism: false,
+          sequence: { groupOrder: 2 },
+        },
+      },
     ],
   },
 });

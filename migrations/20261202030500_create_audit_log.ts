@@ -5,7 +5,12 @@ export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("audit_log", (t) => {
     t.bigIncrements("id", { primaryKey: false });
     t.primary(["id"], { constraintName: "audit_log_pkey" });
-    t.uuid("project_id").notNullable().references("id").inTable("projects").onDelete("CASCADE").withKeyName("audit_log_project_id_fkey");
+    t.uuid("project_id")
+      .notNullable()
+      .references("id")
+      .inTable("projects")
+      .onDelete("CASCADE")
+      .withKeyName("audit_log_project_id_fkey");
     t.uuid("actor_id").references("id").inTable("users").onDelete("SET NULL").withKeyName("audit_log_actor_id_fkey");
     t.text("actor_name").notNullable().defaultTo("");
     t.text("action").notNullable();

@@ -5,7 +5,12 @@ import type { Knex } from "knex";
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("models", (t) => {
     t.uuid("id").primary({ constraintName: "models_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("project_id").notNullable().references("id").inTable("projects").onDelete("CASCADE").withKeyName("models_project_id_fkey");
+    t.uuid("project_id")
+      .notNullable()
+      .references("id")
+      .inTable("projects")
+      .onDelete("CASCADE")
+      .withKeyName("models_project_id_fkey");
     t.text("name").notNullable();
     t.text("description").notNullable().defaultTo("");
     t.integer("latest_revision").notNullable().defaultTo(1);

@@ -5,7 +5,12 @@ import type { Knex } from "knex";
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("model_revisions", (t) => {
     t.uuid("id").primary({ constraintName: "model_revisions_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("model_id").notNullable().references("id").inTable("models").onDelete("CASCADE").withKeyName("model_revisions_model_id_fkey");
+    t.uuid("model_id")
+      .notNullable()
+      .references("id")
+      .inTable("models")
+      .onDelete("CASCADE")
+      .withKeyName("model_revisions_model_id_fkey");
     t.integer("revision").notNullable();
     t.jsonb("definition").notNullable();
     t.text("rule_text").notNullable();
@@ -14,7 +19,11 @@ export async function up(knex: Knex): Promise<void> {
     t.text("source").notNullable();
     t.jsonb("generator");
     t.text("message").notNullable().defaultTo("");
-    t.uuid("created_by").references("id").inTable("users").onDelete("SET NULL").withKeyName("model_revisions_created_by_fkey");
+    t.uuid("created_by")
+      .references("id")
+      .inTable("users")
+      .onDelete("SET NULL")
+      .withKeyName("model_revisions_created_by_fkey");
     t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.unique(["model_id", "revision"], { indexName: "model_revisions_model_id_revision_key" });
   });

@@ -4,7 +4,12 @@ import type { Knex } from "knex";
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("model_files", (t) => {
     t.uuid("id").primary({ constraintName: "model_files_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("revision_id").notNullable().references("id").inTable("model_revisions").onDelete("CASCADE").withKeyName("model_files_revision_id_fkey");
+    t.uuid("revision_id")
+      .notNullable()
+      .references("id")
+      .inTable("model_revisions")
+      .onDelete("CASCADE")
+      .withKeyName("model_files_revision_id_fkey");
     t.text("file_name").notNullable();
     t.text("media_type").notNullable();
     t.binary("bytes").notNullable();

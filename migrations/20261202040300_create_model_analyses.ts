@@ -5,7 +5,12 @@ import type { Knex } from "knex";
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("model_analyses", (t) => {
     t.uuid("id").primary({ constraintName: "model_analyses_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("revision_id").notNullable().references("id").inTable("model_revisions").onDelete("CASCADE").withKeyName("model_analyses_revision_id_fkey");
+    t.uuid("revision_id")
+      .notNullable()
+      .references("id")
+      .inTable("model_revisions")
+      .onDelete("CASCADE")
+      .withKeyName("model_analyses_revision_id_fkey");
     t.text("kind").notNullable();
     t.text("params_key").notNullable().defaultTo("");
     t.jsonb("result").notNullable();

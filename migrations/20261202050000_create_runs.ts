@@ -6,13 +6,28 @@ import type { Knex } from "knex";
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("runs", (t) => {
     t.uuid("id").primary({ constraintName: "runs_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("project_id").notNullable().references("id").inTable("projects").onDelete("CASCADE").withKeyName("runs_project_fkey");
+    t.uuid("project_id")
+      .notNullable()
+      .references("id")
+      .inTable("projects")
+      .onDelete("CASCADE")
+      .withKeyName("runs_project_fkey");
     // A stored result belongs to its revision: it goes when the revision goes.
-    t.uuid("model_revision_id").nullable().references("id").inTable("model_revisions").onDelete("CASCADE").withKeyName("runs_model_revision_fkey");
+    t.uuid("model_revision_id")
+      .nullable()
+      .references("id")
+      .inTable("model_revisions")
+      .onDelete("CASCADE")
+      .withKeyName("runs_model_revision_fkey");
     t.text("kind").notNullable();
     t.jsonb("params").notNullable();
     t.text("params_hash").notNullable();
-    t.uuid("started_by").nullable().references("id").inTable("users").onDelete("SET NULL").withKeyName("runs_started_by_fkey");
+    t.uuid("started_by")
+      .nullable()
+      .references("id")
+      .inTable("users")
+      .onDelete("SET NULL")
+      .withKeyName("runs_started_by_fkey");
     t.text("state").notNullable().defaultTo("queued");
     t.double("progress_fraction").notNullable().defaultTo(0);
     t.text("progress_phase").notNullable().defaultTo("queued");
@@ -28,13 +43,20 @@ export async function up(knex: Knex): Promise<void> {
     t.check("progress_fraction >= 0 and progress_fraction <= 1", [], "runs_progress_fraction_check");
     t.index(["project_id", "created_at"], "runs_project_created_idx");
   });
-  await knex.raw(`create unique index runs_reuse_key on runs (project_id, kind, coalesce(model_revision_id, '00000000-0000-0000-0000-000000000000'::uuid), params_hash) where state = 'succeeded'`);
+  await knex.raw(
+    `create unique index runs_reuse_key on runs (project_id, kind, coalesce(model_revision_id, '00000000-0000-0000-0000-000000000000'::uuid), params_hash) where state = 'succeeded'`,
+  );
 
   // One row per shard. The checkpoint (cursor + partial) is written together so a resumed shard never counts an
   // item twice; the lease and heartbeat say which worker holds it and whether that worker is still alive.
   await knex.schema.createTable("run_shards", (t) => {
     t.uuid("id").primary({ constraintName: "run_shards_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("run_id").notNullable().references("id").inTable("runs").onDelete("CASCADE").withKeyName("run_shards_run_fkey");
+    t.uuid("run_id")
+      .notNullable()
+      .references("id")
+      .inTable("runs")
+      .onDelete("CASCADE")
+      .withKeyName("run_shards_run_fkey");
     t.integer("shard_index").notNullable();
     t.jsonb("input").notNullable();
     t.text("state").notNullable().defaultTo("queued");
@@ -56,12 +78,22 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable("notifications", (t) => {
     t.uuid("id").primary({ constraintName: "notifications_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("user_id").notNullable().references("id").inTable("users").onDelete("CASCADE").withKeyName("notifications_user_fkey");
+    t.uuid("user_id")
+      .notNullable()
+      .references("id")
+      .inTable("users")
+      .onDelete("CASCADE")
+      .withKeyName("notifications_user_fkey");
     t.text("kind").notNullable();
     t.text("title").notNullable();
     t.text("body").notNullable();
     t.text("link").nullable();
-    t.uuid("run_id").nullable().references("id").inTable("runs").onDelete("SET NULL").withKeyName("notifications_run_fkey");
+    t.uuid("run_id")
+      .nullable()
+      .references("id")
+      .inTable("runs")
+      .onDelete("SET NULL")
+      .withKeyName("notifications_run_fkey");
     t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.timestamp("read_at", { useTz: true }).nullable();
     t.index(["user_id", "created_at"], "notifications_user_created_idx");

@@ -13,7 +13,11 @@ export async function up(knex: Knex): Promise<void> {
     t.integer("pair_count").notNullable();
     t.timestamp("computed_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.integer("duration_ms").notNullable();
-    t.uuid("computed_by").references("id").inTable("users").onDelete("SET NULL").withKeyName("eca_hierarchies_computed_by_fkey");
+    t.uuid("computed_by")
+      .references("id")
+      .inTable("users")
+      .onDelete("SET NULL")
+      .withKeyName("eca_hierarchies_computed_by_fkey");
     // The background run that produced the row, when there was one (no foreign key: runs are deleted independently).
     t.uuid("run_id");
     t.unique(["max_block", "time_mode", "radius"], { indexName: "eca_hierarchies_parameters_key" });
@@ -27,7 +31,12 @@ export async function up(knex: Knex): Promise<void> {
     add constraint eca_hierarchies_emulate_nothing_check check (jsonb_typeof(emulate_nothing) = 'array')`);
 
   await knex.schema.createTable("eca_hierarchy_pairs", (t) => {
-    t.uuid("hierarchy_id").notNullable().references("id").inTable("eca_hierarchies").onDelete("CASCADE").withKeyName("eca_hierarchy_pairs_hierarchy_id_fkey");
+    t.uuid("hierarchy_id")
+      .notNullable()
+      .references("id")
+      .inTable("eca_hierarchies")
+      .onDelete("CASCADE")
+      .withKeyName("eca_hierarchy_pairs_hierarchy_id_fkey");
     t.integer("source").notNullable();
     t.smallint("target").notNullable();
     t.smallint("min_block").notNullable();

@@ -7,19 +7,49 @@ import type { Knex } from "knex";
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("reductions", (t) => {
     t.uuid("id").primary({ constraintName: "reductions_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("project_id").notNullable().references("id").inTable("projects").onDelete("CASCADE").withKeyName("reductions_project_fkey");
-    t.uuid("source_revision_id").notNullable().references("id").inTable("model_revisions").onDelete("CASCADE").withKeyName("reductions_source_revision_fkey");
-    t.uuid("target_revision_id").nullable().references("id").inTable("model_revisions").onDelete("SET NULL").withKeyName("reductions_target_revision_fkey");
+    t.uuid("project_id")
+      .notNullable()
+      .references("id")
+      .inTable("projects")
+      .onDelete("CASCADE")
+      .withKeyName("reductions_project_fkey");
+    t.uuid("source_revision_id")
+      .notNullable()
+      .references("id")
+      .inTable("model_revisions")
+      .onDelete("CASCADE")
+      .withKeyName("reductions_source_revision_fkey");
+    t.uuid("target_revision_id")
+      .nullable()
+      .references("id")
+      .inTable("model_revisions")
+      .onDelete("SET NULL")
+      .withKeyName("reductions_target_revision_fkey");
     t.text("notion").notNullable();
     t.integer("time_scale").notNullable();
     t.integer("target_node_count").notNullable();
     t.text("target_key").notNullable();
     t.jsonb("certificate").notNullable();
     t.jsonb("summary").notNullable();
-    t.uuid("found_by").nullable().references("id").inTable("users").onDelete("SET NULL").withKeyName("reductions_found_by_fkey");
-    t.uuid("found_in_run_id").nullable().references("id").inTable("runs").onDelete("SET NULL").withKeyName("reductions_found_in_run_fkey");
+    t.uuid("found_by")
+      .nullable()
+      .references("id")
+      .inTable("users")
+      .onDelete("SET NULL")
+      .withKeyName("reductions_found_by_fkey");
+    t.uuid("found_in_run_id")
+      .nullable()
+      .references("id")
+      .inTable("runs")
+      .onDelete("SET NULL")
+      .withKeyName("reductions_found_in_run_fkey");
     t.text("review_state").notNullable().defaultTo("proposed");
-    t.uuid("decided_by").nullable().references("id").inTable("users").onDelete("SET NULL").withKeyName("reductions_decided_by_fkey");
+    t.uuid("decided_by")
+      .nullable()
+      .references("id")
+      .inTable("users")
+      .onDelete("SET NULL")
+      .withKeyName("reductions_decided_by_fkey");
     t.timestamp("decided_at", { useTz: true }).nullable();
     t.jsonb("last_verification").nullable();
     t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
@@ -34,8 +64,18 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable("reduction_events", (t) => {
     t.uuid("id").primary({ constraintName: "reduction_events_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("reduction_id").notNullable().references("id").inTable("reductions").onDelete("CASCADE").withKeyName("reduction_events_reduction_fkey");
-    t.uuid("actor_id").nullable().references("id").inTable("users").onDelete("SET NULL").withKeyName("reduction_events_actor_fkey");
+    t.uuid("reduction_id")
+      .notNullable()
+      .references("id")
+      .inTable("reductions")
+      .onDelete("CASCADE")
+      .withKeyName("reduction_events_reduction_fkey");
+    t.uuid("actor_id")
+      .nullable()
+      .references("id")
+      .inTable("users")
+      .onDelete("SET NULL")
+      .withKeyName("reduction_events_actor_fkey");
     t.text("kind").notNullable();
     t.text("comment").notNullable().defaultTo("");
     t.jsonb("outcome").nullable();
@@ -47,9 +87,24 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable("reduction_comments", (t) => {
     t.uuid("id").primary({ constraintName: "reduction_comments_pkey" }).defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("reduction_id").notNullable().references("id").inTable("reductions").onDelete("CASCADE").withKeyName("reduction_comments_reduction_fkey");
-    t.uuid("parent_id").nullable().references("id").inTable("reduction_comments").onDelete("CASCADE").withKeyName("reduction_comments_parent_fkey");
-    t.uuid("author_id").nullable().references("id").inTable("users").onDelete("SET NULL").withKeyName("reduction_comments_author_fkey");
+    t.uuid("reduction_id")
+      .notNullable()
+      .references("id")
+      .inTable("reductions")
+      .onDelete("CASCADE")
+      .withKeyName("reduction_comments_reduction_fkey");
+    t.uuid("parent_id")
+      .nullable()
+      .references("id")
+      .inTable("reduction_comments")
+      .onDelete("CASCADE")
+      .withKeyName("reduction_comments_parent_fkey");
+    t.uuid("author_id")
+      .nullable()
+      .references("id")
+      .inTable("users")
+      .onDelete("SET NULL")
+      .withKeyName("reduction_comments_author_fkey");
     t.text("body").notNullable();
     t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.check("char_length(btrim(body)) between 1 and 4000", [], "reduction_comments_body_check");

@@ -1,7 +1,13 @@
 import type { Knex } from "knex";
-import { cellularAutomaton } from "../shared/engine/generators";
-import { compileDefinition, networkToDefinition, printRuleText, readRuleText, type ModelDefinition } from "../shared/engine/rules";
-import type { ModelSource } from "../shared/schemas/models";
+import { cellularAutomaton } from "@shared/engine/generators";
+import {
+  compileDefinition,
+  networkToDefinition,
+  printRuleText,
+  readRuleText,
+  type ModelDefinition,
+} from "@shared/engine/rules";
+import type { ModelSource } from "@shared/schemas/models";
 import { networkSummary } from "../server/models/network-summary";
 
 // Demo models of the invented Glimmerfin alga (organism, genes and story are ours; every model says it is demo
@@ -9,8 +15,20 @@ import { networkSummary } from "../server/models/network-summary";
 const DEMO_PROJECT_ID = "00000000-0000-4000-8000-000000000001";
 const DEMO_NOTE = "Demo data: the Glimmerfin alga and its genes are invented.";
 
-interface DemoRevision { ruleText?: string; definition?: ModelDefinition; message?: string; source: ModelSource; generator?: Record<string, unknown> }
-interface DemoModel { id: string; name: string; description: string; author: string; revisions: DemoRevision[] }
+interface DemoRevision {
+  ruleText?: string;
+  definition?: ModelDefinition;
+  message?: string;
+  source: ModelSource;
+  generator?: Record<string, unknown>;
+}
+interface DemoModel {
+  id: string;
+  name: string;
+  description: string;
+  author: string;
+  revisions: DemoRevision[];
+}
 
 const BLOOM_V1 = `# Glimmerfin bloom switch: light and nitrate decide between blooming and the dormant cyst.
 Light' = Light
@@ -120,14 +138,22 @@ export const DEMO_MODELS: DemoModel[] = [
     name: "Glimmerfin cilia ring (rule 110, 12 cells)",
     description: `${DEMO_NOTE} The ring of cilia cells around the eyespot, modelled as elementary cellular automaton rule 110 on 12 cells.`,
     author: "modeler@demo.emulant.test",
-    revisions: [{ definition: networkToDefinition(cellularAutomaton(CILIA_RING)), source: "generator", generator: { ...CILIA_RING } }],
+    revisions: [
+      {
+        definition: networkToDefinition(cellularAutomaton(CILIA_RING)),
+        source: "generator",
+        generator: { ...CILIA_RING },
+      },
+    ],
   },
   {
     id: "00000000-0000-4000-8000-000000000306",
     name: "Glimmerfin tide ring (3 genes)",
     description: `${DEMO_NOTE} The three-gene repressor ring the tide clock was built around, written on its own.`,
     author: "modeler@demo.emulant.test",
-    revisions: [{ ruleText: "# Each tide gene represses the next.\nTk1' = !Tk3\nTk2' = !Tk1\nTk3' = !Tk2\n", source: "rules" }],
+    revisions: [
+      { ruleText: "# Each tide gene represses the next.\nTk1' = !Tk3\nTk2' = !Tk1\nTk3' = !Tk2\n", source: "rules" },
+    ],
   },
   {
     id: "00000000-0000-4000-8000-000000000307",
@@ -152,7 +178,14 @@ export async function seed(knex: Knex): Promise<void> {
     const author = (await knex("users").where({ email: m.author }).first("id")) as { id: string } | undefined;
     const authorId = author?.id ?? null;
     await knex("models")
-      .insert({ id: m.id, project_id: DEMO_PROJECT_ID, name: m.name, description: m.description, created_by: authorId, latest_revision: m.revisions.length })
+      .insert({
+        id: m.id,
+        project_id: DEMO_PROJECT_ID,
+        name: m.name,
+        description: m.description,
+        created_by: authorId,
+        latest_revision: m.revisions.length,
+      })
       .onConflict("id")
       .merge(["name", "description"]);
     for (const [i, r] of m.revisions.entries()) {

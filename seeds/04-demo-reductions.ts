@@ -1,8 +1,8 @@
 import type { Knex } from "knex";
-import { blockEmulationCertificate } from "../shared/engine/certificates";
-import { searchBlockEmulation } from "../shared/engine/emulation";
-import { compileDefinition } from "../shared/engine/rules";
-import type { Certificate } from "../shared/schemas/reductions";
+import { blockEmulationCertificate } from "@shared/engine/certificates";
+import { searchBlockEmulation } from "@shared/engine/emulation";
+import { compileDefinition } from "@shared/engine/rules";
+import type { Certificate } from "@shared/schemas/reductions";
 import { insertReduction, setVerification } from "../server/db/repositories/reductions";
 import { checkCertificate } from "../server/reductions/check-certificate";
 import { statementKey } from "../server/reductions/statement-key";
@@ -17,18 +17,31 @@ const TIDE_RING = "00000000-0000-4000-8000-000000000306";
 const TIDE_PULSE = "00000000-0000-4000-8000-000000000307";
 
 const statements = [
-  { source: TIDE_CLOCK, target: TIDE_RING, approve: "The paired Tk genes step exactly like the ring; checked the runs side by side." },
+  {
+    source: TIDE_CLOCK,
+    target: TIDE_RING,
+    approve: "The paired Tk genes step exactly like the ring; checked the runs side by side.",
+  },
   { source: TIDE_RING, target: TIDE_PULSE, approve: "All three genes in step are one oscillator." },
   { source: TIDE_CLOCK, target: TIDE_PULSE, approve: null },
 ];
 
 async function latestRevision(knex: Knex, modelId: string) {
-  return (await knex("model_revisions as r").join("models as m", "m.id", "r.model_id")
-    .where("m.id", modelId).andWhereRaw("r.revision = m.latest_revision").first("r.id", "r.definition")) as { id: string; definition: never } | undefined;
+  return (await knex("model_revisions as r")
+    .join("models as m", "m.id", "r.model_id")
+    .where("m.id", modelId)
+    .andWhereRaw("r.revision = m.latest_revision")
+    .first("r.id", "r.definition")) as { id: string; definition: never } | undefined;
 }
 
 export async function seed(knex: Knex): Promise<void> {
-  const users = new Map(((await knex("users").whereIn("email", ["modeler@demo.emulant.test", "reviewer@demo.emulant.test"]).select("id", "email")) as { id: string; email: string }[]).map((u) => [u.email, u.id]));
+  const users = new Map(
+    (
+      (await knex("users")
+        .whereIn("email", ["modeler@demo.emulant.test", "reviewer@demo.emulant.test"])
+        .select("id", "email")) as { id: string; email: string }[]
+    ).map((u) => [u.email, u.id]),
+  );
   const modeler = users.get("modeler@demo.emulant.test") ?? null;
   const reviewer = users.get("reviewer@demo.emulant.test") ?? null;
   for (const s of statements) {
@@ -42,14 +55,29 @@ export async function seed(knex: Knex): Promise<void> {
     const certificate = blockEmulationCertificate(sourceNet, targetNet, found.witness) as Certificate;
     await knex.transaction(async (trx) => {
       const stored = await insertReduction(trx, {
-        projectId: DEMO_PROJECT_ID, sourceRevisionId: source.id, targetRevisionId: target.id, notion: "block-emulation", timeScale: certificate.time,
-        certificate, targetKey: statementKey(certificate, target.id), flags: [], foundBy: modeler, foundInRunId: null,
+        projectId: DEMO_PROJECT_ID,
+        sourceRevisionId: source.id,
+        targetRevisionId: target.id,
+        notion: "block-emulation",
+        timeScale: certificate.time,
+        certificate,
+        targetKey: statementKey(certificate, target.id),
+        flags: [],
+        foundBy: modeler,
+        foundInRunId: null,
       });
       if (!stored.isNew) return;
       await setVerification(trx, stored.id, checkCertificate(certificate, null, " when found"));
       if (s.approve && reviewer) {
-        await trx("reductions").where({ id: stored.id }).update({ review_state: "approved", decided_by: reviewer, decided_at: trx.fn.now() });
-        await trx("reduction_events").insert({ reduction_id: stored.id, actor_id: reviewer, kind: "approve", comment: s.approve });
+        await trx("reductions")
+          .where({ id: stored.id })
+          .update({ review_state: "approved", decided_by: reviewer, decided_at: trx.fn.now() });
+        await trx("reduction_events").insert({
+          reduction_id: stored.id,
+          actor_id: reviewer,
+          kind: "approve",
+          comment: s.approve,
+        });
       }
     });
   }

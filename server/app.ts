@@ -70,7 +70,13 @@ export function createApp(deps: AppDeps): Express {
   api.use(authenticate(deps.db, deps.config.sessionSecret));
   api.use("/health", healthRouter(deps));
   const mailer = deps.mailer ?? createMailer(deps.config, deps.db, deps.log);
-  const accounts = { db: deps.db, log: deps.log, mailer, sessionSecret: deps.config.sessionSecret, publicUrl: deps.config.PUBLIC_URL };
+  const accounts = {
+    db: deps.db,
+    log: deps.log,
+    mailer,
+    sessionSecret: deps.config.sessionSecret,
+    publicUrl: deps.config.PUBLIC_URL,
+  };
   api.use("/auth", authRouter({ ...accounts, signInLimits: deps.signInLimits ?? defaultSignInLimits }));
   api.use("/users", usersRouter(accounts));
   api.use("/mailbox", mailboxRouter(accounts));
@@ -81,9 +87,15 @@ export function createApp(deps: AppDeps): Express {
   api.use("/projects/:projectId/audit", auditRouter(accounts));
   api.use("/projects/:projectId/models", modelsRouter(deps));
   const runQueue = deps.runQueue ?? lazyRunQueue(deps.config.DATABASE_URL, deps.log);
-  api.use("/projects/:projectId/runs", runsRouter({ db: deps.db, queue: runQueue, queueCap: loadRunSettings().queueCap }));
+  api.use(
+    "/projects/:projectId/runs",
+    runsRouter({ db: deps.db, queue: runQueue, queueCap: loadRunSettings().queueCap }),
+  );
   api.use("/notifications", notificationsRouter(deps));
-  api.use("/projects/:projectId/reductions", reductionsRouter({ db: deps.db, queue: runQueue, queueCap: loadRunSettings().queueCap }));
+  api.use(
+    "/projects/:projectId/reductions",
+    reductionsRouter({ db: deps.db, queue: runQueue, queueCap: loadRunSettings().queueCap }),
+  );
   api.use("/projects/:projectId/model-hierarchy", modelHierarchyRouter(deps));
   api.use("/automata", automataRouter(deps));
   api.use(notFound);

@@ -26,7 +26,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Invalid configuration:\n${lines.join("\n")}`);
   }
   const c = parsed.data;
-  if (c.NODE_ENV === "production" && !c.SESSION_SECRET) throw new Error("Invalid configuration:\n  SESSION_SECRET: required in production");
+  if (c.NODE_ENV === "production" && !c.SESSION_SECRET)
+    throw new Error("Invalid configuration:\n  SESSION_SECRET: required in production");
   return {
     ...c,
     publicUrl: c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}`,

@@ -29,7 +29,10 @@ const server: Server = app.listen(config.PORT, config.HOST, () => {
   if (config.WORKER_THREADS !== 0) {
     const settings = loadRunSettings(process.env, config.WORKER_THREADS);
     startRunWorker({ db, log, databaseUrl: config.DATABASE_URL, mailer, publicUrl: config.publicUrl, settings })
-      .then((w) => { runWorker = w; if (stopping) void w.stop(); })
+      .then((w) => {
+        runWorker = w;
+        if (stopping) void w.stop();
+      })
       .catch((err) => log.error({ err }, "the in-process run worker did not start; runs wait for `npm run worker`"));
   }
 });

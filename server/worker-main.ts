@@ -12,7 +12,14 @@ const log = createLogger(config);
 const db = createDb(config.DATABASE_URL, 6);
 const mailer = createMailer(config, db, log);
 const settings = loadRunSettings(process.env, config.WORKER_THREADS || undefined);
-const worker = await startRunWorker({ db, log, databaseUrl: config.DATABASE_URL, mailer, publicUrl: config.publicUrl, settings });
+const worker = await startRunWorker({
+  db,
+  log,
+  databaseUrl: config.DATABASE_URL,
+  mailer,
+  publicUrl: config.publicUrl,
+  settings,
+});
 process.stdout.write(`Emulant worker ${process.pid} is taking runs with ${settings.threads} thread(s)\n`);
 
 let stopping = false;

@@ -1,10 +1,13 @@
 // Turns the engine's hierarchy into the record the database stores: direct pairs with their minimal block size and
 // witness, plus the closure's composed pairs whose composed witness the engine's verifier confirmed.
-import { ecaHierarchy, type EcaHierarchy } from "../../shared/engine/block-emulation";
-import { HierarchyRunResult, type HierarchyPairWithWitness, type HierarchyParameters } from "../../shared/schemas/automata";
+import { ecaHierarchy, type EcaHierarchy } from "@shared/engine/block-emulation";
+import { HierarchyRunResult, type HierarchyPairWithWitness, type HierarchyParameters } from "@shared/schemas/automata";
 import type { FinishedHierarchyRun, HierarchyRecord } from "../db/repositories/eca-hierarchies";
 
-export function hierarchyPairsFromEngine(h: EcaHierarchy): { pairs: HierarchyPairWithWitness[]; unverifiedComposed: number } {
+export function hierarchyPairsFromEngine(h: EcaHierarchy): {
+  pairs: HierarchyPairWithWitness[];
+  unverifiedComposed: number;
+} {
   const pairs: HierarchyPairWithWitness[] = h.relations.map((r) => ({
     source: r.source,
     target: r.target,
@@ -18,7 +21,12 @@ export function hierarchyPairsFromEngine(h: EcaHierarchy): { pairs: HierarchyPai
       unverifiedComposed++;
       continue;
     }
-    pairs.push({ source: c.source, target: c.target, minBlock: c.block, witness: { time: c.block, encoding: { "0": c.u0, "1": c.u1 }, via: c.via } });
+    pairs.push({
+      source: c.source,
+      target: c.target,
+      minBlock: c.block,
+      witness: { time: c.block, encoding: { "0": c.u0, "1": c.u1 }, via: c.via },
+    });
   }
   pairs.sort((a, b) => a.source - b.source || a.target - b.target);
   return { pairs, unverifiedComposed };
@@ -27,7 +35,12 @@ export function hierarchyPairsFromEngine(h: EcaHierarchy): { pairs: HierarchyPai
 /** Computes the hierarchy in this thread (meant for block sizes up to INLINE_MAX_BLOCK, a few seconds). */
 export function computeHierarchyRecord(
   key: HierarchyParameters,
-  opts: { computedBy: string | null; runId?: string | null; onProgress?: (fraction: number, phase: string) => void; shouldStop?: () => boolean },
+  opts: {
+    computedBy: string | null;
+    runId?: string | null;
+    onProgress?: (fraction: number, phase: string) => void;
+    shouldStop?: () => boolean;
+  },
 ): HierarchyRecord {
   const started = performance.now();
   const h = ecaHierarchy(key.maxBlock, { onProgress: opts.onProgress, shouldStop: opts.shouldStop });
@@ -46,7 +59,14 @@ export function computeHierarchyRecord(
 
 /** What a background run hands over: the engine's hierarchy, restated as the pairs this table stores. */
 export function runResultFromEngine(h: EcaHierarchy, computeMs: number): HierarchyRunResult {
-  return { maxBlock: h.maxBlock, timeMode: "block", radius: 1, pairs: hierarchyPairsFromEngine(h).pairs, emulateNothing: h.emulateNothing, computeMs };
+  return {
+    maxBlock: h.maxBlock,
+    timeMode: "block",
+    radius: 1,
+    pairs: hierarchyPairsFromEngine(h).pairs,
+    emulateNothing: h.emulateNothing,
+    computeMs,
+  };
 }
 
 /** The record to store from a finished run, or null when its result is not a hierarchy for these parameters. */

@@ -9,14 +9,20 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe("cli-io", () => {
   it("parseCommandArgs returns option values and positionals and refuses unknown options", () => {
-    const { values, positionals } = parseCommandArgs(["m.rules", "--time", "3", "--json"], { time: { type: "string" }, json: { type: "boolean" } }, 1);
+    const { values, positionals } = parseCommandArgs(
+      ["m.rules", "--time", "3", "--json"],
+      { time: { type: "string" }, json: { type: "boolean" } },
+      1,
+    );
     expect(values).toEqual({ time: "3", json: true });
     expect(positionals).toEqual(["m.rules"]);
     expect(() => parseCommandArgs(["--fast"], { json: { type: "boolean" } })).toThrow(UsageError);
   });
 
   it("parseCommandArgs refuses an option given twice and positionals beyond the allowed count", () => {
-    expect(() => parseCommandArgs(["--to", "sbml", "--to", "csv"], { to: { type: "string" } })).toThrow(/--to is given twice/);
+    expect(() => parseCommandArgs(["--to", "sbml", "--to", "csv"], { to: { type: "string" } })).toThrow(
+      /--to is given twice/,
+    );
     expect(() => parseCommandArgs(["a", "b"], {}, 1)).toThrow(/unexpected argument "b"/);
     expect(() => parseCommandArgs(["a"], {}, 0)).toThrow(/unexpected argument "a"/);
   });

@@ -2,9 +2,9 @@
 // model file of any format with errors as file:line:column: reason, and the exit codes (2 usage, 1 failure).
 import { readFile } from "node:fs/promises";
 import { parseArgs, type ParseArgsConfig } from "node:util";
-import { EngineError, ParseError } from "../../shared/engine/errors";
-import type { BooleanNetwork } from "../../shared/engine/network";
-import { modelFormatOf, readModelText, type ReadModelResult } from "../../shared/formats/read-model";
+import { EngineError, ParseError } from "@shared/engine/errors";
+import type { BooleanNetwork } from "@shared/engine/network";
+import { modelFormatOf, readModelText, type ReadModelResult } from "@shared/formats/read-model";
 
 export class UsageError extends Error {}
 export class CommandError extends Error {}
@@ -25,16 +25,24 @@ export function parseCommandArgs<O extends Options>(args: string[], options: O, 
     if (seen.has(token.name)) throw new UsageError(`${token.rawName} is given twice`);
     seen.add(token.name);
   }
-  if (parsed.positionals.length > maxPositionals) throw new UsageError(`unexpected argument "${parsed.positionals[maxPositionals]}"`);
+  if (parsed.positionals.length > maxPositionals)
+    throw new UsageError(`unexpected argument "${parsed.positionals[maxPositionals]}"`);
   return { values: parsed.values, positionals: parsed.positionals };
 }
 
-export function integerOption(value: string | undefined, name: string, lo: number, hi: number, fallback?: number): number {
+export function integerOption(
+  value: string | undefined,
+  name: string,
+  lo: number,
+  hi: number,
+  fallback?: number,
+): number {
   if (value === undefined) {
     if (fallback === undefined) throw new UsageError(`${name} is required`);
     return fallback;
   }
-  if (!/^\d+$/.test(value) || Number(value) < lo || Number(value) > hi) throw new UsageError(`${name} must be an integer ${lo}..${hi}, got "${value}"`);
+  if (!/^\d+$/.test(value) || Number(value) < lo || Number(value) > hi)
+    throw new UsageError(`${name} must be an integer ${lo}..${hi}, got "${value}"`);
   return Number(value);
 }
 
@@ -49,7 +57,8 @@ export async function readTextFile(path: string): Promise<string> {
 /** The text of a model file after the checks every command makes on its name (present, known extension). */
 export async function readModelSource(path: string | undefined, what = "model file"): Promise<string> {
   if (!path) throw new UsageError(`the ${what} is missing`);
-  if (!modelFormatOf(path)) throw new UsageError(`cannot tell the format of "${path}" from its extension (.sbml, .xml, .rules, .txt, .csv)`);
+  if (!modelFormatOf(path))
+    throw new UsageError(`cannot tell the format of "${path}" from its extension (.sbml, .xml, .rules, .txt, .csv)`);
   return readTextFile(path);
 }
 

@@ -4,12 +4,16 @@ import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
 
-interface Command { run(args: string[]): Promise<number>; summary?: string }
+interface Command {
+  run(args: string[]): Promise<number>;
+  summary?: string;
+}
 
 const commandsDir = path.join(path.dirname(fileURLToPath(import.meta.url)), "commands");
 
 function commandNames(): string[] {
-  return fs.readdirSync(commandsDir)
+  return fs
+    .readdirSync(commandsDir)
     .filter((f) => f.endsWith(".ts") && !f.endsWith(".test.ts"))
     .map((f) => f.slice(0, -3))
     .sort();
@@ -39,7 +43,9 @@ async function main(): Promise<number> {
 }
 
 main().then(
-  (code) => { process.exitCode = code; },
+  (code) => {
+    process.exitCode = code;
+  },
   (err: unknown) => {
     process.stderr.write(`emulant: ${err instanceof Error ? err.message : String(err)}\n`);
     process.exitCode = 1;

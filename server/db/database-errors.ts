@@ -1,21 +1,56 @@
 // PostgreSQL errors become HTTP errors here and only here, keyed by SQLSTATE.
 import { HttpError } from "../http/errors";
 
-interface PgError { code?: string; constraint?: string; detail?: string }
+interface PgError {
+  code?: string;
+  constraint?: string;
+  detail?: string;
+}
 
 export function translateDatabaseError(err: unknown): HttpError | null {
   const e = err as PgError;
   if (typeof e?.code !== "string" || e.code.length !== 5) return null;
   switch (e.code) {
-    case "23505": return new HttpError(409, "CONFLICT", "That already exists", e.constraint ? { constraint: e.constraint } : undefined);
-    case "23503": return new HttpError(409, "CONFLICT", "It is still referenced or refers to something missing", e.constraint ? { constraint: e.constraint } : undefined);
-    case "23514": case "23502": case "22001": case "22P02": case "22003":
-      return new HttpError(400, "INVALID_INPUT", "The value does not fit the stored field", e.constraint ? { constraint: e.constraint } : undefined);
+    case "23505":
+      return new HttpError(
+        409,
+        "CONFLICT",
+        "That already exists",
+        e.constraint ? { constraint: e.constraint } : undefined,
+      );
+    case "23503":
+      return new HttpError(
+        409,
+        "CONFLICT",
+        "It is still referenced or refers to something missing",
+        e.constraint ? { constraint: e.constraint } : undefined,
+      );
+    case "23514":
+    case "23502":
+    case "22001":
+    case "22P02":
+    case "22003":
+      return new HttpError(
+        400,
+        "INVALID_INPUT",
+        "The value does not fit the stored field",
+        e.constraint ? { constraint: e.constraint } : undefined,
+      );
     // NUL characters (\u0000) cannot be stored in PostgreSQL text or jsonb.
-    case "22021": case "22P05":
-      return new HttpError(400, "INVALID_INPUT", "The text contains a character that cannot be stored (such as \\u0000)");
-    case "57P01": case "57P03": case "08006": case "08001": case "08003":
+    case "22021":
+    case "22P05":
+      return new HttpError(
+        400,
+        "INVALID_INPUT",
+        "The text contains a character that cannot be stored (such as \\u0000)",
+      );
+    case "57P01":
+    case "57P03":
+    case "08006":
+    case "08001":
+    case "08003":
       return new HttpError(503, "DATABASE_UNAVAILABLE", "The database is not reachable right now; try again shortly");
-    default: return null;
+    default:
+      return null;
   }
 }

@@ -10,7 +10,12 @@ export function createDb(databaseUrl: string, poolMax = 10): Knex {
     client: "pg",
     connection: databaseUrl,
     pool: { min: 0, max: poolMax },
-    migrations: { directory: path.join(root, "migrations"), extension: "ts", loadExtensions: [".ts"], tableName: "knex_migrations" },
+    migrations: {
+      directory: path.join(root, "migrations"),
+      extension: "ts",
+      loadExtensions: [".ts"],
+      tableName: "knex_migrations",
+    },
     seeds: { directory: path.join(root, "seeds"), extension: "ts", loadExtensions: [".ts"] },
   });
 }

@@ -3,15 +3,33 @@
 // capability), which also hides projects the caller is not in behind a 404 so their existence does not leak.
 import type { Request, RequestHandler } from "express";
 import type { Knex } from "knex";
-import { can, type Capability, type ProjectRole, type SiteRole } from "../../shared/types/roles";
+import { can, type Capability, type ProjectRole, type SiteRole } from "@shared/types/roles";
 import { roleOf } from "../db/repositories/memberships";
 import { findProject } from "../db/repositories/projects";
 import { findUserById } from "../db/repositories/users";
 import { HttpError } from "./errors";
-import { ROTATE_AFTER_SECONDS, SESSION_COOKIE, clearSessionCookie, readCookie, setSessionCookie, signSession, verifySession } from "./session";
+import {
+  ROTATE_AFTER_SECONDS,
+  SESSION_COOKIE,
+  clearSessionCookie,
+  readCookie,
+  setSessionCookie,
+  signSession,
+  verifySession,
+} from "./session";
 
-export interface AuthUser { id: string; email: string; displayName: string; siteRole: SiteRole }
-export interface ProjectContext { id: string; name: string; archived: boolean; role: ProjectRole | null }
+export interface AuthUser {
+  id: string;
+  email: string;
+  displayName: string;
+  siteRole: SiteRole;
+}
+export interface ProjectContext {
+  id: string;
+  name: string;
+  archived: boolean;
+  role: ProjectRole | null;
+}
 
 declare module "express-serve-static-core" {
   interface Request {
@@ -42,7 +60,8 @@ export function authenticate(db: Knex, sessionSecret: string): RequestHandler {
     }
     req.user = { id: user.id, email: user.email, displayName: user.displayName, siteRole: user.siteRole };
     const ageSeconds = Math.floor(Date.now() / 1000) - claims.issuedAt;
-    if (ageSeconds > ROTATE_AFTER_SECONDS) setSessionCookie(req, res, await signSession(sessionSecret, user.id, user.sessionVersion));
+    if (ageSeconds > ROTATE_AFTER_SECONDS)
+      setSessionCookie(req, res, await signSession(sessionSecret, user.id, user.sessionVersion));
     next();
   };
 }
@@ -54,7 +73,8 @@ export const requireUser: RequestHandler = (req, _res, next) => {
 
 export const requireSiteAdmin: RequestHandler = (req, _res, next) => {
   if (!req.user) return next(new HttpError(401, "UNAUTHENTICATED", "Sign in to continue"));
-  if (req.user.siteRole !== "admin") return next(new HttpError(403, "FORBIDDEN", "Only site administrators may do this"));
+  if (req.user.siteRole !== "admin")
+    return next(new HttpError(403, "FORBIDDEN", "Only site administrators may do this"));
   next();
 };
 
@@ -81,7 +101,9 @@ export function projectAccess(db: Knex, capability: Capability): RequestHandler 
       return next(new HttpError(403, "FORBIDDEN", `Your role in this project (${role ?? "none"}) does not allow this`));
     }
     if (project.archived && contentWrites.has(capability)) {
-      return next(new HttpError(409, "PROJECT_ARCHIVED", "This project is archived; restore it before changing its content"));
+      return next(
+        new HttpError(409, "PROJECT_ARCHIVED", "This project is archived; restore it before changing its content"),
+      );
     }
     req.project = { id: project.id, name: project.name, archived: project.archived, role };
     next();

@@ -30,6 +30,8 @@ describe("originCheck", () => {
     }
     expect(run("GET", { host: "127.0.0.1:3000", origin: "https://evil.example" })).toBeNull();
     // A look-alike that only shares a prefix is still foreign.
-    expect(run("POST", { host: "127.0.0.1:3000", origin: "http://127.0.0.1:3000.evil.example" })).toMatchObject({ code: "BAD_ORIGIN" });
+    expect(run("POST", { host: "127.0.0.1:3000", origin: "http://127.0.0.1:3000.evil.example" })).toMatchObject({
+      code: "BAD_ORIGIN",
+    });
   });
 });

@@ -6,12 +6,16 @@ describe("hashPassword / verifyPassword", () => {
   it("verifyPassword accepts the hashed password and refuses any other", async () => {
     // scrypt costs ~0.1 s per call by design, so few runs.
     await fc.assert(
-      fc.asyncProperty(fc.string({ minLength: 1, maxLength: 40 }), fc.string({ minLength: 1, maxLength: 40 }), async (password, other) => {
-        fc.pre(password.normalize("NFKC") !== other.normalize("NFKC"));
-        const stored = await hashPassword(password);
-        expect(await verifyPassword(password, stored)).toBe(true);
-        expect(await verifyPassword(other, stored)).toBe(false);
-      }),
+      fc.asyncProperty(
+        fc.string({ minLength: 1, maxLength: 40 }),
+        fc.string({ minLength: 1, maxLength: 40 }),
+        async (password, other) => {
+          fc.pre(password.normalize("NFKC") !== other.normalize("NFKC"));
+          const stored = await hashPassword(password);
+          expect(await verifyPassword(password, stored)).toBe(true);
+          expect(await verifyPassword(other, stored)).toBe(false);
+        },
+      ),
       { seed: 20261202, numRuns: 6 },
     );
   });

@@ -9,7 +9,9 @@ const maxmem = 64 * 1024 * 1024;
 
 function scrypt(password: string, salt: Buffer, options: ScryptOptions): Promise<Buffer> {
   return new Promise((resolve, reject) =>
-    scryptCallback(password.normalize("NFKC"), salt, keyLength, { ...options, maxmem }, (err, key) => (err ? reject(err) : resolve(key))),
+    scryptCallback(password.normalize("NFKC"), salt, keyLength, { ...options, maxmem }, (err, key) =>
+      err ? reject(err) : resolve(key),
+    ),
   );
 }
 

@@ -18,7 +18,13 @@ export const defaultSignInLimits: SignInLimits = { windowMs: 15 * 60 * 1000, per
 function tooMany(windowMs: number): RequestHandler {
   const minutes = Math.max(1, Math.round(windowMs / 60_000));
   return (_req, _res, next) =>
-    next(new HttpError(429, "RATE_LIMITED", `Too many failed sign-in attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`));
+    next(
+      new HttpError(
+        429,
+        "RATE_LIMITED",
+        `Too many failed sign-in attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`,
+      ),
+    );
 }
 
 export function signInRateLimits(limits: SignInLimits): RequestHandler[] {

@@ -4,7 +4,9 @@ import { randomUUID } from "node:crypto";
 import type { Logger } from "pino";
 
 declare module "express-serve-static-core" {
-  interface Request { id?: string }
+  interface Request {
+    id?: string;
+  }
 }
 
 export function requestLog(log: Logger): RequestHandler {
@@ -14,7 +16,16 @@ export function requestLog(log: Logger): RequestHandler {
     const started = process.hrtime.bigint();
     res.on("finish", () => {
       const ms = Number(process.hrtime.bigint() - started) / 1e6;
-      log.info({ requestId: req.id, method: req.method, path: req.originalUrl.split("?")[0], status: res.statusCode, ms: Math.round(ms) }, "request");
+      log.info(
+        {
+          requestId: req.id,
+          method: req.method,
+          path: req.originalUrl.split("?")[0],
+          status: res.statusCode,
+          ms: Math.round(ms),
+        },
+        "request",
+      );
     });
     next();
   };

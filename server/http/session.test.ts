@@ -25,13 +25,17 @@ describe("signSession / verifySession", () => {
   it("verifySession refuses any single-character change to a valid token", async () => {
     const token = await signSession(secret, userId, 1);
     await fc.assert(
-      fc.asyncProperty(fc.nat({ max: token.length - 1 }), fc.constantFrom(..."ABCxyz019-_."), async (index, replacement) => {
-        fc.pre(token[index] !== replacement);
-        const tampered = token.slice(0, index) + replacement + token.slice(index + 1);
-        // Base64url's last character can carry unused bits, so a change there may decode to the same bytes.
-        const verified = await verifySession(secret, tampered);
-        if (verified) expect(index).toBe(token.length - 1);
-      }),
+      fc.asyncProperty(
+        fc.nat({ max: token.length - 1 }),
+        fc.constantFrom(..."ABCxyz019-_."),
+        async (index, replacement) => {
+          fc.pre(token[index] !== replacement);
+          const tampered = token.slice(0, index) + replacement + token.slice(index + 1);
+          // Base64url's last character can carry unused bits, so a change there may decode to the same bytes.
+          const verified = await verifySession(secret, tampered);
+          if (verified) expect(index).toBe(token.length - 1);
+        },
+      ),
       { seed: 20261202, numRuns: 300 },
     );
   });

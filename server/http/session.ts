@@ -8,11 +8,20 @@ export const SESSION_COOKIE = "emulant_session";
 export const SESSION_TTL_SECONDS = 8 * 60 * 60;
 export const ROTATE_AFTER_SECONDS = 60 * 60;
 
-export interface SessionClaims { userId: string; sessionVersion: number; issuedAt: number }
+export interface SessionClaims {
+  userId: string;
+  sessionVersion: number;
+  issuedAt: number;
+}
 
 const encoder = new TextEncoder();
 
-export async function signSession(secret: string, userId: string, sessionVersion: number, nowSeconds = Math.floor(Date.now() / 1000)): Promise<string> {
+export async function signSession(
+  secret: string,
+  userId: string,
+  sessionVersion: number,
+  nowSeconds = Math.floor(Date.now() / 1000),
+): Promise<string> {
   return new SignJWT({ sv: sessionVersion })
     .setProtectedHeader({ alg: "HS256" })
     .setSubject(userId)
@@ -26,7 +35,8 @@ export async function signSession(secret: string, userId: string, sessionVersion
 export async function verifySession(secret: string, token: string): Promise<SessionClaims | null> {
   try {
     const { payload } = await jwtVerify(token, encoder.encode(secret), { algorithms: ["HS256"], issuer: "emulant" });
-    if (typeof payload.sub !== "string" || typeof payload.sv !== "number" || typeof payload.iat !== "number") return null;
+    if (typeof payload.sub !== "string" || typeof payload.sv !== "number" || typeof payload.iat !== "number")
+      return null;
     return { userId: payload.sub, sessionVersion: payload.sv, issuedAt: payload.iat };
   } catch {
     return null;

@@ -3,7 +3,11 @@ import type { RequestHandler } from "express";
 import type { z } from "zod";
 import { HttpError } from "./errors";
 
-interface Schemas { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType }
+interface Schemas {
+  params?: z.ZodType;
+  query?: z.ZodType;
+  body?: z.ZodType;
+}
 
 export function validate(schemas: Schemas): RequestHandler {
   return (req, _res, next) => {

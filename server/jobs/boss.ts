@@ -5,14 +5,29 @@ import type { Logger } from "pino";
 
 export const SHARD_QUEUE = "run-shard";
 
-export interface ShardJobData { runId: string; shardId: string }
+export interface ShardJobData {
+  runId: string;
+  shardId: string;
+}
 
 export async function startBoss(databaseUrl: string, log: Logger, opts: { supervise: boolean }): Promise<PgBoss> {
-  const boss = new PgBoss({ connectionString: databaseUrl, schema: "pgboss", max: 4, supervise: opts.supervise, schedule: false });
+  const boss = new PgBoss({
+    connectionString: databaseUrl,
+    schema: "pgboss",
+    max: 4,
+    supervise: opts.supervise,
+    schedule: false,
+  });
   // Without a listener an 'error' event would crash the process; during an outage pg-boss reports every failed poll.
   boss.on("error", (err) => log.warn({ err: { message: (err as Error).message } }, "job queue error"));
   await boss.start();
-  await boss.createQueue(SHARD_QUEUE, { name: SHARD_QUEUE, retryLimit: 5, retryDelay: 2, retryBackoff: true, expireInSeconds: 6 * 3600 });
+  await boss.createQueue(SHARD_QUEUE, {
+    name: SHARD_QUEUE,
+    retryLimit: 5,
+    retryDelay: 2,
+    retryBackoff: true,
+    expireInSeconds: 6 * 3600,
+  });
   return boss;
 }
 
@@ -22,13 +37,24 @@ export async function sendShardJob(boss: PgBoss, data: ShardJobData, startAfterS
   return id;
 }
 
-const transientCodes = new Set(["ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT", "57P01", "57P02", "57P03", "53300"]);
+const transientCodes = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "EPIPE",
+  "ETIMEDOUT",
+  "57P01",
+  "57P02",
+  "57P03",
+  "53300",
+]);
 
 /** Errors of a database that is away for a moment (restart, failover, full connection slots), not of our SQL. */
 export function isTransientDatabaseError(err: unknown): boolean {
   const e = err as { code?: string; message?: string; name?: string };
   if (e?.code && (transientCodes.has(e.code) || e.code.startsWith("08"))) return true;
-  return /Connection terminated|connection timeout|Timeout acquiring a connection|server closed the connection|terminating connection/i.test(e?.message ?? "");
+  return /Connection terminated|connection timeout|Timeout acquiring a connection|server closed the connection|terminating connection/i.test(
+    e?.message ?? "",
+  );
 }
 
 /** Retries a database step through a short outage (PostgreSQL restarting): up to ~60 s with backoff. */

@@ -2,12 +2,18 @@
 // as invitations. Short runs notify nobody (the person is still looking at the page).
 import type { Knex } from "knex";
 import type { Logger } from "pino";
-import type { Run } from "../../shared/schemas/runs";
+import type { Run } from "@shared/schemas/runs";
 import { insertNotification } from "../db/repositories/notifications";
 import { findUserById } from "../db/repositories/users";
 import type { Mailer } from "../mail/mailer";
 
-export interface NotifyDeps { db: Knex; log: Logger; mailer: Mailer | null; publicUrl: string; notifyAfterSeconds: number }
+export interface NotifyDeps {
+  db: Knex;
+  log: Logger;
+  mailer: Mailer | null;
+  publicUrl: string;
+  notifyAfterSeconds: number;
+}
 
 export async function notifyRunFinished(deps: NotifyDeps, run: Run): Promise<void> {
   if (!run.startedBy || !run.startedAt || !run.finishedAt) return;
@@ -17,14 +23,26 @@ export async function notifyRunFinished(deps: NotifyDeps, run: Run): Promise<voi
   const link = `/projects/${run.projectId}/runs/${run.id}`;
   const verb = run.state === "succeeded" ? "finished" : "failed";
   const title = `Your ${run.kind} run ${verb}`;
-  const body = run.state === "succeeded"
-    ? `The ${run.kind} run you started finished after ${formatSeconds(seconds)}.`
-    : `The ${run.kind} run you started failed after ${formatSeconds(seconds)}: ${run.error?.message ?? "unknown error"}.`;
-  await insertNotification(deps.db, { userId: run.startedBy, kind: `run.${run.state}`, title, body, link, runId: run.id });
+  const body =
+    run.state === "succeeded"
+      ? `The ${run.kind} run you started finished after ${formatSeconds(seconds)}.`
+      : `The ${run.kind} run you started failed after ${formatSeconds(seconds)}: ${run.error?.message ?? "unknown error"}.`;
+  await insertNotification(deps.db, {
+    userId: run.startedBy,
+    kind: `run.${run.state}`,
+    title,
+    body,
+    link,
+    runId: run.id,
+  });
   const user = await findUserById(deps.db, run.startedBy);
   if (!user || !deps.mailer) return;
   try {
-    await deps.mailer.send({ to: user.email, subject: `Emulant: ${title}`, text: `Hello ${user.displayName},\n\n${body}\n\nOpen it: ${deps.publicUrl}${link}\n` });
+    await deps.mailer.send({
+      to: user.email,
+      subject: `Emulant: ${title}`,
+      text: `Hello ${user.displayName},\n\n${body}\n\nOpen it: ${deps.publicUrl}${link}\n`,
+    });
   } catch (err) {
     // The in-app notification is stored; a mail failure must not fail the run.
     deps.log.warn({ err: { message: (err as Error).message }, runId: run.id }, "run notification e-mail failed");

@@ -21,7 +21,10 @@ export interface RunKindDefinition<P = unknown> {
   afterMerge?: AfterMerge;
 }
 
-export interface MergeTaskInput { partials: unknown[]; params: unknown }
+export interface MergeTaskInput {
+  partials: unknown[];
+  params: unknown;
+}
 
 const tasksDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../workers/tasks");
 export const taskFile = (name: string) => path.join(tasksDir, `${name}.ts`);

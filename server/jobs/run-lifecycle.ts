@@ -2,29 +2,55 @@
 // lives here rather than in the router. Workers notice cancellation and deletion at their next heartbeat.
 import { createHash } from "node:crypto";
 import type { Knex } from "knex";
-import type { Run, StartRunBody } from "../../shared/schemas/runs";
+import type { Run, StartRunBody } from "@shared/schemas/runs";
 import { setShardJob } from "../db/repositories/run-shards";
-import { countUnfinishedRuns, deleteRun, findReusableRun, finishRun, getRun, insertRun, resetRunForRetry, revisionRuleText, tryStartRun } from "../db/repositories/runs";
+import {
+  countUnfinishedRuns,
+  deleteRun,
+  findReusableRun,
+  finishRun,
+  getRun,
+  insertRun,
+  resetRunForRetry,
+  revisionRuleText,
+  tryStartRun,
+} from "../db/repositories/runs";
 import { runKind } from "./kinds";
 import { RunRequestError } from "./run-errors";
 import type { RunQueue } from "./run-queue";
 
-export interface LifecycleDeps { db: Knex; queue: RunQueue; queueCap: number }
+export interface LifecycleDeps {
+  db: Knex;
+  queue: RunQueue;
+  queueCap: number;
+}
 
 /** Key order must not change the hash: objects are written with sorted keys. */
 export function paramsHash(params: unknown): string {
   const canonical = (v: unknown): unknown =>
-    Array.isArray(v) ? v.map(canonical)
-      : v && typeof v === "object" ? Object.fromEntries(Object.keys(v).sort().map((k) => [k, canonical((v as Record<string, unknown>)[k])]))
+    Array.isArray(v)
+      ? v.map(canonical)
+      : v && typeof v === "object"
+        ? Object.fromEntries(
+            Object.keys(v)
+              .sort()
+              .map((k) => [k, canonical((v as Record<string, unknown>)[k])]),
+          )
         : v;
-  return createHash("sha256").update(JSON.stringify(canonical(params))).digest("hex");
+  return createHash("sha256")
+    .update(JSON.stringify(canonical(params)))
+    .digest("hex");
 }
 
-export async function submitRun(deps: LifecycleDeps, req: { projectId: string; startedBy: string | null; body: StartRunBody }): Promise<{ run: Run; reused: boolean }> {
+export async function submitRun(
+  deps: LifecycleDeps,
+  req: { projectId: string; startedBy: string | null; body: StartRunBody },
+): Promise<{ run: Run; reused: boolean }> {
   const kind = runKind(req.body.kind);
   if (!kind) throw new RunRequestError(400, "UNKNOWN_KIND", `There is no run kind "${req.body.kind}"`);
   const parsed = kind.params.safeParse(req.body.params);
-  if (!parsed.success) throw new RunRequestError(400, "INVALID_INPUT", `params: ${parsed.error.issues[0]?.message ?? "invalid"}`);
+  if (!parsed.success)
+    throw new RunRequestError(400, "INVALID_INPUT", `params: ${parsed.error.issues[0]?.message ?? "invalid"}`);
   const params = parsed.data;
   const modelRevisionId = req.body.modelRevisionId ?? null;
   let revision: { ruleText: string } | null = null;
@@ -34,18 +60,32 @@ export async function submitRun(deps: LifecycleDeps, req: { projectId: string; s
     revision = { ruleText };
   }
   const hash = paramsHash(params);
-  const stored = await findReusableRun(deps.db, { projectId: req.projectId, kind: kind.kind, modelRevisionId, paramsHash: hash });
+  const stored = await findReusableRun(deps.db, {
+    projectId: req.projectId,
+    kind: kind.kind,
+    modelRevisionId,
+    paramsHash: hash,
+  });
   if (stored) return { run: stored, reused: true };
   const unfinished = await countUnfinishedRuns(deps.db, req.projectId);
   if (unfinished >= deps.queueCap) {
-    throw new RunRequestError(429, "QUEUE_FULL",
+    throw new RunRequestError(
+      429,
+      "QUEUE_FULL",
       `This project already has ${unfinished} runs queued or running, the most it may have at once (${deps.queueCap}). ` +
-        "Wait for some to finish, or cancel some, then start this run again.");
+        "Wait for some to finish, or cancel some, then start this run again.",
+    );
   }
   const shardInputs = kind.plan(params, revision);
   const { run, shardIds } = await insertRun(deps.db, {
-    projectId: req.projectId, modelRevisionId, kind: kind.kind, params, paramsHash: hash, startedBy: req.startedBy,
-    timeLimitSeconds: kind.timeLimitSeconds, shardInputs,
+    projectId: req.projectId,
+    modelRevisionId,
+    kind: kind.kind,
+    params,
+    paramsHash: hash,
+    startedBy: req.startedBy,
+    timeLimitSeconds: kind.timeLimitSeconds,
+    shardInputs,
   });
   await enqueueShards(deps, run.id, shardIds);
   return { run, reused: false };
@@ -60,8 +100,15 @@ async function enqueueShards(deps: LifecycleDeps, runId: string, shardIds: strin
 }
 
 export async function cancelRun(deps: LifecycleDeps, run: Run, by: { displayName: string }): Promise<Run> {
-  const cancelled = await finishRun(deps.db, run.id, "cancelled", { error: { code: "CANCELLED", message: `Cancelled by ${by.displayName}` } });
-  if (!cancelled) throw new RunRequestError(409, "RUN_FINISHED", `This run has already ${run.state === "succeeded" ? "succeeded" : "ended"}; there is nothing to cancel`);
+  const cancelled = await finishRun(deps.db, run.id, "cancelled", {
+    error: { code: "CANCELLED", message: `Cancelled by ${by.displayName}` },
+  });
+  if (!cancelled)
+    throw new RunRequestError(
+      409,
+      "RUN_FINISHED",
+      `This run has already ${run.state === "succeeded" ? "succeeded" : "ended"}; there is nothing to cancel`,
+    );
   return (await getRun(deps.db, run.id)) ?? cancelled;
 }
 

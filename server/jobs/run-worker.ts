@@ -9,10 +9,20 @@ import type { Knex } from "knex";
 import type PgBoss from "pg-boss";
 import type { Piscina } from "piscina";
 import type { Logger } from "pino";
-import { isRunFinished, type Run, type RunError } from "../../shared/schemas/runs";
+import { isRunFinished, type Run, type RunError } from "@shared/schemas/runs";
 import {
-  claimShard, completeShard, mergeRunOnce, recordShardProgress, releaseShard, requeueStaleShard, runsAwaitingMerge,
-  setShardJob, shardsOf, shardsWithoutJob, staleShards, type Shard,
+  claimShard,
+  completeShard,
+  mergeRunOnce,
+  recordShardProgress,
+  releaseShard,
+  requeueStaleShard,
+  runsAwaitingMerge,
+  setShardJob,
+  shardsOf,
+  shardsWithoutJob,
+  staleShards,
+  type Shard,
 } from "../db/repositories/run-shards";
 import { finishRun, getRun, refreshRunProgress, runState, tryStartRun } from "../db/repositories/runs";
 import type { Mailer } from "../mail/mailer";
@@ -57,7 +67,10 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
   };
   const notify = async (run: Run) => {
     try {
-      await notifyRunFinished({ db, log, mailer: deps.mailer, publicUrl: deps.publicUrl, notifyAfterSeconds: settings.notifyAfterSeconds }, run);
+      await notifyRunFinished(
+        { db, log, mailer: deps.mailer, publicUrl: deps.publicUrl, notifyAfterSeconds: settings.notifyAfterSeconds },
+        run,
+      );
     } catch (err) {
       log.warn({ err: { message: (err as Error).message }, runId: run.id }, "run notification failed");
     }
@@ -74,10 +87,17 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
       if (shards.some((s) => s.state !== "done")) return;
       let out: { ok: true; result: unknown } | { ok: false; error: RunError };
       try {
-        out = await pool.run({ partials: shards.map((s) => s.partial), params } satisfies MergeTaskInput, { filename: kind.mergeTaskFile });
+        out = await pool.run({ partials: shards.map((s) => s.partial), params } satisfies MergeTaskInput, {
+          filename: kind.mergeTaskFile,
+        });
       } catch (err) {
         const oom = (err as { code?: string }).code === "ERR_WORKER_OUT_OF_MEMORY";
-        out = { ok: false, error: oom ? { code: "MEMORY_LIMIT", message: `Merging needed more than ${settings.workerMemoryMb} MB of memory` } : { code: "MERGE_FAILED", message: (err as Error).message } };
+        out = {
+          ok: false,
+          error: oom
+            ? { code: "MEMORY_LIMIT", message: `Merging needed more than ${settings.workerMemoryMb} MB of memory` }
+            : { code: "MERGE_FAILED", message: (err as Error).message },
+        };
       }
       if (!out.ok) return finishAndNotify(runId, "failed", out.error);
       const merged = out.result;
@@ -95,7 +115,11 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
     const run = await retrying("read run", log, () => getRun(db, runId));
     if (!run || isRunFinished(run.state)) return;
     const kind = runKind(run.kind);
-    if (!kind) return finishAndNotify(runId, "failed", { code: "UNKNOWN_KIND", message: `This worker does not know run kind "${run.kind}"` });
+    if (!kind)
+      return finishAndNotify(runId, "failed", {
+        code: "UNKNOWN_KIND",
+        message: `This worker does not know run kind "${run.kind}"`,
+      });
     const start = await retrying("start run", log, () => tryStartRun(db, runId, settings.projectConcurrency));
     if (start === "finished") return;
     if (start === "wait") {
@@ -104,13 +128,21 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
       return;
     }
     const lease = randomUUID();
-    const shard = await retrying("claim shard", log, () => claimShard(db, shardId, lease, job.id, settings.staleSeconds, workerName));
+    const shard = await retrying("claim shard", log, () =>
+      claimShard(db, shardId, lease, job.id, settings.staleSeconds, workerName),
+    );
     // Done already, or held by a live worker: this job is a duplicate and has nothing to do.
     if (!shard) return;
     await executeShard(run, kind, shard, lease, job);
   }
 
-  async function executeShard(run: Run, kind: RunKindDefinition<unknown>, shard: Shard, lease: string, job: PgBoss.JobWithMetadata<ShardJobData>): Promise<void> {
+  async function executeShard(
+    run: Run,
+    kind: RunKindDefinition<unknown>,
+    shard: Shard,
+    lease: string,
+    job: PgBoss.JobWithMetadata<ShardJobData>,
+  ): Promise<void> {
     const stopFlag = new Int32Array(new SharedArrayBuffer(4));
     const stop = (reason: number) => Atomics.compareExchange(stopFlag, 0, StopReason.none, reason);
     const { port1, port2 } = new MessageChannel();
@@ -132,7 +164,8 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
           await refreshRunProgress(db, run.id, latest.phase);
           const st = await runState(db, run.id);
           if (!st || st.state !== "running") stop(StopReason.cancelled);
-          else if (st.startedAt && st.now.getTime() - st.startedAt.getTime() > st.timeLimitSeconds * 1000) stop(StopReason.timeLimit);
+          else if (st.startedAt && st.now.getTime() - st.startedAt.getTime() > st.timeLimitSeconds * 1000)
+            stop(StopReason.timeLimit);
         } catch (err) {
           // The database is away (restarting?): keep computing, and write this checkpoint next time unless a newer one came.
           checkpoint ??= cp;
@@ -171,15 +204,24 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
       return;
     }
     if (reason === StopReason.timeLimit) {
-      return finishAndNotify(run.id, "failed", { code: "TIME_LIMIT", message: `The run exceeded its time limit of ${Math.round(run.timeLimitSeconds / 60)} minutes` });
+      return finishAndNotify(run.id, "failed", {
+        code: "TIME_LIMIT",
+        message: `The run exceeded its time limit of ${Math.round(run.timeLimitSeconds / 60)} minutes`,
+      });
     }
     if (thrown !== undefined) {
       const code = (thrown as { code?: string }).code;
       if (code === "ERR_WORKER_OUT_OF_MEMORY") {
-        return finishAndNotify(run.id, "failed", { code: "MEMORY_LIMIT", message: `The computation needed more than ${settings.workerMemoryMb} MB of memory` });
+        return finishAndNotify(run.id, "failed", {
+          code: "MEMORY_LIMIT",
+          message: `The computation needed more than ${settings.workerMemoryMb} MB of memory`,
+        });
       }
       if (job.retryCount >= job.retryLimit) {
-        return finishAndNotify(run.id, "failed", { code: "WORKER_ERROR", message: `A shard failed ${job.retryCount + 1} times: ${(thrown as Error).message}` });
+        return finishAndNotify(run.id, "failed", {
+          code: "WORKER_ERROR",
+          message: `A shard failed ${job.retryCount + 1} times: ${(thrown as Error).message}`,
+        });
       }
       // pg-boss retries this job; give the shard back so the retry can claim it at once.
       await retrying("release shard", log, () => releaseShard(db, shard.id, lease, true));
@@ -226,11 +268,15 @@ export async function startRunWorker(deps: RunWorkerDeps): Promise<RunWorker> {
   // One pg-boss poller per thread, each handling one job at a time, keeps every thread busy and no more.
   for (let i = 0; i < Math.max(1, settings.threads); i++) {
     let pollerId = "";
-    pollerId = await boss.work<ShardJobData>(SHARD_QUEUE, { batchSize: 1, pollingIntervalSeconds: 0.5, includeMetadata: true }, async ([job]) => {
-      // pg-boss waits a polling interval after every fetch; while jobs keep coming, fetch the next one at once.
-      if (!stopping) boss.notifyWorker(pollerId);
-      return track(handleJob(job!));
-    });
+    pollerId = await boss.work<ShardJobData>(
+      SHARD_QUEUE,
+      { batchSize: 1, pollingIntervalSeconds: 0.5, includeMetadata: true },
+      async ([job]) => {
+        // pg-boss waits a polling interval after every fetch; while jobs keep coming, fetch the next one at once.
+        if (!stopping) boss.notifyWorker(pollerId);
+        return track(handleJob(job!));
+      },
+    );
   }
   const reaper = setInterval(() => void reap(), settings.reapEveryMs);
   log.info({ threads: settings.threads }, "run worker started");

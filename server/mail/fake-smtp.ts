@@ -7,7 +7,10 @@ import { SMTPServer } from "smtp-server";
 import { insertMailMessage } from "../db/repositories/mail";
 import { parseMessage } from "./parse-message";
 
-export interface FakeSmtp { port: number; close(): Promise<void> }
+export interface FakeSmtp {
+  port: number;
+  close(): Promise<void>;
+}
 
 const maxMessageBytes = 1024 * 1024;
 
@@ -25,7 +28,13 @@ export async function startFakeSmtp(db: Knex, log: Logger): Promise<FakeSmtp> {
         const raw = Buffer.concat(chunks).toString("utf8");
         const parsed = parseMessage(raw);
         const from = session.envelope.mailFrom ? session.envelope.mailFrom.address : "";
-        insertMailMessage(db, { from, to: session.envelope.rcptTo.map((r) => r.address), subject: parsed.subject, textBody: parsed.textBody, raw })
+        insertMailMessage(db, {
+          from,
+          to: session.envelope.rcptTo.map((r) => r.address),
+          subject: parsed.subject,
+          textBody: parsed.textBody,
+          raw,
+        })
           .then(() => callback(null))
           .catch((err: unknown) => {
             log.error({ err }, "fake SMTP could not store a message");

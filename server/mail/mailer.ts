@@ -5,7 +5,11 @@ import nodemailer from "nodemailer";
 import type { Logger } from "pino";
 import { startFakeSmtp, type FakeSmtp } from "./fake-smtp";
 
-export interface OutgoingMail { to: string; subject: string; text: string }
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  text: string;
+}
 
 export interface Mailer {
   /** True when mail is caught by the local fake, so the admins' mailbox page has something to show. */
@@ -29,7 +33,9 @@ export function createSmtpMailer(smtpUrl: string): Mailer {
   };
 }
 
-export interface FakeMailer extends Mailer { start(): Promise<FakeSmtp> }
+export interface FakeMailer extends Mailer {
+  start(): Promise<FakeSmtp>;
+}
 
 export function createFakeMailer(db: Knex, log: Logger): FakeMailer {
   let starting: Promise<{ fake: FakeSmtp; transport: ReturnType<typeof nodemailer.createTransport> }> | null = null;
@@ -58,6 +64,10 @@ export function createFakeMailer(db: Knex, log: Logger): FakeMailer {
 }
 
 /** SMTP_URL chooses the real server; without it the fake catches everything (development and tests). */
-export function createMailer(config: { SMTP_URL?: string }, db: Knex, log: Logger): Mailer & { start?: () => Promise<FakeSmtp> } {
+export function createMailer(
+  config: { SMTP_URL?: string },
+  db: Knex,
+  log: Logger,
+): Mailer & { start?: () => Promise<FakeSmtp> } {
   return config.SMTP_URL ? createSmtpMailer(config.SMTP_URL) : createFakeMailer(db, log);
 }

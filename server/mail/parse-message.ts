@@ -2,7 +2,10 @@
 // single-part text body in quoted-printable or base64. Multipart messages keep their raw body; our own mail is
 // single-part text, and the fake exists to show that mail.
 
-export interface ParsedMessage { subject: string; textBody: string }
+export interface ParsedMessage {
+  subject: string;
+  textBody: string;
+}
 
 function decodeQuotedPrintable(text: string): Buffer {
   const softBreaksRemoved = text.replace(/=\r?\n/g, "");
@@ -25,7 +28,9 @@ function decodeEncodedWords(value: string): string {
   return value
     .replace(/\?=\s+=\?/g, "?==?")
     .replace(/=\?([^?]+)\?([QqBb])\?([^?]*)\?=/g, (_m, _charset: string, kind: string, data: string) =>
-      kind.toUpperCase() === "B" ? Buffer.from(data, "base64").toString("utf8") : decodeQuotedPrintable(data.replace(/_/g, " ")).toString("utf8"),
+      kind.toUpperCase() === "B"
+        ? Buffer.from(data, "base64").toString("utf8")
+        : decodeQuotedPrintable(data.replace(/_/g, " ")).toString("utf8"),
     );
 }
 
@@ -42,6 +47,10 @@ export function parseMessage(raw: string): ParsedMessage {
   const isMultipart = (headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/");
   let textBody = body;
   if (!isMultipart && encoding === "quoted-printable") textBody = decodeQuotedPrintable(body).toString("utf8");
-  else if (!isMultipart && encoding === "base64") textBody = Buffer.from(body.replace(/\s+/g, ""), "base64").toString("utf8");
-  return { subject: decodeEncodedWords(headers.get("subject") ?? ""), textBody: textBody.replace(/\r\n/g, "\n").trimEnd() };
+  else if (!isMultipart && encoding === "base64")
+    textBody = Buffer.from(body.replace(/\s+/g, ""), "base64").toString("utf8");
+  return {
+    subject: decodeEncodedWords(headers.get("subject") ?? ""),
+    textBody: textBody.replace(/\r\n/g, "\n").trimEnd(),
+  };
 }

@@ -1,10 +1,10 @@
 // Generator parameters to a model definition: ring automata and NK networks come back as tables and are turned
 // into rules, threshold networks come back as rules. Randomness is seeded here (the engine never draws on its own).
 import seedrandom from "seedrandom";
-import { EngineError } from "../../shared/engine/errors";
-import { cellularAutomaton, nkNetwork, thresholdNetwork } from "../../shared/engine/generators";
-import { networkToDefinition } from "../../shared/engine/rules";
-import type { GeneratorParams } from "../../shared/schemas/models";
+import { EngineError } from "@shared/engine/errors";
+import { cellularAutomaton, nkNetwork, thresholdNetwork } from "@shared/engine/generators";
+import { networkToDefinition } from "@shared/engine/rules";
+import type { GeneratorParams } from "@shared/schemas/models";
 import { HttpError } from "../http/errors";
 import { compileOrFail, type ReadModel } from "./model-reading";
 
@@ -20,7 +20,10 @@ export function generatedModel(spec: GeneratorParams): ReadModel {
         return { definition: networkToDefinition(net), network: net };
       }
       case "threshold":
-        return compileOrFail(thresholdNetwork({ n: spec.n, k: spec.k, tie: spec.tie, random: seedrandom(String(spec.seed)) }), "The generated model");
+        return compileOrFail(
+          thresholdNetwork({ n: spec.n, k: spec.k, tie: spec.tie, random: seedrandom(String(spec.seed)) }),
+          "The generated model",
+        );
     }
   } catch (e) {
     if (e instanceof EngineError) throw new HttpError(400, "INVALID_INPUT", e.message);

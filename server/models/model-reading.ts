@@ -1,9 +1,9 @@
 // Turns what a user sends (rule text, an uploaded file, generator parameters) into a checked ModelDefinition, or an
 // HttpError 400 PARSE_ERROR whose details list every problem with its line and column, before anything is stored.
-import { EngineError, ParseError } from "../../shared/engine/errors";
-import { compileDefinition, parseRuleText, variablesOf, type ModelDefinition } from "../../shared/engine/rules";
-import type { BooleanNetwork } from "../../shared/engine/network";
-import type { ParseIssue } from "../../shared/schemas/models";
+import { EngineError, ParseError } from "@shared/engine/errors";
+import { compileDefinition, parseRuleText, variablesOf, type ModelDefinition } from "@shared/engine/rules";
+import type { BooleanNetwork } from "@shared/engine/network";
+import type { ParseIssue } from "@shared/schemas/models";
 import { HttpError } from "../http/errors";
 
 export interface ReadModel {
@@ -25,7 +25,10 @@ function issueOf(e: unknown): ParseIssue | null {
 const MAX_TABLE_ROWS = 2 ** 26;
 
 /** Refuses, before any table is built, a model whose nodes together read too many regulators (20 each is 2^20 rows). */
-function checkTableRows(definition: ModelDefinition, lineOf: (name: string) => number | undefined = () => undefined): void {
+function checkTableRows(
+  definition: ModelDefinition,
+  lineOf: (name: string) => number | undefined = () => undefined,
+): void {
   let rows = 0;
   for (const node of definition.nodes) {
     // Counted like compileDefinition's regulators; other problems are left for it to report in its own order.
@@ -34,14 +37,22 @@ function checkTableRows(definition: ModelDefinition, lineOf: (name: string) => n
     rows += 2 ** Math.min(20, reads.size);
     if (rows > MAX_TABLE_ROWS) {
       const line = lineOf(node.name);
-      throw new EngineError("TOO_LARGE", `up to node ${node.name} the truth tables already have more than 2^26 rows in all; let fewer nodes read many regulators${line ? ` (line ${line})` : ""}`);
+      throw new EngineError(
+        "TOO_LARGE",
+        `up to node ${node.name} the truth tables already have more than 2^26 rows in all; let fewer nodes read many regulators${line ? ` (line ${line})` : ""}`,
+      );
     }
   }
 }
 
 export function parseFailure(issues: ParseIssue[], what = "The model"): HttpError {
   const first = issues[0]!;
-  return new HttpError(400, "PARSE_ERROR", `${what} could not be read: ${first.message} (line ${first.line}, column ${first.column})`, issues);
+  return new HttpError(
+    400,
+    "PARSE_ERROR",
+    `${what} could not be read: ${first.message} (line ${first.line}, column ${first.column})`,
+    issues,
+  );
 }
 
 /** Every problem of a rule text (syntax, duplicates, undefined nodes, then compile checks), in line order. */
@@ -52,7 +63,11 @@ export function ruleTextIssues(text: string): { issues: ParseIssue[]; nodes: str
   try {
     const lines = new Map(result.rules.map((r) => [r.name, r.line] as const));
     checkTableRows(result.definition, (name) => lines.get(name));
-    return { issues: [], nodes, read: { definition: result.definition, network: compileDefinition(result.definition) } };
+    return {
+      issues: [],
+      nodes,
+      read: { definition: result.definition, network: compileDefinition(result.definition) },
+    };
   } catch (e) {
     const issue = issueOf(e);
     if (!issue) throw e;

@@ -1,8 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { networkFromFunctions, type BooleanNetwork } from "../../shared/engine/network";
-import { compileDefinition, networkToDefinition, printRuleText, readRuleText } from "../../shared/engine/rules";
-import { bytesFromString, bytesToString, synchronousStep } from "../../shared/engine/update";
+import { networkFromFunctions, type BooleanNetwork } from "@shared/engine/network";
+import { compileDefinition, networkToDefinition, printRuleText, readRuleText } from "@shared/engine/rules";
+import { bytesFromString, bytesToString, synchronousStep } from "@shared/engine/update";
 import { ruleTextIssues } from "./model-reading";
 import { perturbedNetwork } from "./perturbed-network";
 import { structureView } from "./structure-view";
@@ -15,7 +15,13 @@ const networkArb: fc.Arbitrary<BooleanNetwork> = fc.integer({ min: 1, max: 6 }).
   fc
     .array(
       fc.integer({ min: 0, max: Math.min(3, n) }).chain((k) =>
-        fc.tuple(fc.shuffledSubarray(Array.from({ length: n }, (_, i) => i), { minLength: k, maxLength: k }), fc.array(fc.integer({ min: 0, max: 1 }), { minLength: 1 << k, maxLength: 1 << k })),
+        fc.tuple(
+          fc.shuffledSubarray(
+            Array.from({ length: n }, (_, i) => i),
+            { minLength: k, maxLength: k },
+          ),
+          fc.array(fc.integer({ min: 0, max: 1 }), { minLength: 1 << k, maxLength: 1 << k }),
+        ),
       ),
       { minLength: n, maxLength: n },
     )
@@ -76,11 +82,28 @@ describe("withPhenotypes", () => {
   it("labels each marker 1 when always on, 0 when always off and ~ when it changes on the attractor", () => {
     fc.assert(
       fc.property(
-        fc.integer({ min: 1, max: 8 }).chain((n) => fc.tuple(fc.array(fc.array(fc.constantFrom("0", "1"), { minLength: n, maxLength: n }).map((c) => c.join("")), { minLength: 1, maxLength: 6 }), fc.array(fc.integer({ min: 0, max: n - 1 }), { minLength: 1, maxLength: n }))),
+        fc.integer({ min: 1, max: 8 }).chain((n) =>
+          fc.tuple(
+            fc.array(
+              fc.array(fc.constantFrom("0", "1"), { minLength: n, maxLength: n }).map((c) => c.join("")),
+              { minLength: 1, maxLength: 6 },
+            ),
+            fc.array(fc.integer({ min: 0, max: n - 1 }), { minLength: 1, maxLength: n }),
+          ),
+        ),
         ([states, markers]) => {
           const nodes = Array.from({ length: states[0]!.length }, (_, i) => `N${i}`);
-          const result = { nodes, stateCount: 0, maxTransient: 0, meanTransient: 0, attractors: [{ length: states.length, basin: 1, states, phenotype: null }] };
-          const label = withPhenotypes(result, markers.map((m) => nodes[m]!)).attractors[0]!.phenotype!;
+          const result = {
+            nodes,
+            stateCount: 0,
+            maxTransient: 0,
+            meanTransient: 0,
+            attractors: [{ length: states.length, basin: 1, states, phenotype: null }],
+          };
+          const label = withPhenotypes(
+            result,
+            markers.map((m) => nodes[m]!),
+          ).attractors[0]!.phenotype!;
           expect(label).toHaveLength(markers.length);
           markers.forEach((m, i) => {
             const values = states.map((s) => s[m]);
@@ -98,21 +121,32 @@ describe("perturbedNetwork", () => {
   it("fixes perturbed nodes and leaves every other node's update exactly as it was", () => {
     // choice per node: 0 untouched, 1 knocked out, 2 over-expressed, 3/4 a fixed condition at 0/1 (any node, input or not).
     fc.assert(
-      fc.property(networkArb.chain((net) => fc.tuple(fc.constant(net), fc.array(fc.constantFrom(0, 1, 2, 3, 4), { minLength: net.names.length, maxLength: net.names.length }), fc.nat())), ([net, choice, stateSeed]) => {
-        const knockOut = net.names.filter((_, i) => choice[i] === 1);
-        const overExpress = net.names.filter((_, i) => choice[i] === 2);
-        const fixed = Object.fromEntries(net.names.flatMap((name, i) => (choice[i]! >= 3 ? [[name, (choice[i]! - 3) as 0 | 1]] : [])));
-        const view = perturbedNetwork(net, { knockOut, overExpress, fixed });
-        const n = net.names.length;
-        const state = bytesFromString(Array.from({ length: n }, (_, i) => String((stateSeed >> i) & 1)).join(""));
-        const before = synchronousStep(net, state);
-        const after = synchronousStep(view, state);
-        for (let i = 0; i < n; i++) {
-          if (choice[i] === 1 || choice[i] === 3) expect(after[i]).toBe(0);
-          else if (choice[i] === 2 || choice[i] === 4) expect(after[i]).toBe(1);
-          else expect(after[i]).toBe(before[i]);
-        }
-      }),
+      fc.property(
+        networkArb.chain((net) =>
+          fc.tuple(
+            fc.constant(net),
+            fc.array(fc.constantFrom(0, 1, 2, 3, 4), { minLength: net.names.length, maxLength: net.names.length }),
+            fc.nat(),
+          ),
+        ),
+        ([net, choice, stateSeed]) => {
+          const knockOut = net.names.filter((_, i) => choice[i] === 1);
+          const overExpress = net.names.filter((_, i) => choice[i] === 2);
+          const fixed = Object.fromEntries(
+            net.names.flatMap((name, i) => (choice[i]! >= 3 ? [[name, (choice[i]! - 3) as 0 | 1]] : [])),
+          );
+          const view = perturbedNetwork(net, { knockOut, overExpress, fixed });
+          const n = net.names.length;
+          const state = bytesFromString(Array.from({ length: n }, (_, i) => String((stateSeed >> i) & 1)).join(""));
+          const before = synchronousStep(net, state);
+          const after = synchronousStep(view, state);
+          for (let i = 0; i < n; i++) {
+            if (choice[i] === 1 || choice[i] === 3) expect(after[i]).toBe(0);
+            else if (choice[i] === 2 || choice[i] === 4) expect(after[i]).toBe(1);
+            else expect(after[i]).toBe(before[i]);
+          }
+        },
+      ),
       SEED,
     );
   });
@@ -141,14 +175,19 @@ describe("ruleTextIssues and synchronousAttractors", () => {
   it("reports a faulty line and an undefined node each at its own line and column", () => {
     const { issues, read } = ruleTextIssues("A' = A |\nB' = Q\n");
     expect(read).toBeNull();
-    expect(issues.map((i) => [i.line, i.column])).toEqual([[1, 9], [2, 6]]);
+    expect(issues.map((i) => [i.line, i.column])).toEqual([
+      [1, 9],
+      [2, 6],
+    ]);
   });
 
   it("synchronousAttractors lists every cycle in the order the synchronous step follows", () => {
     fc.assert(
       fc.property(networkArb, (net) => {
         for (const a of synchronousAttractors(net).attractors) {
-          a.states.forEach((s, i) => expect(bytesToString(synchronousStep(net, bytesFromString(s)))).toBe(a.states[(i + 1) % a.states.length]));
+          a.states.forEach((s, i) =>
+            expect(bytesToString(synchronousStep(net, bytesFromString(s)))).toBe(a.states[(i + 1) % a.states.length]),
+          );
         }
       }),
       { ...SEED, numRuns: 60 },

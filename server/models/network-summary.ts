@@ -1,7 +1,7 @@
 // The small facts about a revision that lists and headers show without compiling the model again.
-import type { ModelDefinition } from "../../shared/engine/rules";
-import type { BooleanNetwork } from "../../shared/engine/network";
-import type { NetworkSummary } from "../../shared/schemas/models";
+import type { ModelDefinition } from "@shared/engine/rules";
+import type { BooleanNetwork } from "@shared/engine/network";
+import type { NetworkSummary } from "@shared/schemas/models";
 
 export function networkSummary(definition: ModelDefinition, net: BooleanNetwork): NetworkSummary {
   let edgeCount = 0;

@@ -1,8 +1,8 @@
 // A perturbation as the API takes it: node names instead of indices, answered with HTTP errors. The view itself is
 // the engine's (shared/engine/perturbation); only name resolution and error mapping live here.
-import { EngineError } from "../../shared/engine/errors";
-import type { BooleanNetwork } from "../../shared/engine/network";
-import { perturbNetwork } from "../../shared/engine/perturbation";
+import { EngineError } from "@shared/engine/errors";
+import type { BooleanNetwork } from "@shared/engine/network";
+import { perturbNetwork } from "@shared/engine/perturbation";
 import { HttpError } from "../http/errors";
 
 export interface NamedPerturbation {

@@ -1,10 +1,10 @@
 // The synchronous analysis as the API shows it: attractors as text with basins, and each attractor labelled by the
 // pattern of the chosen marker nodes (the phenotype reading of attractors in Kauffman, "Metabolic stability and
 // epigenesis in randomly constructed genetic nets", J. Theor. Biol. 1969).
-import type { BooleanNetwork } from "../../shared/engine/network";
-import { phenotypeLabel } from "../../shared/engine/phenotype";
-import { analyseSynchronous, attractorsAsText } from "../../shared/engine/state-graph";
-import type { AttractorRow, SynchronousResult } from "../../shared/schemas/models";
+import type { BooleanNetwork } from "@shared/engine/network";
+import { phenotypeLabel } from "@shared/engine/phenotype";
+import { analyseSynchronous, attractorsAsText } from "@shared/engine/state-graph";
+import type { AttractorRow, SynchronousResult } from "@shared/schemas/models";
 import { HttpError } from "../http/errors";
 
 function markerIndices(nodes: readonly string[], markers: readonly string[]): number[] {
@@ -27,8 +27,14 @@ export function synchronousAttractors(net: BooleanNetwork): Omit<SynchronousResu
   };
 }
 
-export function withPhenotypes(result: Omit<SynchronousResult, "markers">, markers: readonly string[]): SynchronousResult {
+export function withPhenotypes(
+  result: Omit<SynchronousResult, "markers">,
+  markers: readonly string[],
+): SynchronousResult {
   const indices = markerIndices(result.nodes, markers);
-  const attractors: AttractorRow[] = result.attractors.map((a) => ({ ...a, phenotype: markers.length ? phenotypeLabel(a.states, indices, result.nodes).pattern.join("") : null }));
+  const attractors: AttractorRow[] = result.attractors.map((a) => ({
+    ...a,
+    phenotype: markers.length ? phenotypeLabel(a.states, indices, result.nodes).pattern.join("") : null,
+  }));
   return { ...result, attractors, markers: [...markers] };
 }

@@ -1,12 +1,24 @@
 // The project's model hierarchy: approved reductions between stored models, closed under composition. A composed
 // edge F -> H (from F -> G and G -> H) is shown only when its composed certificate passes the independent verifier,
 // so the drawing never claims more than can be re-checked.
-import { composeCertificates, verifyCertificate, type ReductionCertificate } from "../../shared/engine/certificates";
-import type { Certificate, HierarchyGraph, ReductionNotion } from "../../shared/schemas/reductions";
+import { composeCertificates, verifyCertificate, type ReductionCertificate } from "@shared/engine/certificates";
+import type { Certificate, HierarchyGraph, ReductionNotion } from "@shared/schemas/reductions";
 
-export interface ApprovedEdge { id: string; notion: ReductionNotion; timeScale: number; sourceModelId: string; targetModelId: string; certificate: Certificate }
+export interface ApprovedEdge {
+  id: string;
+  notion: ReductionNotion;
+  timeScale: number;
+  sourceModelId: string;
+  targetModelId: string;
+  certificate: Certificate;
+}
 
-interface Path { source: string; target: string; certificate: ReductionCertificate; reductionIds: string[] }
+interface Path {
+  source: string;
+  target: string;
+  certificate: ReductionCertificate;
+  reductionIds: string[];
+}
 
 /** Compositions longer than this many reductions are not attempted: chains in a project are short and each costs a verification. */
 const MAX_CHAIN = 4;
@@ -19,9 +31,22 @@ export function composeHierarchy(models: HierarchyGraph["nodes"], approved: Appr
     if (!edges.has(key)) edges.set(key, e);
   };
   for (const a of approved) {
-    add({ source: a.sourceModelId, target: a.targetModelId, notion: a.notion, timeScale: a.timeScale, reductionIds: [a.id], isComposed: false, isVerified: true });
+    add({
+      source: a.sourceModelId,
+      target: a.targetModelId,
+      notion: a.notion,
+      timeScale: a.timeScale,
+      reductionIds: [a.id],
+      isComposed: false,
+      isVerified: true,
+    });
   }
-  let frontier: Path[] = approved.map((a) => ({ source: a.sourceModelId, target: a.targetModelId, certificate: a.certificate as ReductionCertificate, reductionIds: [a.id] }));
+  let frontier: Path[] = approved.map((a) => ({
+    source: a.sourceModelId,
+    target: a.targetModelId,
+    certificate: a.certificate as ReductionCertificate,
+    reductionIds: [a.id],
+  }));
   let composedCount = 0;
   for (let length = 2; length <= MAX_CHAIN && frontier.length && composedCount < MAX_COMPOSED; length++) {
     const next: Path[] = [];
@@ -37,9 +62,22 @@ export function composeHierarchy(models: HierarchyGraph["nodes"], approved: Appr
         }
         composedCount++;
         if (!verifyCertificate(composed).valid) continue;
-        const path = { source: p.source, target: a.targetModelId, certificate: composed, reductionIds: [...p.reductionIds, a.id] };
+        const path = {
+          source: p.source,
+          target: a.targetModelId,
+          certificate: composed,
+          reductionIds: [...p.reductionIds, a.id],
+        };
         next.push(path);
-        add({ source: path.source, target: path.target, notion: composed.notion, timeScale: composed.time, reductionIds: path.reductionIds, isComposed: true, isVerified: true });
+        add({
+          source: path.source,
+          target: path.target,
+          notion: composed.notion,
+          timeScale: composed.time,
+          reductionIds: path.reductionIds,
+          isComposed: true,
+          isVerified: true,
+        });
       }
     }
     frontier = next;

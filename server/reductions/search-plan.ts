@@ -8,8 +8,8 @@ import {
   networkFromCertificate,
   networkToCertificate,
   type CertificateNetwork,
-} from "../../shared/engine/certificates";
-import { coarseGrain, nodeObservable } from "../../shared/engine/coarse-graining";
+} from "@shared/engine/certificates";
+import { coarseGrain, nodeObservable } from "@shared/engine/coarse-graining";
 import {
   discoverShard,
   discoverUnitCount,
@@ -22,18 +22,25 @@ import {
   type DiscoverShardResult,
   type EmulationSearchResult,
   type SearchControl,
-} from "../../shared/engine/emulation";
-import { searchDynamicalEmbedding } from "../../shared/engine/embedding";
-import { EngineError } from "../../shared/engine/errors";
-import type { BooleanNetwork } from "../../shared/engine/network";
-import { compileDefinition, readRuleText } from "../../shared/engine/rules";
-import type { ReductionSearchParams, ReductionSearchResult, SearchBody, SearchFinding } from "../../shared/schemas/reductions";
+} from "@shared/engine/emulation";
+import { searchDynamicalEmbedding } from "@shared/engine/embedding";
+import { EngineError } from "@shared/engine/errors";
+import type { BooleanNetwork } from "@shared/engine/network";
+import { compileDefinition, readRuleText } from "@shared/engine/rules";
+import type {
+  ReductionSearchParams,
+  ReductionSearchResult,
+  SearchBody,
+  SearchFinding,
+} from "@shared/schemas/reductions";
 
 /** Discover keeps the best-ranked targets as findings; the rest are counted, not stored. */
 export const MAX_DISCOVER_FINDINGS = 40;
 const MAX_SHARDS = 8;
 
-export interface SearchShard { range: { start: number; end: number } | null }
+export interface SearchShard {
+  range: { start: number; end: number } | null;
+}
 
 export function compileRuleText(ruleText: string): BooleanNetwork {
   return compileDefinition(readRuleText(ruleText));
@@ -52,12 +59,14 @@ function emulationBounds(s: SearchBody) {
 /** Shards of a search: contiguous ranges of the engine's search units, or one shard for the unsplittable notions. */
 export function planSearch(p: ReductionSearchParams): SearchShard[] {
   const s = p.search;
-  if (s.mode === "coarse-grain" || (s.mode === "given-target" && s.notion === "dynamical-embedding")) return [{ range: null }];
+  if (s.mode === "coarse-grain" || (s.mode === "given-target" && s.notion === "dynamical-embedding"))
+    return [{ range: null }];
   const source = compileRuleText(p.sourceRuleText);
   const bounds = emulationBounds(s);
-  const total = s.mode === "discover"
-    ? discoverUnitCount(source, { ...bounds, maxTargetNodes: s.maxTargetNodes ?? 2 })
-    : emulationUnitCount(source, bounds);
+  const total =
+    s.mode === "discover"
+      ? discoverUnitCount(source, { ...bounds, maxTargetNodes: s.maxTargetNodes ?? 2 })
+      : emulationUnitCount(source, bounds);
   const count = Math.max(1, Math.min(MAX_SHARDS, Math.ceil(total / 64)));
   return Array.from({ length: count }, (_, i) => ({ range: shardRange(total, i, count) }));
 }
@@ -87,7 +96,13 @@ export function runSearchShard(p: ReductionSearchParams, shard: SearchShard, con
 }
 
 /** The same on compiled networks (the command line reads any model format). */
-export function searchShard(source: BooleanNetwork, target: BooleanNetwork | null, s: SearchBody, shard: SearchShard, control: SearchControl): ShardPartial {
+export function searchShard(
+  source: BooleanNetwork,
+  target: BooleanNetwork | null,
+  s: SearchBody,
+  shard: SearchShard,
+  control: SearchControl,
+): ShardPartial {
   if (s.mode === "coarse-grain") {
     const observables = s.observe.map((name) => {
       const i = source.names.indexOf(name);
@@ -96,7 +111,10 @@ export function searchShard(source: BooleanNetwork, target: BooleanNetwork | nul
     });
     const time = s.time ?? 1;
     const r = coarseGrain(source, observables, time, control);
-    const certificate = r.closes && r.target ? (coarseGrainingCertificate(source, r.target, time, observables) as SearchFinding["certificate"]) : null;
+    const certificate =
+      r.closes && r.target
+        ? (coarseGrainingCertificate(source, r.target, time, observables) as SearchFinding["certificate"])
+        : null;
     return { mode: "coarse-grain", certificate, groups: r.groups, closes: r.closes };
   }
   if (s.mode === "given-target") {
@@ -105,12 +123,25 @@ export function searchShard(source: BooleanNetwork, target: BooleanNetwork | nul
       const r = searchDynamicalEmbedding(source, target, s.maxTime ?? 3, control);
       return { mode: "embedding", time: r.time, map: r.map ? Array.from(r.map) : null };
     }
-    return { mode: "given-target", emulation: searchBlockEmulation(source, target, emulationBounds(s), { ...control, range: shard.range ?? undefined }) };
+    return {
+      mode: "given-target",
+      emulation: searchBlockEmulation(source, target, emulationBounds(s), {
+        ...control,
+        range: shard.range ?? undefined,
+      }),
+    };
   }
-  const result = discoverShard(source, { ...emulationBounds(s), maxTargetNodes: s.maxTargetNodes ?? 2 }, { ...control, range: shard.range ?? undefined });
+  const result = discoverShard(
+    source,
+    { ...emulationBounds(s), maxTargetNodes: s.maxTargetNodes ?? 2 },
+    { ...control, range: shard.range ?? undefined },
+  );
   return {
     mode: "discover",
-    shard: { ...result, targets: result.targets.map((t) => ({ ...t, target: networkToCertificate(t.target), flags: [...t.flags] })) },
+    shard: {
+      ...result,
+      targets: result.targets.map((t) => ({ ...t, target: networkToCertificate(t.target), flags: [...t.flags] })),
+    },
   };
 }
 
@@ -121,29 +152,80 @@ export function mergeSearch(p: ReductionSearchParams, partials: ShardPartial[]):
 }
 
 /** The same on compiled networks. */
-export function mergeShards(source: BooleanNetwork, target: BooleanNetwork | null, s: SearchBody, partials: ShardPartial[]): ReductionSearchResult {
+export function mergeShards(
+  source: BooleanNetwork,
+  target: BooleanNetwork | null,
+  s: SearchBody,
+  partials: ShardPartial[],
+): ReductionSearchResult {
   const base = { bounds: { ...s }, reductionIds: [] as string[] };
   const first = partials[0];
   if (!first) throw new EngineError("BAD_SHARD", "no shard results to merge");
   if (first.mode === "coarse-grain") {
     const findings = first.certificate ? [{ certificate: first.certificate, flags: [], rank: 0 }] : [];
-    return { ...base, mode: "coarse-grain", found: findings.length > 0, findings, distinctTargets: findings.length, groups: first.groups };
+    return {
+      ...base,
+      mode: "coarse-grain",
+      found: findings.length > 0,
+      findings,
+      distinctTargets: findings.length,
+      groups: first.groups,
+    };
   }
   if (first.mode === "embedding") {
-    const findings = first.map && target ? [{ certificate: embeddingCertificate(source, target, first.time, first.map) as SearchFinding["certificate"], flags: [], rank: 0 }] : [];
-    return { ...base, mode: "given-target", found: findings.length > 0, findings, distinctTargets: findings.length, groups: null };
+    const findings =
+      first.map && target
+        ? [
+            {
+              certificate: embeddingCertificate(source, target, first.time, first.map) as SearchFinding["certificate"],
+              flags: [],
+              rank: 0,
+            },
+          ]
+        : [];
+    return {
+      ...base,
+      mode: "given-target",
+      found: findings.length > 0,
+      findings,
+      distinctTargets: findings.length,
+      groups: null,
+    };
   }
   if (first.mode === "given-target") {
-    const merged = mergeEmulationShards(partials.map((x) => (x as Extract<ShardPartial, { mode: "given-target" }>).emulation));
-    const findings = merged.found && merged.witness && target
-      ? [{ certificate: blockEmulationCertificate(source, target, merged.witness) as SearchFinding["certificate"], flags: [], rank: 0 }]
-      : [];
-    return { ...base, mode: "given-target", found: findings.length > 0, findings, distinctTargets: findings.length, groups: null };
+    const merged = mergeEmulationShards(
+      partials.map((x) => (x as Extract<ShardPartial, { mode: "given-target" }>).emulation),
+    );
+    const findings =
+      merged.found && merged.witness && target
+        ? [
+            {
+              certificate: blockEmulationCertificate(source, target, merged.witness) as SearchFinding["certificate"],
+              flags: [],
+              rank: 0,
+            },
+          ]
+        : [];
+    return {
+      ...base,
+      mode: "given-target",
+      found: findings.length > 0,
+      findings,
+      distinctTargets: findings.length,
+      groups: null,
+    };
   }
   const merged = mergeDiscoverShards(
     partials.map((x) => {
       const shard = (x as Extract<ShardPartial, { mode: "discover" }>).shard;
-      return { ...shard, targets: shard.targets.map((t) => ({ ...t, target: networkFromCertificate(t.target), flags: t.flags as never })) };
+      return {
+        ...shard,
+        targets: shard.targets.map((t) => ({
+          ...t,
+          target: networkFromCertificate(t.target),
+          flags: t.flags as never,
+        })),
+      };
     }),
   );
   const findings = merged.targets.slice(0, MAX_DISCOVER_FINDINGS).map((t, rank) => ({
@@ -151,5 +233,12 @@ export function mergeShards(source: BooleanNetwork, target: BooleanNetwork | nul
     flags: t.trivial ? [...t.flags, "trivial"] : [...t.flags],
     rank,
   }));
-  return { ...base, mode: "discover", found: findings.length > 0, findings, distinctTargets: merged.targets.length, groups: null };
+  return {
+    ...base,
+    mode: "discover",
+    found: findings.length > 0,
+    findings,
+    distinctTargets: merged.targets.length,
+    groups: null,
+  };
 }

@@ -1,15 +1,24 @@
 // A finished search's findings become proposed reductions (each statement stored once, whoever finds it again),
 // written in the transaction that marks the run succeeded, so a run never succeeds with its reductions missing.
 import type { Knex } from "knex";
-import { ReductionSearchParams, ReductionSearchResult } from "../../shared/schemas/reductions";
+import { ReductionSearchParams, ReductionSearchResult } from "@shared/schemas/reductions";
 import { recordAudit } from "../db/repositories/audit-log";
 import { insertReduction, setVerification } from "../db/repositories/reductions";
 import { checkCertificate } from "./check-certificate";
 import { statementKey } from "./statement-key";
 
-export interface FinishedRun { id: string; projectId: string; startedBy: string | null }
+export interface FinishedRun {
+  id: string;
+  projectId: string;
+  startedBy: string | null;
+}
 
-export async function storeSearchFindings(trx: Knex, run: FinishedRun, rawResult: unknown, rawParams: unknown): Promise<unknown> {
+export async function storeSearchFindings(
+  trx: Knex,
+  run: FinishedRun,
+  rawResult: unknown,
+  rawParams: unknown,
+): Promise<unknown> {
   const params = ReductionSearchParams.parse(rawParams);
   const result = ReductionSearchResult.parse(rawResult);
   const ids: string[] = [];
@@ -36,7 +45,13 @@ export async function storeSearchFindings(trx: Knex, run: FinishedRun, rawResult
     ids.push(stored.id);
   }
   if (ids.length) {
-    await recordAudit(trx, { projectId: run.projectId, actorId: run.startedBy, action: "reduction.found", target: run.id, details: { count: ids.length, mode: result.mode } });
+    await recordAudit(trx, {
+      projectId: run.projectId,
+      actorId: run.startedBy,
+      action: "reduction.found",
+      target: run.id,
+      details: { count: ids.length, mode: result.mode },
+    });
   }
   return { ...result, reductionIds: ids };
 }

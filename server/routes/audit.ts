@@ -1,7 +1,7 @@
 // A project's audit log, newest first.
 import { Router } from "express";
 import type { Knex } from "knex";
-import { AuditQuery } from "../../shared/schemas/projects";
+import { AuditQuery } from "@shared/schemas/projects";
 import { listAudit } from "../db/repositories/audit-log";
 import { currentProject, projectAccess } from "../http/auth";
 import { validate } from "../http/validate";

@@ -1,7 +1,7 @@
 // Sign-up, sign-in, sign-out and the current session.
 import { Router } from "express";
 import type { Knex } from "knex";
-import { SignInBody, SignUpBody } from "../../shared/schemas/accounts";
+import { SignInBody, SignUpBody } from "@shared/schemas/accounts";
 import { findCredentials, findUserByEmail, insertUser } from "../db/repositories/users";
 import { HttpError } from "../http/errors";
 import { decoyHash, hashPassword, verifyPassword } from "../http/password-hash";
@@ -10,7 +10,12 @@ import { clearSessionCookie, setSessionCookie, signSession } from "../http/sessi
 import { validate } from "../http/validate";
 import type { Mailer } from "../mail/mailer";
 
-export interface AuthRouterDeps { db: Knex; sessionSecret: string; mailer: Pick<Mailer, "usesFake">; signInLimits: SignInLimits }
+export interface AuthRouterDeps {
+  db: Knex;
+  sessionSecret: string;
+  mailer: Pick<Mailer, "usesFake">;
+  signInLimits: SignInLimits;
+}
 
 export function authRouter(deps: AuthRouterDeps): Router {
   const router = Router();
@@ -25,9 +30,15 @@ export function authRouter(deps: AuthRouterDeps): Router {
     if (await findUserByEmail(deps.db, body.email)) {
       throw new HttpError(409, "EMAIL_TAKEN", "An account with this e-mail address already exists; sign in instead");
     }
-    const user = await insertUser(deps.db, { email: body.email, displayName: body.displayName, passwordHash: await hashPassword(body.password) });
+    const user = await insertUser(deps.db, {
+      email: body.email,
+      displayName: body.displayName,
+      passwordHash: await hashPassword(body.password),
+    });
     setSessionCookie(req, res, await signSession(deps.sessionSecret, user.id, user.sessionVersion));
-    res.status(201).json({ data: { id: user.id, email: user.email, displayName: user.displayName, siteRole: user.siteRole } });
+    res
+      .status(201)
+      .json({ data: { id: user.id, email: user.email, displayName: user.displayName, siteRole: user.siteRole } });
   });
 
   router.post("/sign-in", ...signInRateLimits(deps.signInLimits), validate({ body: SignInBody }), async (req, res) => {

@@ -13,10 +13,19 @@ import {
   type HierarchyParameters,
   type RuleEmulations,
   type WitnessReport,
-} from "../../shared/schemas/automata";
+} from "@shared/schemas/automata";
 import { hierarchySymmetryClasses, symmetryClassOf, witnessChecks } from "../automata/eca-engine";
 import { computeHierarchyRecord, recordFromRun } from "../automata/eca-hierarchy-compute";
-import { findFinishedHierarchyRun, findHierarchy, findPair, hierarchyPairs, listHierarchies, rulePairs, saveHierarchy, type StoredHierarchy } from "../db/repositories/eca-hierarchies";
+import {
+  findFinishedHierarchyRun,
+  findHierarchy,
+  findPair,
+  hierarchyPairs,
+  listHierarchies,
+  rulePairs,
+  saveHierarchy,
+  type StoredHierarchy,
+} from "../db/repositories/eca-hierarchies";
 import { currentUser, requireUser } from "../http/auth";
 import { HttpError } from "../http/errors";
 import { validate } from "../http/validate";
@@ -41,7 +50,10 @@ export function automataRouter(deps: { db: Knex }): Router {
   // Two requests for the same missing hierarchy share one computation instead of racing to store it.
   const computing = new Map<string, Promise<StoredHierarchy>>();
 
-  async function storedOrInline(key: HierarchyParameters, userId: string): Promise<{ hierarchy: StoredHierarchy; computedNow: boolean }> {
+  async function storedOrInline(
+    key: HierarchyParameters,
+    userId: string,
+  ): Promise<{ hierarchy: StoredHierarchy; computedNow: boolean }> {
     const found = await findHierarchy(db, key);
     if (found) return { hierarchy: found, computedNow: false };
     const run = await findFinishedHierarchyRun(db, key);
@@ -86,7 +98,14 @@ export function automataRouter(deps: { db: Knex }): Router {
     const key = req.query as unknown as HierarchyParameters;
     const { hierarchy } = await storedOrInline(key, currentUser(req).id);
     const { emulates, emulatedBy } = await rulePairs(db, hierarchy.id, rule);
-    const body: RuleEmulations = { rule, maxBlock: key.maxBlock, timeMode: key.timeMode, symmetryClass: symmetryClassOf(rule), emulates, emulatedBy };
+    const body: RuleEmulations = {
+      rule,
+      maxBlock: key.maxBlock,
+      timeMode: key.timeMode,
+      symmetryClass: symmetryClassOf(rule),
+      emulates,
+      emulatedBy,
+    };
     res.json({ data: body });
   });
 
@@ -95,11 +114,16 @@ export function automataRouter(deps: { db: Knex }): Router {
     const { hierarchy } = await storedOrInline(key, currentUser(req).id);
     const pair = await findPair(db, hierarchy.id, source, target);
     if (!pair) {
-      throw new HttpError(404, "NO_EMULATION", `Rule ${source} does not emulate rule ${target} with any block size up to ${key.maxBlock}`, {
-        source,
-        target,
-        maxBlock: key.maxBlock,
-      });
+      throw new HttpError(
+        404,
+        "NO_EMULATION",
+        `Rule ${source} does not emulate rule ${target} with any block size up to ${key.maxBlock}`,
+        {
+          source,
+          target,
+          maxBlock: key.maxBlock,
+        },
+      );
     }
     const { verified, checks } = witnessChecks(source, target, pair.witness);
     const body: WitnessReport = { source, target, minBlock: pair.minBlock, witness: pair.witness, verified, checks };

@@ -13,7 +13,9 @@ export function healthRouter(deps: { db: Knex }): Router {
     } catch (err) {
       database = { status: "down", message: (err as Error).message };
     }
-    res.status(database.status === "up" ? 200 : 503).json({ data: { status: database.status === "up" ? "ok" : "degraded", database } });
+    res
+      .status(database.status === "up" ? 200 : 503)
+      .json({ data: { status: database.status === "up" ? "ok" : "degraded", database } });
   });
   return router;
 }

@@ -4,12 +4,20 @@
 import { Router, type Request } from "express";
 import type { Knex } from "knex";
 import type { Logger } from "pino";
-import { AcceptInvitationBody, CreateInvitationBody, InvitationParams, TokenParams } from "../../shared/schemas/projects";
-import type { ProjectRole } from "../../shared/types/roles";
+import { AcceptInvitationBody, CreateInvitationBody, InvitationParams, TokenParams } from "@shared/schemas/projects";
+import type { ProjectRole } from "@shared/types/roles";
 import { recordAudit } from "../db/repositories/audit-log";
 import {
-  findInvitation, findInvitationByTokenHash, hashInvitationToken, insertInvitation, listPendingInvitations, markAccepted,
-  newInvitationToken, revokeInvitation, revokePendingFor, type Invitation,
+  findInvitation,
+  findInvitationByTokenHash,
+  hashInvitationToken,
+  insertInvitation,
+  listPendingInvitations,
+  markAccepted,
+  newInvitationToken,
+  revokeInvitation,
+  revokePendingFor,
+  type Invitation,
 } from "../db/repositories/invitations";
 import { findMember, roleOf, upsertMembership } from "../db/repositories/memberships";
 import { findProject } from "../db/repositories/projects";
@@ -23,7 +31,13 @@ import type { Mailer } from "../mail/mailer";
 
 const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
 
-export interface InvitationDeps { db: Knex; log: Logger; mailer: Pick<Mailer, "send">; publicUrl?: string; sessionSecret: string }
+export interface InvitationDeps {
+  db: Knex;
+  log: Logger;
+  mailer: Pick<Mailer, "send">;
+  publicUrl?: string;
+  sessionSecret: string;
+}
 
 const article = (role: ProjectRole) => (role === "owner" ? "an" : "a");
 
@@ -53,8 +67,21 @@ export function projectInvitationsRouter(deps: InvitationDeps): Router {
     // Sending inside the transaction: if the mail cannot be handed over, no invitation is left behind.
     const invitation = await db.transaction(async (trx) => {
       await revokePendingFor(trx, project.id, body.email);
-      const inv = await insertInvitation(trx, { projectId: project.id, email: body.email, role: body.role, tokenHash, invitedBy: actor.id, expiresAt: new Date(Date.now() + INVITATION_TTL_MS) });
-      await recordAudit(trx, { projectId: project.id, actorId: actor.id, action: "invitation.create", target: body.email, details: { role: body.role } });
+      const inv = await insertInvitation(trx, {
+        projectId: project.id,
+        email: body.email,
+        role: body.role,
+        tokenHash,
+        invitedBy: actor.id,
+        expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
+      });
+      await recordAudit(trx, {
+        projectId: project.id,
+        actorId: actor.id,
+        action: "invitation.create",
+        target: body.email,
+        details: { role: body.role },
+      });
       try {
         await deps.mailer.send({
           to: body.email,
@@ -66,39 +93,73 @@ export function projectInvitationsRouter(deps: InvitationDeps): Router {
         });
       } catch (err) {
         deps.log.error({ err }, "invitation mail could not be sent");
-        throw new HttpError(502, "MAIL_FAILED", "The invitation e-mail could not be sent; nothing was saved. Try again later.");
+        throw new HttpError(
+          502,
+          "MAIL_FAILED",
+          "The invitation e-mail could not be sent; nothing was saved. Try again later.",
+        );
       }
       return inv;
     });
     res.status(201).json({ data: publicInvitation(invitation) });
   });
 
-  router.delete("/:invitationId", projectAccess(db, "project:manage"), validate({ params: InvitationParams }), async (req, res) => {
-    const { invitationId } = req.params as { invitationId: string };
-    const project = currentProject(req);
-    const invitation = await findInvitation(db, project.id, invitationId);
-    if (!invitation || invitation.acceptedAt || invitation.revokedAt) throw new HttpError(404, "NOT_FOUND", "No pending invitation with that id");
-    await db.transaction(async (trx) => {
-      await revokeInvitation(trx, invitation.id);
-      await recordAudit(trx, { projectId: project.id, actorId: currentUser(req).id, action: "invitation.revoke", target: invitation.email });
-    });
-    res.status(204).end();
-  });
+  router.delete(
+    "/:invitationId",
+    projectAccess(db, "project:manage"),
+    validate({ params: InvitationParams }),
+    async (req, res) => {
+      const { invitationId } = req.params as { invitationId: string };
+      const project = currentProject(req);
+      const invitation = await findInvitation(db, project.id, invitationId);
+      if (!invitation || invitation.acceptedAt || invitation.revokedAt)
+        throw new HttpError(404, "NOT_FOUND", "No pending invitation with that id");
+      await db.transaction(async (trx) => {
+        await revokeInvitation(trx, invitation.id);
+        await recordAudit(trx, {
+          projectId: project.id,
+          actorId: currentUser(req).id,
+          action: "invitation.revoke",
+          target: invitation.email,
+        });
+      });
+      res.status(204).end();
+    },
+  );
 
   return router;
 }
 
 function publicInvitation(i: Invitation) {
-  return { id: i.id, projectId: i.projectId, email: i.email, role: i.role, invitedByName: i.invitedByName, expiresAt: i.expiresAt, createdAt: i.createdAt };
+  return {
+    id: i.id,
+    projectId: i.projectId,
+    email: i.email,
+    role: i.role,
+    invitedByName: i.invitedByName,
+    expiresAt: i.expiresAt,
+    createdAt: i.createdAt,
+  };
 }
 
 /** Refuses a token that is unknown, used, replaced or expired, each with its own code and a clear message. */
 function usable(invitation: Invitation | null): Invitation {
-  if (!invitation) throw new HttpError(404, "INVITATION_INVALID", "This invitation link is not valid. Ask the project owner for a new one.");
-  if (invitation.acceptedAt) throw new HttpError(410, "INVITATION_USED", "This invitation has already been used. Sign in to open the project.");
-  if (invitation.revokedAt) throw new HttpError(410, "INVITATION_REVOKED", "This invitation was withdrawn or replaced by a newer one.");
+  if (!invitation)
+    throw new HttpError(
+      404,
+      "INVITATION_INVALID",
+      "This invitation link is not valid. Ask the project owner for a new one.",
+    );
+  if (invitation.acceptedAt)
+    throw new HttpError(410, "INVITATION_USED", "This invitation has already been used. Sign in to open the project.");
+  if (invitation.revokedAt)
+    throw new HttpError(410, "INVITATION_REVOKED", "This invitation was withdrawn or replaced by a newer one.");
   if (new Date(invitation.expiresAt).getTime() <= Date.now()) {
-    throw new HttpError(410, "INVITATION_EXPIRED", "This invitation has expired. Ask the project owner to send a new one.");
+    throw new HttpError(
+      410,
+      "INVITATION_EXPIRED",
+      "This invitation has expired. Ask the project owner to send a new one.",
+    );
   }
   return invitation;
 }
@@ -111,7 +172,12 @@ export function invitationsRouter(deps: InvitationDeps): Router {
     const { token } = req.params as { token: string };
     const invitation = usable(await findInvitationByTokenHash(db, hashInvitationToken(token), { lock: false }));
     const project = await findProject(db, invitation.projectId);
-    if (!project) throw new HttpError(404, "INVITATION_INVALID", "This invitation link is not valid. Ask the project owner for a new one.");
+    if (!project)
+      throw new HttpError(
+        404,
+        "INVITATION_INVALID",
+        "This invitation link is not valid. Ask the project owner for a new one.",
+      );
     res.json({
       data: {
         projectName: project.name,
@@ -132,17 +198,32 @@ export function invitationsRouter(deps: InvitationDeps): Router {
       let user = await findUserByEmail(trx, invitation.email);
       let isNewAccount = false;
       if (user) {
-        if (!req.user) throw new HttpError(401, "SIGN_IN_REQUIRED", `Sign in as ${invitation.email} to accept this invitation`);
-        if (req.user.id !== user.id) throw new HttpError(403, "WRONG_ACCOUNT", `This invitation is for ${invitation.email}; sign out and sign in as that address`);
+        if (!req.user)
+          throw new HttpError(401, "SIGN_IN_REQUIRED", `Sign in as ${invitation.email} to accept this invitation`);
+        if (req.user.id !== user.id)
+          throw new HttpError(
+            403,
+            "WRONG_ACCOUNT",
+            `This invitation is for ${invitation.email}; sign out and sign in as that address`,
+          );
       } else {
-        if (req.user) throw new HttpError(403, "WRONG_ACCOUNT", `This invitation is for ${invitation.email}; sign out first to create that account`);
+        if (req.user)
+          throw new HttpError(
+            403,
+            "WRONG_ACCOUNT",
+            `This invitation is for ${invitation.email}; sign out first to create that account`,
+          );
         if (!body.displayName || !body.password) {
           throw new HttpError(400, "INVALID_INPUT", "Choose your name and a password to create your account", [
             ...(body.displayName ? [] : [{ field: "body.displayName", message: "Enter a name" }]),
             ...(body.password ? [] : [{ field: "body.password", message: "Choose a password" }]),
           ]);
         }
-        user = await insertUser(trx, { email: invitation.email, displayName: body.displayName, passwordHash: await hashPassword(body.password) });
+        user = await insertUser(trx, {
+          email: invitation.email,
+          displayName: body.displayName,
+          passwordHash: await hashPassword(body.password),
+        });
         isNewAccount = true;
       }
       // Someone already in the project keeps their role: an invitation must not demote an owner.
@@ -150,10 +231,17 @@ export function invitationsRouter(deps: InvitationDeps): Router {
       const role = member?.role ?? invitation.role;
       if (!member) await upsertMembership(trx, invitation.projectId, user.id, role);
       await markAccepted(trx, invitation.id, user.id);
-      await recordAudit(trx, { projectId: invitation.projectId, actorId: user.id, action: "invitation.accept", target: user.email, details: { role } });
+      await recordAudit(trx, {
+        projectId: invitation.projectId,
+        actorId: user.id,
+        action: "invitation.accept",
+        target: user.email,
+        details: { role },
+      });
       return { user, isNewAccount, projectId: invitation.projectId, role };
     });
-    if (result.isNewAccount) setSessionCookie(req, res, await signSession(deps.sessionSecret, result.user.id, result.user.sessionVersion));
+    if (result.isNewAccount)
+      setSessionCookie(req, res, await signSession(deps.sessionSecret, result.user.id, result.user.sessionVersion));
     res.json({ data: { projectId: result.projectId, role: result.role } });
   });
 

@@ -10,10 +10,20 @@ import { composeHierarchy } from "../reductions/model-hierarchy";
 
 export function modelHierarchyRouter(deps: { db: Knex }): Router {
   const router = Router({ mergeParams: true });
-  router.get("/", projectAccess(deps.db, "project:read"), validate({ params: z.object({ projectId: z.uuid() }) }), async (req, res) => {
-    const projectId = currentProject(req).id;
-    const models = (await listModels(deps.db, projectId)).map((m) => ({ modelId: m.id, name: m.name, nodeCount: m.nodeCount, revision: m.latestRevision }));
-    res.json({ data: composeHierarchy(models, await approvedModelEdges(deps.db, projectId)) });
-  });
+  router.get(
+    "/",
+    projectAccess(deps.db, "project:read"),
+    validate({ params: z.object({ projectId: z.uuid() }) }),
+    async (req, res) => {
+      const projectId = currentProject(req).id;
+      const models = (await listModels(deps.db, projectId)).map((m) => ({
+        modelId: m.id,
+        name: m.name,
+        nodeCount: m.nodeCount,
+        revision: m.latestRevision,
+      }));
+      res.json({ data: composeHierarchy(models, await approvedModelEdges(deps.db, projectId)) });
+    },
+  );
   return router;
 }

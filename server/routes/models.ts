@@ -6,10 +6,10 @@ import type { Knex } from "knex";
 import multer from "multer";
 import seedrandom from "seedrandom";
 import { z } from "zod";
-import { EngineError } from "../../shared/engine/errors";
-import type { BooleanNetwork } from "../../shared/engine/network";
-import { compileDefinition, printRuleText, type ModelDefinition } from "../../shared/engine/rules";
-import { bytesFromString, bytesToString, trajectory } from "../../shared/engine/update";
+import { EngineError } from "@shared/engine/errors";
+import type { BooleanNetwork } from "@shared/engine/network";
+import { compileDefinition, printRuleText, type ModelDefinition } from "@shared/engine/rules";
+import { bytesFromString, bytesToString, trajectory } from "@shared/engine/update";
 import {
   AttractorsQuery,
   CreateModelBody,
@@ -30,10 +30,18 @@ import {
   type StructureResult,
   type SynchronousResult,
   type ValidateResult,
-} from "../../shared/schemas/models";
+} from "@shared/schemas/models";
 import { recordAudit } from "../db/repositories/audit-log";
 import { findModelFile, insertModelFile, type ModelFile } from "../db/repositories/model-files";
-import { findAnalysis, findAttractorRunResult, findRevision, insertRevision, listRevisions, storeAnalysis, type StoredRevision } from "../db/repositories/model-revisions";
+import {
+  findAnalysis,
+  findAttractorRunResult,
+  findRevision,
+  insertRevision,
+  listRevisions,
+  storeAnalysis,
+  type StoredRevision,
+} from "../db/repositories/model-revisions";
 import { findModel, insertModel, listModels, lockNextRevision, setLatestRevision } from "../db/repositories/models";
 import { currentProject, currentUser, projectAccess } from "../http/auth";
 import { HttpError } from "../http/errors";
@@ -56,7 +64,10 @@ const AttractorRunResult = z.object({
   attractors: z.array(z.object({ length: z.number().int(), basin: z.number().int(), states: z.array(z.string()) })),
 });
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MODEL_UPLOAD_LIMIT_BYTES, files: 1, fields: 10 } });
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MODEL_UPLOAD_LIMIT_BYTES, files: 1, fields: 10 },
+});
 
 interface NewModelInput extends ReadModel {
   name: string;
@@ -80,7 +91,12 @@ export function modelsRouter(deps: { db: Knex }): Router {
     const project = currentProject(req);
     const user = currentUser(req);
     const modelId = await db.transaction(async (trx) => {
-      const id = await insertModel(trx, { projectId: project.id, name: input.name, description: input.description, createdBy: user.id });
+      const id = await insertModel(trx, {
+        projectId: project.id,
+        name: input.name,
+        description: input.description,
+        createdBy: user.id,
+      });
       const revisionId = await insertRevision(trx, {
         modelId: id,
         revision: 1,
@@ -98,7 +114,12 @@ export function modelsRouter(deps: { db: Knex }): Router {
         actorId: user.id,
         action: input.action,
         target: id,
-        details: { name: input.name, source: input.source, nodeCount: input.network.names.length, ...(input.file ? { fileName: input.file.fileName } : {}) },
+        details: {
+          name: input.name,
+          source: input.source,
+          nodeCount: input.network.names.length,
+          ...(input.file ? { fileName: input.file.fileName } : {}),
+        },
       });
       return id;
     });
@@ -157,7 +178,13 @@ export function modelsRouter(deps: { db: Knex }): Router {
     const parsed = AttractorRunResult.safeParse(result);
     if (!parsed.success) return null;
     const r = parsed.data;
-    return { nodes: r.nodeNames, stateCount: r.stateCount, maxTransient: r.maxTransient, meanTransient: r.meanTransient, attractors: r.attractors.map((a) => ({ ...a, phenotype: null })) };
+    return {
+      nodes: r.nodeNames,
+      stateCount: r.stateCount,
+      maxTransient: r.maxTransient,
+      meanTransient: r.meanTransient,
+      attractors: r.attractors.map((a) => ({ ...a, phenotype: null })),
+    };
   }
 
   router.get("/", read, validate({ params: ProjectParams }), async (req, res) => {
@@ -167,42 +194,84 @@ export function modelsRouter(deps: { db: Knex }): Router {
   router.post("/validate", read, validate({ params: ProjectParams, body: ValidateBody }), (req, res) => {
     const { ruleText } = req.body as { ruleText: string };
     const { issues, nodes, read: model } = ruleTextIssues(ruleText);
-    const data: ValidateResult = { ok: issues.length === 0, nodeCount: model ? model.network.names.length : nodes.length, nodes: model ? [...model.network.names] : nodes, errors: issues };
+    const data: ValidateResult = {
+      ok: issues.length === 0,
+      nodeCount: model ? model.network.names.length : nodes.length,
+      nodes: model ? [...model.network.names] : nodes,
+      errors: issues,
+    };
     res.json({ data });
   });
 
   router.post("/", write, validate({ params: ProjectParams, body: CreateModelBody }), async (req, res) => {
     const body = req.body as { name: string; description: string; ruleText: string };
     const model = readRules(body.ruleText);
-    res.status(201).json({ data: await createModel(req, { ...model, name: body.name, description: body.description, ruleText: body.ruleText, source: "rules", action: "model.create" }) });
+    res
+      .status(201)
+      .json({
+        data: await createModel(req, {
+          ...model,
+          name: body.name,
+          description: body.description,
+          ruleText: body.ruleText,
+          source: "rules",
+          action: "model.create",
+        }),
+      });
   });
 
-  router.post("/upload", write, validate({ params: ProjectParams }), (req, res, next) => {
-    upload.single("file")(req, res, (err: unknown) => {
-      if (err instanceof multer.MulterError) {
-        if (err.code === "LIMIT_FILE_SIZE") return next(new HttpError(413, "TOO_LARGE", `Model files may be at most ${MODEL_UPLOAD_LIMIT_BYTES / (1024 * 1024)} MB`));
-        return next(new HttpError(400, "INVALID_INPUT", `Upload refused: ${err.message}`));
-      }
-      // Anything else the form parser throws (no boundary, a truncated body) is a malformed request, not our failure.
-      if (err) return next(new HttpError(400, "INVALID_INPUT", `Upload refused: the form data could not be read (${(err as Error).message})`));
-      next();
-    });
-  }, validate({ body: UploadFields }), async (req, res) => {
-    const file = req.file;
-    if (!file) throw new HttpError(400, "INVALID_INPUT", "Attach the model as the form field \"file\"");
-    const fileName = file.originalname.normalize("NFC").slice(-255);
-    const model = readUpload(fileName, file.buffer);
-    const body = req.body as { name?: string; description: string };
-    const name = body.name ?? model.suggestedName ?? (fileName.replace(/\.[^.]+$/, "").trim() || "Imported model");
-    const data = await createModel(req, {
-      ...model,
-      name: name.slice(0, 120),
-      description: body.description,
-      file: { fileName, mediaType: file.mimetype || "application/octet-stream", bytes: file.buffer, sizeBytes: file.size },
-      action: "model.import",
-    });
-    res.status(201).json({ data });
-  });
+  router.post(
+    "/upload",
+    write,
+    validate({ params: ProjectParams }),
+    (req, res, next) => {
+      upload.single("file")(req, res, (err: unknown) => {
+        if (err instanceof multer.MulterError) {
+          if (err.code === "LIMIT_FILE_SIZE")
+            return next(
+              new HttpError(
+                413,
+                "TOO_LARGE",
+                `Model files may be at most ${MODEL_UPLOAD_LIMIT_BYTES / (1024 * 1024)} MB`,
+              ),
+            );
+          return next(new HttpError(400, "INVALID_INPUT", `Upload refused: ${err.message}`));
+        }
+        // Anything else the form parser throws (no boundary, a truncated body) is a malformed request, not our failure.
+        if (err)
+          return next(
+            new HttpError(
+              400,
+              "INVALID_INPUT",
+              `Upload refused: the form data could not be read (${(err as Error).message})`,
+            ),
+          );
+        next();
+      });
+    },
+    validate({ body: UploadFields }),
+    async (req, res) => {
+      const file = req.file;
+      if (!file) throw new HttpError(400, "INVALID_INPUT", 'Attach the model as the form field "file"');
+      const fileName = file.originalname.normalize("NFC").slice(-255);
+      const model = readUpload(fileName, file.buffer);
+      const body = req.body as { name?: string; description: string };
+      const name = body.name ?? model.suggestedName ?? (fileName.replace(/\.[^.]+$/, "").trim() || "Imported model");
+      const data = await createModel(req, {
+        ...model,
+        name: name.slice(0, 120),
+        description: body.description,
+        file: {
+          fileName,
+          mediaType: file.mimetype || "application/octet-stream",
+          bytes: file.buffer,
+          sizeBytes: file.size,
+        },
+        action: "model.import",
+      });
+      res.status(201).json({ data });
+    },
+  );
 
   router.post("/generate", write, validate({ params: ProjectParams, body: GenerateModelBody }), async (req, res) => {
     const body = req.body as z.infer<typeof GenerateModelBody>;
@@ -231,46 +300,62 @@ export function modelsRouter(deps: { db: Knex }): Router {
     res.json({ data: await listRevisions(db, model.id) });
   });
 
-  router.post("/:modelId/revisions", write, validate({ params: ModelParams, body: NewRevisionBody }), async (req, res) => {
-    const { modelId } = req.params as { modelId: string };
-    const body = req.body as { ruleText: string; message: string };
-    const project = currentProject(req);
-    const user = currentUser(req);
-    const model = readRules(body.ruleText);
-    const revision = await db.transaction(async (trx) => {
-      const next = await lockNextRevision(trx, project.id, modelId);
-      if (next === null) throw new HttpError(404, "NOT_FOUND", "No such model in this project");
-      await insertRevision(trx, {
-        modelId,
-        revision: next,
-        definition: model.definition,
-        ruleText: body.ruleText,
-        network: networkSummary(model.definition, model.network),
-        source: "edit",
-        message: body.message,
-        createdBy: user.id,
+  router.post(
+    "/:modelId/revisions",
+    write,
+    validate({ params: ModelParams, body: NewRevisionBody }),
+    async (req, res) => {
+      const { modelId } = req.params as { modelId: string };
+      const body = req.body as { ruleText: string; message: string };
+      const project = currentProject(req);
+      const user = currentUser(req);
+      const model = readRules(body.ruleText);
+      const revision = await db.transaction(async (trx) => {
+        const next = await lockNextRevision(trx, project.id, modelId);
+        if (next === null) throw new HttpError(404, "NOT_FOUND", "No such model in this project");
+        await insertRevision(trx, {
+          modelId,
+          revision: next,
+          definition: model.definition,
+          ruleText: body.ruleText,
+          network: networkSummary(model.definition, model.network),
+          source: "edit",
+          message: body.message,
+          createdBy: user.id,
+        });
+        await setLatestRevision(trx, modelId, next);
+        await recordAudit(trx, {
+          projectId: project.id,
+          actorId: user.id,
+          action: "model.revise",
+          target: modelId,
+          details: { revision: next, nodeCount: model.network.names.length },
+        });
+        return next;
       });
-      await setLatestRevision(trx, modelId, next);
-      await recordAudit(trx, { projectId: project.id, actorId: user.id, action: "model.revise", target: modelId, details: { revision: next, nodeCount: model.network.names.length } });
-      return next;
-    });
-    res.status(201).json({ data: await detail(project.id, modelId, revision) });
-  });
+      res.status(201).json({ data: await detail(project.id, modelId, revision) });
+    },
+  );
 
   router.get("/:modelId/revisions/:revision", read, validate({ params: RevisionParams }), async (req, res) => {
     const { modelId, revision } = req.params as unknown as { modelId: string; revision: number };
     res.json({ data: await detail(currentProject(req).id, modelId, revision) });
   });
 
-  router.get("/:modelId/revisions/:revision/export", read, validate({ params: RevisionParams, query: ExportQuery }), async (req, res) => {
-    const { name, stored } = await loadRevision(req);
-    const { format } = req.query as unknown as { format: "sbml" | "rules" | "csv" };
-    const file = exportModel(stored.definition, format, `${name}-r${stored.revision}`);
-    // attachment() guesses a type from the extension; ours is set after it so it wins.
-    res.attachment(file.fileName);
-    res.setHeader("Content-Type", file.mediaType);
-    res.send(file.body);
-  });
+  router.get(
+    "/:modelId/revisions/:revision/export",
+    read,
+    validate({ params: RevisionParams, query: ExportQuery }),
+    async (req, res) => {
+      const { name, stored } = await loadRevision(req);
+      const { format } = req.query as unknown as { format: "sbml" | "rules" | "csv" };
+      const file = exportModel(stored.definition, format, `${name}-r${stored.revision}`);
+      // attachment() guesses a type from the extension; ours is set after it so it wins.
+      res.attachment(file.fileName);
+      res.setHeader("Content-Type", file.mediaType);
+      res.send(file.body);
+    },
+  );
 
   router.get("/:modelId/revisions/:revision/original", read, validate({ params: RevisionParams }), async (req, res) => {
     const { stored } = await loadRevision(req);
@@ -282,62 +367,95 @@ export function modelsRouter(deps: { db: Knex }): Router {
     res.send(file.bytes);
   });
 
-  router.get("/:modelId/revisions/:revision/attractors", read, validate({ params: RevisionParams, query: AttractorsQuery }), async (req, res) => {
-    const { stored } = await loadRevision(req);
-    const { markers } = req.query as unknown as { markers: string[] };
-    res.json({ data: withPhenotypes(await synchronousOf(stored), markers) });
-  });
+  router.get(
+    "/:modelId/revisions/:revision/attractors",
+    read,
+    validate({ params: RevisionParams, query: AttractorsQuery }),
+    async (req, res) => {
+      const { stored } = await loadRevision(req);
+      const { markers } = req.query as unknown as { markers: string[] };
+      res.json({ data: withPhenotypes(await synchronousOf(stored), markers) });
+    },
+  );
 
-  router.post("/:modelId/revisions/:revision/perturbation", read, validate({ params: RevisionParams, body: PerturbationBody }), async (req, res) => {
-    const { stored } = await loadRevision(req);
-    const body = req.body as z.infer<typeof PerturbationBody>;
-    requireInlineSize(stored.nodeCount, stored.id);
-    const view = perturbedNetwork(compileStored(stored.definition), body);
-    const before = withPhenotypes(await synchronousOf(stored), body.markers);
-    const after = withPhenotypes(synchronousAttractors(view), body.markers);
-    const phenotypes = new Map<string, { basinBefore: number; basinAfter: number }>();
-    const tally = (result: SynchronousResult, key: "basinBefore" | "basinAfter") => {
-      for (const a of result.attractors) {
-        const label = a.phenotype ?? "";
-        const entry = phenotypes.get(label) ?? { basinBefore: 0, basinAfter: 0 };
-        entry[key] += a.basin;
-        phenotypes.set(label, entry);
+  router.post(
+    "/:modelId/revisions/:revision/perturbation",
+    read,
+    validate({ params: RevisionParams, body: PerturbationBody }),
+    async (req, res) => {
+      const { stored } = await loadRevision(req);
+      const body = req.body as z.infer<typeof PerturbationBody>;
+      requireInlineSize(stored.nodeCount, stored.id);
+      const view = perturbedNetwork(compileStored(stored.definition), body);
+      const before = withPhenotypes(await synchronousOf(stored), body.markers);
+      const after = withPhenotypes(synchronousAttractors(view), body.markers);
+      const phenotypes = new Map<string, { basinBefore: number; basinAfter: number }>();
+      const tally = (result: SynchronousResult, key: "basinBefore" | "basinAfter") => {
+        for (const a of result.attractors) {
+          const label = a.phenotype ?? "";
+          const entry = phenotypes.get(label) ?? { basinBefore: 0, basinAfter: 0 };
+          entry[key] += a.basin;
+          phenotypes.set(label, entry);
+        }
+      };
+      tally(before, "basinBefore");
+      tally(after, "basinAfter");
+      const data: PerturbationResult = {
+        before,
+        after,
+        phenotypes: [...phenotypes]
+          .map(([phenotype, v]) => ({ phenotype, ...v }))
+          .sort((a, b) => b.basinBefore - a.basinBefore || a.phenotype.localeCompare(b.phenotype)),
+      };
+      res.json({ data });
+    },
+  );
+
+  router.post(
+    "/:modelId/revisions/:revision/trajectory",
+    read,
+    validate({ params: RevisionParams, body: TrajectoryBody }),
+    async (req, res) => {
+      const { stored } = await loadRevision(req);
+      const body = req.body as z.infer<typeof TrajectoryBody>;
+      const net = compileStored(stored.definition);
+      if (body.initial.length !== net.names.length) {
+        throw new HttpError(
+          400,
+          "INVALID_INPUT",
+          `The initial state has ${body.initial.length} values but the model has ${net.names.length} nodes`,
+        );
       }
-    };
-    tally(before, "basinBefore");
-    tally(after, "basinAfter");
-    const data: PerturbationResult = {
-      before,
-      after,
-      phenotypes: [...phenotypes].map(([phenotype, v]) => ({ phenotype, ...v })).sort((a, b) => b.basinBefore - a.basinBefore || a.phenotype.localeCompare(b.phenotype)),
-    };
-    res.json({ data });
-  });
+      const rng = body.scheme === "synchronous" ? undefined : seedrandom(String(body.seed));
+      let rows: Uint8Array[];
+      try {
+        rows = trajectory(net, bytesFromString(body.initial), { scheme: body.scheme, steps: body.steps, rng });
+      } catch (e) {
+        if (e instanceof EngineError) throw new HttpError(400, "INVALID_INPUT", e.message);
+        throw e;
+      }
+      res.json({
+        data: {
+          nodes: [...net.names],
+          scheme: body.scheme,
+          seed: rng ? body.seed : null,
+          states: rows.map(bytesToString),
+        },
+      });
+    },
+  );
 
-  router.post("/:modelId/revisions/:revision/trajectory", read, validate({ params: RevisionParams, body: TrajectoryBody }), async (req, res) => {
-    const { stored } = await loadRevision(req);
-    const body = req.body as z.infer<typeof TrajectoryBody>;
-    const net = compileStored(stored.definition);
-    if (body.initial.length !== net.names.length) {
-      throw new HttpError(400, "INVALID_INPUT", `The initial state has ${body.initial.length} values but the model has ${net.names.length} nodes`);
-    }
-    const rng = body.scheme === "synchronous" ? undefined : seedrandom(String(body.seed));
-    let rows: Uint8Array[];
-    try {
-      rows = trajectory(net, bytesFromString(body.initial), { scheme: body.scheme, steps: body.steps, rng });
-    } catch (e) {
-      if (e instanceof EngineError) throw new HttpError(400, "INVALID_INPUT", e.message);
-      throw e;
-    }
-    res.json({ data: { nodes: [...net.names], scheme: body.scheme, seed: rng ? body.seed : null, states: rows.map(bytesToString) } });
-  });
-
-  router.get("/:modelId/revisions/:revision/structure", read, validate({ params: RevisionParams }), async (req, res) => {
-    const { stored } = await loadRevision(req);
-    const net = compileStored(stored.definition);
-    const data: StructureResult = structureView(stored.definition, net, stored.network.inputs);
-    res.json({ data });
-  });
+  router.get(
+    "/:modelId/revisions/:revision/structure",
+    read,
+    validate({ params: RevisionParams }),
+    async (req, res) => {
+      const { stored } = await loadRevision(req);
+      const net = compileStored(stored.definition);
+      const data: StructureResult = structureView(stored.definition, net, stored.network.inputs);
+      res.json({ data });
+    },
+  );
 
   return router;
 }

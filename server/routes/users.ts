@@ -1,7 +1,7 @@
 // The signed-in person's own profile: name and password.
 import { Router } from "express";
 import type { Knex } from "knex";
-import { ChangePasswordBody, UpdateProfileBody } from "../../shared/schemas/accounts";
+import { ChangePasswordBody, UpdateProfileBody } from "@shared/schemas/accounts";
 import { findUserById, passwordHashOf, updateDisplayName, updatePassword, type User } from "../db/repositories/users";
 import { currentUser, requireUser } from "../http/auth";
 import { HttpError } from "../http/errors";

@@ -1,7 +1,7 @@
 // Turns a task's port and stop flag into the engine's onProgress/shouldStop callbacks, and catches engine errors
 // so they cross the thread boundary with their code (structured clone drops custom error fields).
-import { CancelledError, EngineError } from "../../shared/engine/errors";
-import type { Progress, ShouldStop } from "../../shared/engine/progress";
+import { CancelledError, EngineError } from "@shared/engine/errors";
+import type { Progress, ShouldStop } from "@shared/engine/progress";
 import type { ShardTaskInput, ShardTaskOutput, TaskMessage } from "./task-protocol";
 
 const PROGRESS_EVERY_MS = 100;

@@ -17,8 +17,6 @@ export type TaskMessage =
   | { type: "progress"; fraction: number; phase: string }
   | { type: "checkpoint"; fraction: number; phase: string; cursor: unknown; partial: unknown };
 
-export type ShardTaskOutput =
-  | { ok: true; partial: unknown }
-  | { ok: false; error: { code: string; message: string } };
+export type ShardTaskOutput = { ok: true; partial: unknown } | { ok: false; error: { code: string; message: string } };
 
 export const StopReason = { none: 0, cancelled: 1, timeLimit: 2, leaseLost: 3, shutdown: 4 } as const;

@@ -33,7 +33,13 @@ export function readModelText(fileName: string, text: string): ReadModelResult {
   switch (format) {
     case "sbml": {
       const sbml = readSbmlQual(text);
-      return { format, definition: sbml.definition, network: compileDefinition(sbml.definition), modelName: sbml.modelName, warnings: sbml.warnings };
+      return {
+        format,
+        definition: sbml.definition,
+        network: compileDefinition(sbml.definition),
+        modelName: sbml.modelName,
+        warnings: sbml.warnings,
+      };
     }
     case "rules": {
       const definition = readRuleText(text);
@@ -44,6 +50,9 @@ export function readModelText(fileName: string, text: string): ReadModelResult {
       return { format, definition, network: compileDefinition(definition), modelName: null, warnings: [] };
     }
     default:
-      throw new EngineError("UNSUPPORTED_FORMAT", `${fileName}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`);
+      throw new EngineError(
+        "UNSUPPORTED_FORMAT",
+        `${fileName}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`,
+      );
   }
 }

@@ -30,7 +30,10 @@ export type SignUpBody = z.infer<typeof SignUpBody>;
 
 export const SignInBody = z.object({
   email: Email,
-  password: z.string().min(1, { message: "Enter your password" }).max(PASSWORD_MAX, { message: "Wrong e-mail address or password" }),
+  password: z
+    .string()
+    .min(1, { message: "Enter your password" })
+    .max(PASSWORD_MAX, { message: "Wrong e-mail address or password" }),
 });
 export type SignInBody = z.infer<typeof SignInBody>;
 
@@ -51,7 +54,10 @@ export type Profile = z.infer<typeof Profile>;
 export const UpdateProfileBody = z.object({ displayName: DisplayName });
 export type UpdateProfileBody = z.infer<typeof UpdateProfileBody>;
 
-export const ChangePasswordBody = z.object({ currentPassword: z.string().min(1).max(PASSWORD_MAX), newPassword: NewPassword });
+export const ChangePasswordBody = z.object({
+  currentPassword: z.string().min(1).max(PASSWORD_MAX),
+  newPassword: NewPassword,
+});
 export type ChangePasswordBody = z.infer<typeof ChangePasswordBody>;
 
 export const MailMessage = z.object({

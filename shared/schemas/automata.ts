@@ -10,7 +10,9 @@ export const MAX_HIERARCHY_BLOCK = 18;
  * "block": F runs exactly k steps per step of G (t = k, the classical definition). The table also admits "any"
  * (any 1 <= t <= k) for when the engine's hierarchy covers other time scales; the API accepts only "block" today.
  */
-export const TimeMode = z.enum(["block"], { error: 'timeMode must be "block" (t = k steps of the emulator per step); other time scales are not computed yet' });
+export const TimeMode = z.enum(["block"], {
+  error: 'timeMode must be "block" (t = k steps of the emulator per step); other time scales are not computed yet',
+});
 export type TimeMode = z.infer<typeof TimeMode>;
 
 const intParam = (name: string, min: number, max: number) =>
@@ -44,7 +46,10 @@ export type HierarchyRunParameters = z.infer<typeof HierarchyRunParameters>;
 export const HierarchyQuery = HierarchyParameters.strict();
 export const RuleParams = z.object({ rule: ruleParam("rule") });
 export const RuleQuery = HierarchyParameters.strict();
-export const WitnessQuery = HierarchyParameters.extend({ source: ruleParam("source"), target: ruleParam("target") }).strict();
+export const WitnessQuery = HierarchyParameters.extend({
+  source: ruleParam("source"),
+  target: ruleParam("target"),
+}).strict();
 
 const Word = z.string().regex(/^[01]+$/);
 export const Witness = z.object({

@@ -136,7 +136,14 @@ export const AttractorsQuery = z.object({
   markers: z
     .string()
     .optional()
-    .transform((s) => (s ? s.split(",").map((m) => m.trim()).filter(Boolean) : [])),
+    .transform((s) =>
+      s
+        ? s
+            .split(",")
+            .map((m) => m.trim())
+            .filter(Boolean)
+        : [],
+    ),
 });
 
 export const AttractorRow = z.object({
@@ -197,7 +204,15 @@ export const EdgeSign = z.enum(["positive", "negative", "dual", "non-essential"]
 export type EdgeSign = z.infer<typeof EdgeSign>;
 
 export const StructureResult = z.object({
-  nodes: z.array(z.object({ name: z.string(), inDegree: z.number().int(), outDegree: z.number().int(), isInput: z.boolean(), rule: z.string() })),
+  nodes: z.array(
+    z.object({
+      name: z.string(),
+      inDegree: z.number().int(),
+      outDegree: z.number().int(),
+      isInput: z.boolean(),
+      rule: z.string(),
+    }),
+  ),
   edges: z.array(z.object({ source: z.string(), target: z.string(), sign: EdgeSign })),
 });
 export type StructureResult = z.infer<typeof StructureResult>;

@@ -11,9 +11,17 @@ export const ProjectName = z
 
 export const ProjectRoleSchema = z.enum(PROJECT_ROLES);
 
-export const MemberParams = z.object({ projectId: z.string().uuid(), userId: z.string().uuid({ message: "Not a member id" }) });
-export const InvitationParams = z.object({ projectId: z.string().uuid(), invitationId: z.string().uuid({ message: "Not an invitation id" }) });
-export const TokenParams = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, { message: "This invitation link is malformed" }) });
+export const MemberParams = z.object({
+  projectId: z.string().uuid(),
+  userId: z.string().uuid({ message: "Not a member id" }),
+});
+export const InvitationParams = z.object({
+  projectId: z.string().uuid(),
+  invitationId: z.string().uuid({ message: "Not an invitation id" }),
+});
+export const TokenParams = z.object({
+  token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, { message: "This invitation link is malformed" }),
+});
 
 export const Project = z.object({
   id: z.string().uuid(),
@@ -41,8 +49,14 @@ export const CreateProjectBody = z.object({ name: ProjectName, description: z.st
 export type CreateProjectBody = z.input<typeof CreateProjectBody>;
 
 export const UpdateProjectBody = z
-  .object({ name: ProjectName.optional(), description: z.string().trim().max(2000).optional(), archived: z.boolean().optional() })
-  .refine((b) => b.name !== undefined || b.description !== undefined || b.archived !== undefined, { message: "Nothing to change" });
+  .object({
+    name: ProjectName.optional(),
+    description: z.string().trim().max(2000).optional(),
+    archived: z.boolean().optional(),
+  })
+  .refine((b) => b.name !== undefined || b.description !== undefined || b.archived !== undefined, {
+    message: "Nothing to change",
+  });
 export type UpdateProjectBody = z.infer<typeof UpdateProjectBody>;
 
 export const DeleteProjectBody = z.object({ confirmName: z.string().max(500) });
@@ -107,5 +121,8 @@ export type AuditEntry = z.infer<typeof AuditEntry>;
 
 export const AuditQuery = z.object({
   limit: z.coerce.number().int().min(1).max(200).default(50),
-  before: z.string().regex(/^\d{1,18}$/).optional(),
+  before: z
+    .string()
+    .regex(/^\d{1,18}$/)
+    .optional(),
 });

@@ -5,8 +5,12 @@ import { z } from "zod";
 const bits = (what: string) => z.string().regex(/^[01]+$/, `${what} must be a string of 0 and 1`);
 const nodeName = z.string().min(1).max(120);
 
-const CertificateNode = z.object({ name: nodeName, inputs: z.array(nodeName).max(20), table: bits("a truth table") })
-  .refine((n) => n.table.length === 2 ** n.inputs.length, { message: "a node's table must have 2^inputs rows", path: ["table"] });
+const CertificateNode = z
+  .object({ name: nodeName, inputs: z.array(nodeName).max(20), table: bits("a truth table") })
+  .refine((n) => n.table.length === 2 ** n.inputs.length, {
+    message: "a node's table must have 2^inputs rows",
+    path: ["table"],
+  });
 const CertificateNetwork = z.object({ nodes: z.array(CertificateNode).min(1).max(2000) });
 
 const base = {
@@ -22,15 +26,32 @@ export const Certificate = z.discriminatedUnion("notion", [
     ...base,
     notion: z.literal("block-emulation"),
     witness: z.object({
-      blocks: z.array(z.object({ target: nodeName, nodes: z.array(nodeName).min(1), zero: bits("a codeword"), one: bits("a codeword") })).min(1),
+      blocks: z
+        .array(
+          z.object({
+            target: nodeName,
+            nodes: z.array(nodeName).min(1),
+            zero: bits("a codeword"),
+            one: bits("a codeword"),
+          }),
+        )
+        .min(1),
       context: z.record(nodeName, z.union([z.literal(0), z.literal(1)])),
     }),
   }),
-  z.object({ ...base, notion: z.literal("dynamical-embedding"), witness: z.object({ map: z.record(bits("a target state"), bits("a source state")) }) }),
+  z.object({
+    ...base,
+    notion: z.literal("dynamical-embedding"),
+    witness: z.object({ map: z.record(bits("a target state"), bits("a source state")) }),
+  }),
   z.object({
     ...base,
     notion: z.literal("coarse-graining"),
-    witness: z.object({ observables: z.array(z.object({ target: nodeName, inputs: z.array(nodeName).max(20), table: bits("an observable's table") })).min(1) }),
+    witness: z.object({
+      observables: z
+        .array(z.object({ target: nodeName, inputs: z.array(nodeName).max(20), table: bits("an observable's table") }))
+        .min(1),
+    }),
   }),
 ]);
 export type Certificate = z.infer<typeof Certificate>;
@@ -41,9 +62,19 @@ export const ReviewState = z.enum(["proposed", "approved", "rejected"]);
 export type ReviewState = z.infer<typeof ReviewState>;
 
 const Person = z.object({ id: z.string(), displayName: z.string() }).nullable();
-const ModelRef = z.object({ modelId: z.string(), modelName: z.string(), revisionId: z.string(), revision: z.number().int() });
+const ModelRef = z.object({
+  modelId: z.string(),
+  modelName: z.string(),
+  revisionId: z.string(),
+  revision: z.number().int(),
+});
 
-export const Verification = z.object({ isValid: z.boolean(), message: z.string(), checkedAt: z.string(), checkedBy: Person });
+export const Verification = z.object({
+  isValid: z.boolean(),
+  message: z.string(),
+  checkedAt: z.string(),
+  checkedBy: Person,
+});
 export type Verification = z.infer<typeof Verification>;
 
 export const ReductionSummary = z.object({
@@ -75,7 +106,13 @@ export const ReductionEvent = z.object({
   outcome: z.record(z.string(), z.unknown()).nullable(),
   createdAt: z.string(),
 });
-export const ReductionComment = z.object({ id: z.string(), parentId: z.string().nullable(), author: Person, body: z.string(), createdAt: z.string() });
+export const ReductionComment = z.object({
+  id: z.string(),
+  parentId: z.string().nullable(),
+  author: Person,
+  body: z.string(),
+  createdAt: z.string(),
+});
 export type ReductionComment = z.infer<typeof ReductionComment>;
 
 export const ReductionDetail = ReductionSummary.extend({
@@ -91,9 +128,15 @@ export const ReductionListQuery = z.object({
   notion: ReductionNotion.optional(),
   sourceModelId: z.uuid().optional(),
 });
-export const DecisionBody = z.object({ decision: z.enum(["approve", "reject"]), comment: z.string().trim().max(4000).default("") });
+export const DecisionBody = z.object({
+  decision: z.enum(["approve", "reject"]),
+  comment: z.string().trim().max(4000).default(""),
+});
 export type DecisionBody = z.input<typeof DecisionBody>;
-export const CommentBody = z.object({ body: z.string().trim().min(1, "a comment cannot be empty").max(4000), parentId: z.uuid().optional() });
+export const CommentBody = z.object({
+  body: z.string().trim().min(1, "a comment cannot be empty").max(4000),
+  parentId: z.uuid().optional(),
+});
 export type CommentBody = z.input<typeof CommentBody>;
 export const SaveTargetBody = z.object({ name: z.string().trim().min(1).max(120) });
 
@@ -126,16 +169,20 @@ export const SearchBody = z.discriminatedUnion("mode", [
 export type SearchBody = z.input<typeof SearchBody>;
 
 export const HierarchyGraph = z.object({
-  nodes: z.array(z.object({ modelId: z.string(), name: z.string(), nodeCount: z.number().int(), revision: z.number().int() })),
-  edges: z.array(z.object({
-    source: z.string(),
-    target: z.string(),
-    notion: ReductionNotion,
-    timeScale: z.number().int(),
-    reductionIds: z.array(z.string()),
-    isComposed: z.boolean(),
-    isVerified: z.boolean(),
-  })),
+  nodes: z.array(
+    z.object({ modelId: z.string(), name: z.string(), nodeCount: z.number().int(), revision: z.number().int() }),
+  ),
+  edges: z.array(
+    z.object({
+      source: z.string(),
+      target: z.string(),
+      notion: ReductionNotion,
+      timeScale: z.number().int(),
+      reductionIds: z.array(z.string()),
+      isComposed: z.boolean(),
+      isVerified: z.boolean(),
+    }),
+  ),
 });
 export type HierarchyGraph = z.infer<typeof HierarchyGraph>;
 

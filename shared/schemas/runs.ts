@@ -28,9 +28,21 @@ export const AttractorsParams = z.object({ ruleText: z.string().min(1).max(200_0
 export type AttractorsParams = z.infer<typeof AttractorsParams>;
 
 export const StartRunBody = z.discriminatedUnion("kind", [
-  z.object({ kind: z.literal("sleep-count"), modelRevisionId: z.uuid().nullable().default(null), params: SleepCountParams }),
-  z.object({ kind: z.literal("attractors"), modelRevisionId: z.uuid().nullable().default(null), params: AttractorsParams }),
-  z.object({ kind: z.literal("eca-hierarchy"), modelRevisionId: z.null().default(null), params: HierarchyRunParameters }),
+  z.object({
+    kind: z.literal("sleep-count"),
+    modelRevisionId: z.uuid().nullable().default(null),
+    params: SleepCountParams,
+  }),
+  z.object({
+    kind: z.literal("attractors"),
+    modelRevisionId: z.uuid().nullable().default(null),
+    params: AttractorsParams,
+  }),
+  z.object({
+    kind: z.literal("eca-hierarchy"),
+    modelRevisionId: z.null().default(null),
+    params: HierarchyRunParameters,
+  }),
   z.object({ kind: z.literal("reduction-search"), modelRevisionId: z.uuid(), params: ReductionSearchParams }),
 ]);
 export type StartRunBody = z.infer<typeof StartRunBody>;
@@ -87,4 +99,7 @@ export const Notification = z.object({
 export type Notification = z.infer<typeof Notification>;
 export const NotificationList = z.object({ items: z.array(Notification), unreadCount: z.number().int() });
 export type NotificationList = z.infer<typeof NotificationList>;
-export const MarkNotificationsReadBody = z.object({ ids: z.array(z.uuid()).max(500).optional(), all: z.boolean().optional() });
+export const MarkNotificationsReadBody = z.object({
+  ids: z.array(z.uuid()).max(500).optional(),
+  all: z.boolean().optional(),
+});

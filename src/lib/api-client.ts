@@ -15,9 +15,18 @@ export class ApiError extends Error {
   }
 }
 
-interface RequestOptions { method?: string; body?: unknown; formData?: FormData; signal?: AbortSignal }
+interface RequestOptions {
+  method?: string;
+  body?: unknown;
+  formData?: FormData;
+  signal?: AbortSignal;
+}
 
-export async function apiRequest<S extends z.ZodType>(path: string, schema: S, opts: RequestOptions = {}): Promise<z.infer<S>> {
+export async function apiRequest<S extends z.ZodType>(
+  path: string,
+  schema: S,
+  opts: RequestOptions = {},
+): Promise<z.infer<S>> {
   const headers: Record<string, string> = { Accept: "application/json" };
   let body: BodyInit | undefined;
   if (opts.formData) body = opts.formData;
@@ -27,7 +36,13 @@ export async function apiRequest<S extends z.ZodType>(path: string, schema: S, o
   }
   let res: Response;
   try {
-    res = await fetch(`/api${path}`, { method: opts.method ?? "GET", headers, body, credentials: "same-origin", signal: opts.signal });
+    res = await fetch(`/api${path}`, {
+      method: opts.method ?? "GET",
+      headers,
+      body,
+      credentials: "same-origin",
+      signal: opts.signal,
+    });
   } catch (err) {
     if ((err as Error).name === "AbortError") throw err;
     throw new ApiError(0, "NETWORK", "The server could not be reached. Check your connection and try again.");
@@ -35,11 +50,17 @@ export async function apiRequest<S extends z.ZodType>(path: string, schema: S, o
   const json: unknown = res.status === 204 ? {} : await res.json().catch(() => null);
   if (!res.ok) {
     const parsed = ApiErrorBody.safeParse(json);
-    if (parsed.success) throw new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.details);
+    if (parsed.success)
+      throw new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.details);
     throw new ApiError(res.status, "HTTP_" + res.status, `The server answered ${res.status}`);
   }
   const data = (json as { data?: unknown } | null)?.data;
   const parsed = schema.safeParse(data);
-  if (!parsed.success) throw new ApiError(res.status, "BAD_RESPONSE", `Unexpected response from ${path}: ${parsed.error.issues[0]?.message}`);
+  if (!parsed.success)
+    throw new ApiError(
+      res.status,
+      "BAD_RESPONSE",
+      `Unexpected response from ${path}: ${parsed.error.issues[0]?.message}`,
+    );
   return parsed.data;
 }

@@ -22,7 +22,10 @@ async function userCount(): Promise<number> {
   return Number(row?.count);
 }
 
-async function newProject(agent: Agent, name = `Project ${randomUUID().slice(0, 8)}`): Promise<{ id: string; name: string }> {
+async function newProject(
+  agent: Agent,
+  name = `Project ${randomUUID().slice(0, 8)}`,
+): Promise<{ id: string; name: string }> {
   const res = await agent.post("/api/projects").send({ name });
   expect(res.status).toBe(201);
   return { id: res.body.data.id, name: res.body.data.name };
@@ -42,7 +45,9 @@ describe("POST /api/auth/sign-up", () => {
   it("creates the account, stores an scrypt hash (never the password) and starts an httpOnly SameSite=Lax session", async () => {
     const email = uniqueEmail("signup");
     const agent = request.agent(t.app);
-    const res = await agent.post("/api/auth/sign-up").send({ email: email.toUpperCase(), displayName: "  Lena Brightwater ", password: "long-enough-password" });
+    const res = await agent
+      .post("/api/auth/sign-up")
+      .send({ email: email.toUpperCase(), displayName: "  Lena Brightwater ", password: "long-enough-password" });
     expect(res.status).toBe(201);
     expect(res.body.data).toMatchObject({ email, displayName: "Lena Brightwater", siteRole: "member" });
     const cookie = sessionCookie(res)!;
@@ -58,7 +63,9 @@ describe("POST /api/auth/sign-up", () => {
 
   it("refuses an address that already has an account with 409 EMAIL_TAKEN", async () => {
     const { email } = await signUpFresh(t.app, "taken");
-    const res = await request(t.app).post("/api/auth/sign-up").send({ email, displayName: "Second", password: "long-enough-password" });
+    const res = await request(t.app)
+      .post("/api/auth/sign-up")
+      .send({ email, displayName: "Second", password: "long-enough-password" });
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe("EMAIL_TAKEN");
   });
@@ -100,8 +107,12 @@ describe("POST /api/auth/sign-in and sign-out", () => {
   });
 
   it("answers a wrong password and an unknown address with the same 401 INVALID_CREDENTIALS and no cookie", async () => {
-    const wrong = await request(t.app).post("/api/auth/sign-in").send({ email: "owner@demo.emulant.test", password: "wrong-password" });
-    const unknown = await request(t.app).post("/api/auth/sign-in").send({ email: uniqueEmail("nobody"), password: "wrong-password" });
+    const wrong = await request(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email: "owner@demo.emulant.test", password: "wrong-password" });
+    const unknown = await request(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email: uniqueEmail("nobody"), password: "wrong-password" });
     for (const res of [wrong, unknown]) {
       expect(res.status).toBe(401);
       expect(res.body.error).toEqual({ code: "INVALID_CREDENTIALS", message: "Wrong e-mail address or password" });
@@ -110,7 +121,9 @@ describe("POST /api/auth/sign-in and sign-out", () => {
   });
 
   it("does not let an SQL-injection password through", async () => {
-    const res = await request(t.app).post("/api/auth/sign-in").send({ email: "owner@demo.emulant.test", password: "' OR '1'='1" });
+    const res = await request(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email: "owner@demo.emulant.test", password: "' OR '1'='1" });
     expect(res.status).toBe(401);
   });
 });
@@ -149,10 +162,14 @@ describe("sessions", () => {
   it("ends other sessions when the password changes, and refuses a wrong current password", async () => {
     const { agent, email } = await signUpFresh(t.app, "pwchange");
     const other = await signInAs(t.app, email);
-    const wrong = await agent.post("/api/users/me/password").send({ currentPassword: "not-my-password", newPassword: "a-new-password-1" });
+    const wrong = await agent
+      .post("/api/users/me/password")
+      .send({ currentPassword: "not-my-password", newPassword: "a-new-password-1" });
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.code).toBe("WRONG_PASSWORD");
-    const ok = await agent.post("/api/users/me/password").send({ currentPassword: "demo-password", newPassword: "a-new-password-1" });
+    const ok = await agent
+      .post("/api/users/me/password")
+      .send({ currentPassword: "demo-password", newPassword: "a-new-password-1" });
     expect(ok.status).toBe(200);
     expect((await agent.get("/api/users/me")).status).toBe(200);
     expect((await other.get("/api/users/me")).status).toBe(401);
@@ -166,7 +183,9 @@ describe("sign-in rate limits", () => {
     try {
       const { email } = await signUpFresh(limited.app, "ratelimit");
       for (let i = 0; i < 3; i++) {
-        expect((await request(limited.app).post("/api/auth/sign-in").send({ email, password: "wrong-password" })).status).toBe(401);
+        expect(
+          (await request(limited.app).post("/api/auth/sign-in").send({ email, password: "wrong-password" })).status,
+        ).toBe(401);
       }
       const blocked = await request(limited.app).post("/api/auth/sign-in").send({ email, password: "demo-password" });
       expect(blocked.status).toBe(429);
@@ -174,7 +193,10 @@ describe("sign-in rate limits", () => {
       expect(blocked.body.error.message).toBe("Too many failed sign-in attempts. Wait 1 minute and try again.");
       // Another account from the same address is still let in.
       const other = await signUpFresh(limited.app, "ratelimit-other");
-      expect((await request(limited.app).post("/api/auth/sign-in").send({ email: other.email, password: "demo-password" })).status).toBe(200);
+      expect(
+        (await request(limited.app).post("/api/auth/sign-in").send({ email: other.email, password: "demo-password" }))
+          .status,
+      ).toBe(200);
     } finally {
       await limited.close();
     }
@@ -184,9 +206,17 @@ describe("sign-in rate limits", () => {
     const limited = buildTestApp({ signInLimits: { windowMs: 60_000, perAccount: 100, perAddress: 3 } });
     try {
       for (let i = 0; i < 3; i++) {
-        expect((await request(limited.app).post("/api/auth/sign-in").send({ email: uniqueEmail("spray"), password: "wrong-password" })).status).toBe(401);
+        expect(
+          (
+            await request(limited.app)
+              .post("/api/auth/sign-in")
+              .send({ email: uniqueEmail("spray"), password: "wrong-password" })
+          ).status,
+        ).toBe(401);
       }
-      const blocked = await request(limited.app).post("/api/auth/sign-in").send({ email: "owner@demo.emulant.test", password: "demo-password" });
+      const blocked = await request(limited.app)
+        .post("/api/auth/sign-in")
+        .send({ email: "owner@demo.emulant.test", password: "demo-password" });
       expect(blocked.status).toBe(429);
       expect(blocked.body.error.code).toBe("RATE_LIMITED");
     } finally {
@@ -207,7 +237,11 @@ describe("Origin check", () => {
 
   it("allows the site's own Origin and reads from any Origin", async () => {
     const agent = await signInAs(t.app, "owner@demo.emulant.test");
-    const own = await agent.post("/api/projects").set("Host", "emulant.local:8080").set("Origin", "http://emulant.local:8080").send({ name: "Same-site project" });
+    const own = await agent
+      .post("/api/projects")
+      .set("Host", "emulant.local:8080")
+      .set("Origin", "http://emulant.local:8080")
+      .send({ name: "Same-site project" });
     expect(own.status).toBe(201);
     const read = await agent.get("/api/projects").set("Origin", "https://evil.example");
     expect(read.status).toBe(200);
@@ -221,12 +255,23 @@ describe("projects", () => {
     const detail = await agent.get(`/api/projects/${p.id}`);
     expect(detail.body.data).toMatchObject({ name: "Kelp circadian models", role: "owner", archived: false });
     expect(detail.body.data.capabilities).toContain("project:manage");
-    expect((await agent.patch(`/api/projects/${p.id}`).send({ name: "Kelp clock models" })).body.data.name).toBe("Kelp clock models");
+    expect((await agent.patch(`/api/projects/${p.id}`).send({ name: "Kelp clock models" })).body.data.name).toBe(
+      "Kelp clock models",
+    );
     expect((await agent.patch(`/api/projects/${p.id}`).send({ archived: true })).body.data.archived).toBe(true);
     expect((await agent.patch(`/api/projects/${p.id}`).send({ archived: false })).body.data.archived).toBe(false);
     const audit = await agent.get(`/api/projects/${p.id}/audit`);
-    expect(audit.body.data.map((e: { action: string }) => e.action)).toEqual(["project.restore", "project.archive", "project.rename", "project.create"]);
-    expect(audit.body.data[2]).toMatchObject({ actorName: "Fixture projects", target: "Kelp clock models", details: { from: "Kelp circadian models" } });
+    expect(audit.body.data.map((e: { action: string }) => e.action)).toEqual([
+      "project.restore",
+      "project.archive",
+      "project.rename",
+      "project.create",
+    ]);
+    expect(audit.body.data[2]).toMatchObject({
+      actorName: "Fixture projects",
+      target: "Kelp clock models",
+      details: { from: "Kelp circadian models" },
+    });
   });
 
   it("refuses an over-long or blank name with 400 and leaves the project unchanged", async () => {
@@ -319,7 +364,9 @@ describe("members and the last owner", () => {
   it("refuses an unknown role and a member id that is not a uuid, changing nothing", async () => {
     const owner = await signUpFresh(t.app, "badrole");
     const p = await newProject(owner.agent);
-    expect((await owner.agent.patch(`/api/projects/${p.id}/members/${owner.id}`).send({ role: "emperor" })).status).toBe(400);
+    expect(
+      (await owner.agent.patch(`/api/projects/${p.id}/members/${owner.id}`).send({ role: "emperor" })).status,
+    ).toBe(400);
     expect((await owner.agent.patch(`/api/projects/${p.id}/members/1;drop`).send({ role: "viewer" })).status).toBe(400);
     const members = (await owner.agent.get(`/api/projects/${p.id}/members`)).body.data;
     expect(members).toEqual([expect.objectContaining({ userId: owner.id, role: "owner" })]);
@@ -337,26 +384,40 @@ describe("invitations", () => {
     expect(await t.db("invitations").where({ token_hash: token }).first()).toBeUndefined();
 
     const preview = await request(t.app).get(`/api/invitations/${token}`);
-    expect(preview.body.data).toMatchObject({ projectName: "Invitation lab", email, role: "viewer", accountExists: false, invitedByName: "Fixture inviter" });
+    expect(preview.body.data).toMatchObject({
+      projectName: "Invitation lab",
+      email,
+      role: "viewer",
+      accountExists: false,
+      invitedByName: "Fixture inviter",
+    });
 
     const invitee = request.agent(t.app);
-    const tooShort = await invitee.post(`/api/invitations/${token}/accept`).send({ displayName: "Ivo", password: "short" });
+    const tooShort = await invitee
+      .post(`/api/invitations/${token}/accept`)
+      .send({ displayName: "Ivo", password: "short" });
     expect(tooShort.status).toBe(400);
     const missing = await invitee.post(`/api/invitations/${token}/accept`).send({});
     expect(missing.status).toBe(400);
     expect(await t.db("users").where({ email }).first()).toBeUndefined();
 
-    const accepted = await invitee.post(`/api/invitations/${token}/accept`).send({ displayName: "Ivo Marsh", password: "ivo-password-1" });
+    const accepted = await invitee
+      .post(`/api/invitations/${token}/accept`)
+      .send({ displayName: "Ivo Marsh", password: "ivo-password-1" });
     expect(accepted.status).toBe(200);
     expect(accepted.body.data).toEqual({ projectId: p.id, role: "viewer" });
     const project = await invitee.get(`/api/projects/${p.id}`);
     expect(project.body.data).toMatchObject({ role: "viewer", capabilities: ["project:read"] });
     expect((await invitee.patch(`/api/projects/${p.id}`).send({ name: "Hijacked" })).status).toBe(403);
 
-    const reused = await request(t.app).post(`/api/invitations/${token}/accept`).send({ displayName: "Someone", password: "some-password-1" });
+    const reused = await request(t.app)
+      .post(`/api/invitations/${token}/accept`)
+      .send({ displayName: "Someone", password: "some-password-1" });
     expect(reused.status).toBe(410);
     expect(reused.body.error.code).toBe("INVITATION_USED");
-    const audit = (await owner.agent.get(`/api/projects/${p.id}/audit`)).body.data.map((e: { action: string }) => e.action);
+    const audit = (await owner.agent.get(`/api/projects/${p.id}/audit`)).body.data.map(
+      (e: { action: string }) => e.action,
+    );
     expect(audit.slice(0, 2)).toEqual(["invitation.accept", "invitation.create"]);
   });
 
@@ -365,8 +426,13 @@ describe("invitations", () => {
     const p = await newProject(owner.agent);
     const email = uniqueEmail("late");
     const token = await invite(owner.agent, p.id, email, "modeler");
-    await t.db("invitations").where({ project_id: p.id, email }).update({ expires_at: t.db.raw("now() - interval '1 minute'") });
-    const res = await request(t.app).post(`/api/invitations/${token}/accept`).send({ displayName: "Late", password: "late-password-1" });
+    await t
+      .db("invitations")
+      .where({ project_id: p.id, email })
+      .update({ expires_at: t.db.raw("now() - interval '1 minute'") });
+    const res = await request(t.app)
+      .post(`/api/invitations/${token}/accept`)
+      .send({ displayName: "Late", password: "late-password-1" });
     expect(res.status).toBe(410);
     expect(res.body.error.code).toBe("INVITATION_EXPIRED");
     expect(await t.db("users").where({ email }).first()).toBeUndefined();
@@ -409,13 +475,19 @@ describe("invitations", () => {
     const owner = await signUpFresh(t.app, "badinvite");
     const p = await newProject(owner.agent);
     const mailsBefore = Number((await t.db("mail_messages").count<{ count: string }[]>("* as count").first())?.count);
-    const malformed = await owner.agent.post(`/api/projects/${p.id}/invitations`).send({ email: "nobody@", role: "viewer" });
+    const malformed = await owner.agent
+      .post(`/api/projects/${p.id}/invitations`)
+      .send({ email: "nobody@", role: "viewer" });
     expect(malformed.status).toBe(400);
-    const member = await owner.agent.post(`/api/projects/${p.id}/invitations`).send({ email: owner.email, role: "viewer" });
+    const member = await owner.agent
+      .post(`/api/projects/${p.id}/invitations`)
+      .send({ email: owner.email, role: "viewer" });
     expect(member.status).toBe(409);
     expect(member.body.error.code).toBe("ALREADY_MEMBER");
     expect(await t.db("invitations").where({ project_id: p.id })).toEqual([]);
-    expect(Number((await t.db("mail_messages").count<{ count: string }[]>("* as count").first())?.count)).toBe(mailsBefore);
+    expect(Number((await t.db("mail_messages").count<{ count: string }[]>("* as count").first())?.count)).toBe(
+      mailsBefore,
+    );
   });
 });
 

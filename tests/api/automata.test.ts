@@ -2,10 +2,15 @@
 // witness passes the engine's independent verifier; bad parameters get a clear 400.
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ecaRule } from "../../shared/engine/automata";
-import { verifyEmulation } from "../../shared/engine/block-emulation";
+import { ecaRule } from "@shared/engine/automata";
+import { verifyEmulation } from "@shared/engine/block-emulation";
 import { computeHierarchyRecord } from "../../server/automata/eca-hierarchy-compute";
-import { deleteHierarchy, findHierarchy, hierarchyPairs, hierarchyPairsWithWitnesses } from "../../server/db/repositories/eca-hierarchies";
+import {
+  deleteHierarchy,
+  findHierarchy,
+  hierarchyPairs,
+  hierarchyPairsWithWitnesses,
+} from "../../server/db/repositories/eca-hierarchies";
 import { getRun } from "../../server/db/repositories/runs";
 import { loadRunSettings } from "../../server/jobs/run-settings";
 import { startRunWorker } from "../../server/jobs/run-worker";
@@ -51,7 +56,9 @@ describe("GET /api/automata/hierarchy", () => {
 
   it("GET /api/automata/hierarchy lists every rule as emulating itself with block size 1 and 88 symmetry classes", async () => {
     const res = await viewer.get("/api/automata/hierarchy?maxBlock=11");
-    const selfPairs = (res.body.data.pairs as { source: number; target: number; minBlock: number }[]).filter((p) => p.source === p.target);
+    const selfPairs = (res.body.data.pairs as { source: number; target: number; minBlock: number }[]).filter(
+      (p) => p.source === p.target,
+    );
     expect(selfPairs).toHaveLength(256);
     expect(selfPairs.every((p) => p.minBlock === 1)).toBe(true);
     // 88 classes under reflection and complement: Li & Packard, "The structure of the elementary cellular automata
@@ -60,11 +67,17 @@ describe("GET /api/automata/hierarchy", () => {
   });
 
   it("GET /api/automata/hierarchy shares one computation between two simultaneous first requests", async () => {
-    const [a, b] = await Promise.all([viewer.get("/api/automata/hierarchy?maxBlock=4"), viewer.get("/api/automata/hierarchy?maxBlock=4")]);
+    const [a, b] = await Promise.all([
+      viewer.get("/api/automata/hierarchy?maxBlock=4"),
+      viewer.get("/api/automata/hierarchy?maxBlock=4"),
+    ]);
     expect(a.status).toBe(200);
     expect(b.status).toBe(200);
     expect(a.body.data.id).toBe(b.body.data.id);
-    const count = await t.db("eca_hierarchies").where({ max_block: 4, time_mode: "block", radius: 1 }).count<{ count: string }[]>("* as count");
+    const count = await t
+      .db("eca_hierarchies")
+      .where({ max_block: 4, time_mode: "block", radius: 1 })
+      .count<{ count: string }[]>("* as count");
     expect(Number(count[0]!.count)).toBe(1);
   });
 
@@ -138,8 +151,16 @@ describe("GET /api/automata/witness", () => {
     expect(res.body.data.checks.every((c: { agrees: boolean }) => c.agrees)).toBe(true);
     const { "0": u0, "1": u1 } = res.body.data.witness.encoding;
     // rule 90 is left XOR right: the row for 101 must give u0, the row for 100 u1
-    expect(res.body.data.checks.find((c: { neighbourhood: string }) => c.neighbourhood === "101")).toMatchObject({ expectedBit: 0, expected: u0, obtained: u0 });
-    expect(res.body.data.checks.find((c: { neighbourhood: string }) => c.neighbourhood === "100")).toMatchObject({ expectedBit: 1, expected: u1, obtained: u1 });
+    expect(res.body.data.checks.find((c: { neighbourhood: string }) => c.neighbourhood === "101")).toMatchObject({
+      expectedBit: 0,
+      expected: u0,
+      obtained: u0,
+    });
+    expect(res.body.data.checks.find((c: { neighbourhood: string }) => c.neighbourhood === "100")).toMatchObject({
+      expectedBit: 1,
+      expected: u1,
+      obtained: u1,
+    });
   });
 
   it("GET /api/automata/witness answers 404 NO_EMULATION for a pair that does not hold", async () => {
@@ -165,13 +186,19 @@ describe("hierarchies from background runs", () => {
     const config = testConfig();
     const log = createLogger(config);
     const worker = await startRunWorker({
-      db: t.db, log, databaseUrl: config.DATABASE_URL, mailer: null, publicUrl: config.publicUrl,
+      db: t.db,
+      log,
+      databaseUrl: config.DATABASE_URL,
+      mailer: null,
+      publicUrl: config.publicUrl,
       settings: { ...loadRunSettings({}, 2), notifyAfterSeconds: 3600 },
     });
     try {
       const modeler = await signInAs(t.app, "modeler@demo.emulant.test");
       const modelerId = (await modeler.get("/api/users/me")).body.data.id as string;
-      const started = await modeler.post(`/api/projects/${DEMO_PROJECT}/runs`).send({ kind: "eca-hierarchy", params: { maxBlock: 5 } });
+      const started = await modeler
+        .post(`/api/projects/${DEMO_PROJECT}/runs`)
+        .send({ kind: "eca-hierarchy", params: { maxBlock: 5 } });
       expect(started.status).toBe(201);
       const runId = started.body.data.id as string;
       const deadline = Date.now() + 60_000;
@@ -190,7 +217,9 @@ describe("hierarchies from background runs", () => {
       // the run's shards and the inline computation must agree pair for pair
       const inline = computeHierarchyRecord({ maxBlock: 5, timeMode: "block", radius: 1 }, { computedBy: null });
       const stored = await hierarchyPairs(t.db, first.body.data.id);
-      expect(stored.map((p) => [p.source, p.target, p.minBlock])).toEqual(inline.pairs.map((p) => [p.source, p.target, p.minBlock]));
+      expect(stored.map((p) => [p.source, p.target, p.minBlock])).toEqual(
+        inline.pairs.map((p) => [p.source, p.target, p.minBlock]),
+      );
 
       const again = await viewer.get("/api/automata/hierarchy?maxBlock=5");
       expect(again.body.data.id).toBe(first.body.data.id);

@@ -4,7 +4,7 @@ import os from "node:os";
 import path from "node:path";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { YEAST_RULE_TEXT } from "../../shared/engine/rules/yeast-rule-text.test-support";
+import { YEAST_RULE_TEXT } from "@shared/engine/rules/yeast-rule-text.test-support";
 import { MULTIVALUED_SBML, REPRESSOR_RING_SBML } from "../support/model-fixtures";
 import { signInAs } from "../support/sessions";
 import { buildTestApp } from "../support/test-app";
@@ -38,7 +38,10 @@ async function counts() {
 async function createRules(name: string, ruleText: string) {
   const res = await modeler.post(base).send({ name, ruleText });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
-  return res.body.data as { model: { id: string; latestRevision: number; nodeCount: number }; revision: { revision: number; ruleText: string } };
+  return res.body.data as {
+    model: { id: string; latestRevision: number; nodeCount: number };
+    revision: { revision: number; ruleText: string };
+  };
 }
 
 describe("POST /models (rule text)", () => {
@@ -49,7 +52,13 @@ describe("POST /models (rule text)", () => {
     const list = await viewer.get(base);
     expect(list.status).toBe(200);
     const row = list.body.data.find((m: { id: string }) => m.id === model.id);
-    expect(row).toMatchObject({ name: "Toggle pair", nodeCount: 2, latestRevision: 1, source: "rules", createdBy: { displayName: expect.any(String) } });
+    expect(row).toMatchObject({
+      name: "Toggle pair",
+      nodeCount: 2,
+      latestRevision: 1,
+      source: "rules",
+      createdBy: { displayName: expect.any(String) },
+    });
   });
 
   it("answers a faulty rule text with 400 PARSE_ERROR listing line and column of each error, storing nothing", async () => {
@@ -89,10 +98,16 @@ describe("POST /models/validate", () => {
 describe("POST /models/upload", () => {
   it("imports a rule-text file and keeps the original bytes for download", async () => {
     const bytes = Buffer.from("# uploaded\nX' = X\nY' = X & !Y\n", "utf8");
-    const res = await modeler.post(`${base}/upload`).attach("file", bytes, { filename: "pair.rules", contentType: "text/plain" });
+    const res = await modeler
+      .post(`${base}/upload`)
+      .attach("file", bytes, { filename: "pair.rules", contentType: "text/plain" });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.data.model.name).toBe("pair");
-    expect(res.body.data.revision.file).toEqual({ fileName: "pair.rules", mediaType: "text/plain", sizeBytes: bytes.length });
+    expect(res.body.data.revision.file).toEqual({
+      fileName: "pair.rules",
+      mediaType: "text/plain",
+      sizeBytes: bytes.length,
+    });
     const original = await viewer
       .get(`${base}/${res.body.data.model.id}/revisions/1/original`)
       .buffer(true)
@@ -106,7 +121,9 @@ describe("POST /models/upload", () => {
   });
 
   it("imports an SBML-qual file: three mutual repressors in a ring give a 6-cycle and a 2-cycle", async () => {
-    const res = await modeler.post(`${base}/upload`).attach("file", Buffer.from(REPRESSOR_RING_SBML), { filename: "ring.sbml", contentType: "application/xml" });
+    const res = await modeler
+      .post(`${base}/upload`)
+      .attach("file", Buffer.from(REPRESSOR_RING_SBML), { filename: "ring.sbml", contentType: "application/xml" });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.data.model).toMatchObject({ name: "Repressor ring", nodeCount: 3, source: "sbml" });
     expect(res.body.data.revision.ruleText).toBe("LacI' = !CI\nTetR' = !LacI\nCI' = !TetR\n");
@@ -114,12 +131,17 @@ describe("POST /models/upload", () => {
     // of length 2n = 6 and the pair all-off/all-on (common practice; e.g. Remy, Mosse, Thieffry on Boolean
     // circuits, and directly checkable by hand on 8 states).
     const a = await viewer.get(`${base}/${res.body.data.model.id}/revisions/1/attractors`);
-    expect(a.body.data.attractors.map((x: { length: number; basin: number }) => [x.length, x.basin])).toEqual([[6, 6], [2, 2]]);
+    expect(a.body.data.attractors.map((x: { length: number; basin: number }) => [x.length, x.basin])).toEqual([
+      [6, 6],
+      [2, 2],
+    ]);
   });
 
   it("refuses an SBML-qual file with a multi-valued species, naming the species, and stores nothing", async () => {
     const before = await counts();
-    const res = await modeler.post(`${base}/upload`).attach("file", Buffer.from(MULTIVALUED_SBML), { filename: "multi.xml" });
+    const res = await modeler
+      .post(`${base}/upload`)
+      .attach("file", Buffer.from(MULTIVALUED_SBML), { filename: "multi.xml" });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("PARSE_ERROR");
     expect(res.body.error.details[0].message).toMatch(/CI has maxLevel 2/);
@@ -127,7 +149,9 @@ describe("POST /models/upload", () => {
   });
 
   it("refuses malformed XML with the line of the fault", async () => {
-    const res = await modeler.post(`${base}/upload`).attach("file", Buffer.from('<?xml version="1.0"?>\n<sbml>\n  <model>\n</sbml>\n'), { filename: "broken.sbml" });
+    const res = await modeler
+      .post(`${base}/upload`)
+      .attach("file", Buffer.from('<?xml version="1.0"?>\n<sbml>\n  <model>\n</sbml>\n'), { filename: "broken.sbml" });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("PARSE_ERROR");
     expect(res.body.error.details[0].line).toBeGreaterThan(1);
@@ -135,7 +159,9 @@ describe("POST /models/upload", () => {
 
   it("refuses a faulty file with its parse errors and stores neither model nor file", async () => {
     const before = await counts();
-    const res = await modeler.post(`${base}/upload`).attach("file", Buffer.from("P' = Q |\n"), { filename: "bad.rules" });
+    const res = await modeler
+      .post(`${base}/upload`)
+      .attach("file", Buffer.from("P' = Q |\n"), { filename: "bad.rules" });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("PARSE_ERROR");
     expect(res.body.error.details[0]).toMatchObject({ line: 1, column: expect.any(Number) });
@@ -143,20 +169,28 @@ describe("POST /models/upload", () => {
   });
 
   it("refuses files above the size limit with 413 and unknown extensions with 415", async () => {
-    const big = await modeler.post(`${base}/upload`).attach("file", Buffer.alloc(5 * 1024 * 1024 + 1, 0x20), { filename: "big.rules" });
+    const big = await modeler
+      .post(`${base}/upload`)
+      .attach("file", Buffer.alloc(5 * 1024 * 1024 + 1, 0x20), { filename: "big.rules" });
     expect(big.status).toBe(413);
-    const odd = await modeler.post(`${base}/upload`).attach("file", Buffer.from("A' = A\n"), { filename: "model.docx" });
+    const odd = await modeler
+      .post(`${base}/upload`)
+      .attach("file", Buffer.from("A' = A\n"), { filename: "model.docx" });
     expect(odd.status).toBe(415);
   });
 });
 
 describe("POST /models/generate", () => {
   it("builds an elementary cellular automaton ring whose rule-90 dynamics match the XOR of neighbours", async () => {
-    const res = await modeler.post(`${base}/generate`).send({ name: "Rule 90 ring", generator: { kind: "eca", rule: 90, radius: 1, cells: 5 } });
+    const res = await modeler
+      .post(`${base}/generate`)
+      .send({ name: "Rule 90 ring", generator: { kind: "eca", rule: 90, radius: 1, cells: 5 } });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.data.model.nodeCount).toBe(5);
     // Rule 90: each cell becomes the XOR of its two neighbours (Wolfram, Rev. Mod. Phys. 55, 1983; common practice).
-    const traj = await viewer.post(`${base}/${res.body.data.model.id}/revisions/1/trajectory`).send({ initial: "00100", steps: 2 });
+    const traj = await viewer
+      .post(`${base}/${res.body.data.model.id}/revisions/1/trajectory`)
+      .send({ initial: "00100", steps: 2 });
     expect(traj.body.data.states).toEqual(["00100", "01010", "10001"]);
   });
 
@@ -174,7 +208,9 @@ describe("revisions", () => {
   it("editing the rules creates revision 2 and leaves revision 1 exactly as it was", async () => {
     const { model } = await createRules("Editable", TOGGLE);
     const first = await viewer.get(`${base}/${model.id}/revisions/1`);
-    const edit = await modeler.post(`${base}/${model.id}/revisions`).send({ ruleText: "A' = !B\nB' = A\n", message: "B follows A" });
+    const edit = await modeler
+      .post(`${base}/${model.id}/revisions`)
+      .send({ ruleText: "A' = !B\nB' = A\n", message: "B follows A" });
     expect(edit.status).toBe(201);
     expect(edit.body.data.revision.revision).toBe(2);
     expect(edit.body.data.model.latestRevision).toBe(2);
@@ -186,12 +222,16 @@ describe("revisions", () => {
     const a1 = await viewer.get(`${base}/${model.id}/revisions/1/attractors`);
     const a2 = await viewer.get(`${base}/${model.id}/revisions/2/attractors`);
     expect(a1.body.data.attractors.map((a: { length: number }) => a.length).sort()).toEqual([1, 1, 2]);
-    expect(a2.body.data.attractors).toEqual([{ length: 4, basin: 4, states: ["00", "10", "11", "01"], phenotype: null }]);
+    expect(a2.body.data.attractors).toEqual([
+      { length: 4, basin: 4, states: ["00", "10", "11", "01"], phenotype: null },
+    ]);
   });
 
   it("refuses an UPDATE of a stored revision at the database level", async () => {
     const { model } = await createRules("Frozen", TOGGLE);
-    await expect(t.db("model_revisions").where({ model_id: model.id }).update({ rule_text: "A' = 1\nB' = 1\n" })).rejects.toThrow(/immutable/);
+    await expect(
+      t.db("model_revisions").where({ model_id: model.id }).update({ rule_text: "A' = 1\nB' = 1\n" }),
+    ).rejects.toThrow(/immutable/);
   });
 
   it("does not store a new revision when the edited text has errors", async () => {
@@ -205,22 +245,30 @@ describe("revisions", () => {
 });
 
 async function download(path: string): Promise<{ status: number; text: string; type: string }> {
-  const res = await viewer.get(path).buffer(true).parse((r, cb) => {
-    let body = "";
-    r.setEncoding("utf8");
-    r.on("data", (c: string) => (body += c));
-    r.on("end", () => cb(null, body));
-  });
+  const res = await viewer
+    .get(path)
+    .buffer(true)
+    .parse((r, cb) => {
+      let body = "";
+      r.setEncoding("utf8");
+      r.on("data", (c: string) => (body += c));
+      r.on("end", () => cb(null, body));
+    });
   return { status: res.status, text: res.body as string, type: String(res.headers["content-type"]) };
 }
 
 describe("exports", () => {
-  for (const [format, fileName] of [["sbml", "back.sbml"], ["csv", "back.csv"]] as const) {
+  for (const [format, fileName] of [
+    ["sbml", "back.sbml"],
+    ["csv", "back.csv"],
+  ] as const) {
     it(`exports ${format} that uploads back to a model with the same attractors`, async () => {
       const { model } = await createRules(`Yeast ${format}`, YEAST_RULE_TEXT);
       const exported = await download(`${base}/${model.id}/revisions/1/export?format=${format}`);
       expect(exported.status).toBe(200);
-      const back = await modeler.post(`${base}/upload`).attach("file", Buffer.from(exported.text), { filename: fileName });
+      const back = await modeler
+        .post(`${base}/upload`)
+        .attach("file", Buffer.from(exported.text), { filename: fileName });
       expect(back.status, JSON.stringify(back.body)).toBe(201);
       expect(back.body.data.model.nodeCount).toBe(11);
       const a = await viewer.get(`${base}/${model.id}/revisions/1/attractors`);
@@ -250,8 +298,12 @@ const hasLibSbml = spawnSync("/usr/bin/python3", ["-c", "import libsbml"]).statu
 describe.skipIf(!hasLibSbml)("SBML-qual export checked by libSBML", () => {
   it("exports files with zero consistency errors for a threshold model, a generated ring and an SBML import", async () => {
     const yeast = await createRules("Yeast libsbml", YEAST_RULE_TEXT);
-    const ring = await modeler.post(`${base}/generate`).send({ name: "Ring libsbml", generator: { kind: "eca", rule: 110, radius: 1, cells: 6 } });
-    const imported = await modeler.post(`${base}/upload`).attach("file", Buffer.from(REPRESSOR_RING_SBML), { filename: "ring.sbml" });
+    const ring = await modeler
+      .post(`${base}/generate`)
+      .send({ name: "Ring libsbml", generator: { kind: "eca", rule: 110, radius: 1, cells: 6 } });
+    const imported = await modeler
+      .post(`${base}/upload`)
+      .attach("file", Buffer.from(REPRESSOR_RING_SBML), { filename: "ring.sbml" });
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), "emulant-export-"));
     const files: string[] = [];
     for (const id of [yeast.model.id, ring.body.data.model.id, imported.body.data.model.id]) {
@@ -261,7 +313,11 @@ describe.skipIf(!hasLibSbml)("SBML-qual export checked by libSBML", () => {
       fs.writeFileSync(file, exported.text);
       files.push(file);
     }
-    const out = JSON.parse(execFileSync("/usr/bin/python3", [path.resolve("tests/fixtures/sbml/check-with-libsbml.py"), ...files], { encoding: "utf8" })) as { files: { errors: string[] }[] };
+    const out = JSON.parse(
+      execFileSync("/usr/bin/python3", [path.resolve("tests/fixtures/sbml/check-with-libsbml.py"), ...files], {
+        encoding: "utf8",
+      }),
+    ) as { files: { errors: string[] }[] };
     expect(out.files.map((f) => f.errors)).toEqual([[], [], []]);
     fs.rmSync(dir, { recursive: true, force: true });
   });
@@ -285,14 +341,20 @@ describe("analyses", () => {
     // Stored per revision: asking again answers the same from the one cached row.
     const again = await viewer.get(`${base}/${model.id}/revisions/1/attractors`);
     expect(again.body.data.attractors.map((a: { basin: number }) => a.basin)).toEqual([1764, 151, 109, 9, 7, 7, 1]);
-    const [cached] = await t.db("model_analyses as a").join("model_revisions as r", "r.id", "a.revision_id").where("r.model_id", model.id).count<{ count: string }[]>("* as count");
+    const [cached] = await t
+      .db("model_analyses as a")
+      .join("model_revisions as r", "r.id", "a.revision_id")
+      .where("r.model_id", model.id)
+      .count<{ count: string }[]>("* as count");
     expect(Number(cached!.count)).toBe(1);
   });
 
   it("labels an oscillating marker with ~ and answers unknown markers with 400", async () => {
     const { model } = await createRules("Toggle markers", TOGGLE);
     const res = await viewer.get(`${base}/${model.id}/revisions/1/attractors?markers=A`);
-    const labels = res.body.data.attractors.map((a: { length: number; phenotype: string }) => `${a.length}:${a.phenotype}`).sort();
+    const labels = res.body.data.attractors
+      .map((a: { length: number; phenotype: string }) => `${a.length}:${a.phenotype}`)
+      .sort();
     expect(labels).toEqual(["1:0", "1:1", "2:~"]);
     const bad = await viewer.get(`${base}/${model.id}/revisions/1/attractors?markers=Nope`);
     expect(bad.status).toBe(400);
@@ -300,7 +362,9 @@ describe("analyses", () => {
 
   it("compares attractors before and after a knock-out: knocking out B leaves A on as the only fixed point", async () => {
     const { model } = await createRules("Toggle perturbed", TOGGLE);
-    const res = await viewer.post(`${base}/${model.id}/revisions/1/perturbation`).send({ knockOut: ["B"], markers: ["A", "B"] });
+    const res = await viewer
+      .post(`${base}/${model.id}/revisions/1/perturbation`)
+      .send({ knockOut: ["B"], markers: ["A", "B"] });
     expect(res.status).toBe(200);
     expect(res.body.data.before.attractors).toHaveLength(3);
     expect(res.body.data.after.attractors).toEqual([{ length: 1, basin: 4, states: ["10"], phenotype: "10" }]);
@@ -309,14 +373,20 @@ describe("analyses", () => {
 
   it("fixes an input condition: with Light held at 0 only the dark attractors of the bloom switch remain", async () => {
     const { model } = await createRules("Light switch", "Light' = Light\nGene' = Light | Gene & !Light\n");
-    const res = await viewer.post(`${base}/${model.id}/revisions/1/perturbation`).send({ fixed: { Light: 0 }, markers: ["Gene"] });
+    const res = await viewer
+      .post(`${base}/${model.id}/revisions/1/perturbation`)
+      .send({ fixed: { Light: 0 }, markers: ["Gene"] });
     expect(res.status).toBe(200);
-    expect(res.body.data.after.attractors.every((a: { states: string[] }) => a.states.every((s) => s[0] === "0"))).toBe(true);
+    expect(res.body.data.after.attractors.every((a: { states: string[] }) => a.states.every((s) => s[0] === "0"))).toBe(
+      true,
+    );
   });
 
   it("refuses contradictory perturbations", async () => {
     const { model } = await createRules("Toggle contradict", TOGGLE);
-    const res = await viewer.post(`${base}/${model.id}/revisions/1/perturbation`).send({ knockOut: ["A"], overExpress: ["A"] });
+    const res = await viewer
+      .post(`${base}/${model.id}/revisions/1/perturbation`)
+      .send({ knockOut: ["A"], overExpress: ["A"] });
     expect(res.status).toBe(400);
   });
 
@@ -338,7 +408,8 @@ describe("analyses", () => {
     const { model } = await createRules("Signs", "A' = A\nB' = A & !C\nC' = A ^ B\n");
     const res = await viewer.get(`${base}/${model.id}/revisions/1/structure`);
     expect(res.status).toBe(200);
-    const sign = (s: string, tgt: string) => res.body.data.edges.find((e: { source: string; target: string }) => e.source === s && e.target === tgt)?.sign;
+    const sign = (s: string, tgt: string) =>
+      res.body.data.edges.find((e: { source: string; target: string }) => e.source === s && e.target === tgt)?.sign;
     expect(sign("A", "B")).toBe("positive");
     expect(sign("C", "B")).toBe("negative");
     expect(sign("A", "C")).toBe("dual");
@@ -364,16 +435,30 @@ describe("large models", () => {
       stateCount: 2 ** 17,
       maxTransient: 0,
       meanTransient: 0,
-      attractors: [{ length: 1, basin: 1, states: ["0".repeat(17)] }, { length: 1, basin: 1, states: ["1".repeat(17)] }],
+      attractors: [
+        { length: 1, basin: 1, states: ["0".repeat(17)] },
+        { length: 1, basin: 1, states: ["1".repeat(17)] },
+      ],
     };
     await t.db("runs").insert({
-      project_id: PROJECT, model_revision_id: revisionId, kind: "attractors", params: "{}", params_hash: "test", time_limit_seconds: 60,
-      state: "succeeded", result: JSON.stringify(result), finished_at: t.db.fn.now(), shard_count: 0,
+      project_id: PROJECT,
+      model_revision_id: revisionId,
+      kind: "attractors",
+      params: "{}",
+      params_hash: "test",
+      time_limit_seconds: 60,
+      state: "succeeded",
+      result: JSON.stringify(result),
+      finished_at: t.db.fn.now(),
+      shard_count: 0,
     });
     const served = await viewer.get(`${base}/${model.id}/revisions/1/attractors?markers=G0`);
     expect(served.status).toBe(200);
     expect(served.body.data.attractors.map((a: { phenotype: string }) => a.phenotype)).toEqual(["0", "1"]);
-    const [cached] = await t.db("model_analyses").where({ revision_id: revisionId }).count<{ count: string }[]>("* as count");
+    const [cached] = await t
+      .db("model_analyses")
+      .where({ revision_id: revisionId })
+      .count<{ count: string }[]>("* as count");
     expect(Number(cached!.count)).toBe(1);
   });
 });
@@ -382,7 +467,11 @@ describe("audit", () => {
   it("records who created, imported, generated and revised models", async () => {
     const { model } = await createRules("Audited", TOGGLE);
     await modeler.post(`${base}/${model.id}/revisions`).send({ ruleText: "A' = B\nB' = A\n" });
-    const rows = await t.db("audit_log").where({ project_id: PROJECT, target: model.id }).orderBy("id").select("action", "details");
+    const rows = await t
+      .db("audit_log")
+      .where({ project_id: PROJECT, target: model.id })
+      .orderBy("id")
+      .select("action", "details");
     expect(rows.map((r: { action: string }) => r.action)).toEqual(["model.create", "model.revise"]);
     expect(rows[1].details).toMatchObject({ revision: 2, nodeCount: 2 });
   });

@@ -7,9 +7,9 @@ import { loadRunSettings } from "../../server/jobs/run-settings";
 import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
 import { createLogger } from "../../server/logger";
 import { createFakeMailer } from "../../server/mail/mailer";
-import { blockEmulationCertificate, verifyCertificate } from "../../shared/engine/certificates";
-import { searchBlockEmulation } from "../../shared/engine/emulation";
-import { compileDefinition, readRuleText } from "../../shared/engine/rules";
+import { blockEmulationCertificate, verifyCertificate } from "@shared/engine/certificates";
+import { searchBlockEmulation } from "@shared/engine/emulation";
+import { compileDefinition, readRuleText } from "@shared/engine/rules";
 import { signInAs, type Agent } from "../support/sessions";
 import { buildTestApp, testConfig } from "../support/test-app";
 
@@ -58,7 +58,9 @@ beforeAll(async () => {
     modelIds[key] = res.body.data.model.id;
   }
   const demo = await modeler.get(`${base}/models/${TIDE_CLOCK_MODEL}`);
-  const copy = await modeler.post(`${base}/models`).send({ name: `Tide clock copy ${suffix}`, ruleText: demo.body.data.revision.ruleText });
+  const copy = await modeler
+    .post(`${base}/models`)
+    .send({ name: `Tide clock copy ${suffix}`, ruleText: demo.body.data.revision.ruleText });
   expect(copy.status).toBe(201);
   tideClock = copy.body.data.model.id;
 });
@@ -79,7 +81,9 @@ async function finishedRun(runId: string, timeoutMs = 60_000) {
 }
 
 async function upload(agent: Agent, source: keyof typeof rules, target: keyof typeof rules | undefined, cert: unknown) {
-  return agent.post(`${base}/reductions`).send({ sourceModelId: modelIds[source], targetModelId: target && modelIds[target], certificate: cert });
+  return agent
+    .post(`${base}/reductions`)
+    .send({ sourceModelId: modelIds[source], targetModelId: target && modelIds[target], certificate: cert });
 }
 
 describe("POST /reductions (certificate upload)", () => {
@@ -101,7 +105,12 @@ describe("POST /reductions (certificate upload)", () => {
   });
 
   it("rejects a malformed certificate at the edge, naming the field", async () => {
-    const res = await upload(modeler, "F", undefined, { format: "emulant-reduction", version: 1, notion: "block-emulation", time: 0 });
+    const res = await upload(modeler, "F", undefined, {
+      format: "emulant-reduction",
+      version: 1,
+      notion: "block-emulation",
+      time: 0,
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("INVALID_INPUT");
     expect(res.body.error.message).toMatch(/^body\.certificate/);
@@ -120,7 +129,12 @@ describe("review and the model hierarchy", () => {
   it("stores a valid certificate once, as proposed and verified", async () => {
     const first = await upload(modeler, "F", "G", certificate(rules.F, rules.G, 2));
     expect(first.status).toBe(201);
-    expect(first.body.data).toMatchObject({ reviewState: "proposed", notion: "block-emulation", timeScale: 2, lastVerification: { isValid: true } });
+    expect(first.body.data).toMatchObject({
+      reviewState: "proposed",
+      notion: "block-emulation",
+      timeScale: 2,
+      lastVerification: { isValid: true },
+    });
     fToG = first.body.data.id;
     const again = await upload(modeler, "F", "G", certificate(rules.F, rules.G, 2));
     expect(again.status).toBe(200);
@@ -140,36 +154,60 @@ describe("review and the model hierarchy", () => {
     const v = await reviewer.post(`${base}/reductions/${fToG}/verify`);
     expect(v.status).toBe(200);
     expect(v.body.data.events.at(-1)).toMatchObject({ kind: "verify", outcome: { isValid: true } });
-    const c1 = await modeler.post(`${base}/reductions/${fToG}/comments`).send({ body: "Blocks {P, Q} carry X; is t = 2 expected?" });
+    const c1 = await modeler
+      .post(`${base}/reductions/${fToG}/comments`)
+      .send({ body: "Blocks {P, Q} carry X; is t = 2 expected?" });
     expect(c1.status).toBe(201);
     const parentId = c1.body.data.comments.at(-1).id;
-    const c2 = await reviewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "Yes: F is a 4-cycle, G a 2-cycle.", parentId });
+    const c2 = await reviewer
+      .post(`${base}/reductions/${fToG}/comments`)
+      .send({ body: "Yes: F is a 4-cycle, G a 2-cycle.", parentId });
     expect(c2.body.data.comments.at(-1).parentId).toBe(parentId);
     expect((await reviewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "   " })).status).toBe(400);
-    const badParent = await reviewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "x", parentId: "00000000-0000-4000-8000-00000000abcd" });
+    const badParent = await reviewer
+      .post(`${base}/reductions/${fToG}/comments`)
+      .send({ body: "x", parentId: "00000000-0000-4000-8000-00000000abcd" });
     expect(badParent.status).toBe(400);
-    expect((await viewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "viewers only read" })).status).toBe(403);
+    expect((await viewer.post(`${base}/reductions/${fToG}/comments`).send({ body: "viewers only read" })).status).toBe(
+      403,
+    );
   });
 
   it("shows approved reductions and their verified composition in the model hierarchy", async () => {
-    const hierarchyEdges = async () => (await viewer.get(`${base}/model-hierarchy`)).body.data.edges as { source: string; target: string; isComposed: boolean; timeScale: number }[];
-    const mine = (edges: Awaited<ReturnType<typeof hierarchyEdges>>) => edges.filter((e) => Object.values(modelIds).includes(e.source));
+    const hierarchyEdges = async () =>
+      (await viewer.get(`${base}/model-hierarchy`)).body.data.edges as {
+        source: string;
+        target: string;
+        isComposed: boolean;
+        timeScale: number;
+      }[];
+    const mine = (edges: Awaited<ReturnType<typeof hierarchyEdges>>) =>
+      edges.filter((e) => Object.values(modelIds).includes(e.source));
     expect(mine(await hierarchyEdges())).toEqual([]);
     for (const id of [fToG, f0ToF]) {
-      const res = await reviewer.post(`${base}/reductions/${id}/decision`).send({ decision: "approve", comment: "checked the runs" });
+      const res = await reviewer
+        .post(`${base}/reductions/${id}/decision`)
+        .send({ decision: "approve", comment: "checked the runs" });
       expect(res.status).toBe(200);
       expect(res.body.data.reviewState).toBe("approved");
     }
     const edges = mine(await hierarchyEdges());
-    expect(edges).toContainEqual(expect.objectContaining({ source: modelIds.F, target: modelIds.G, isComposed: false, timeScale: 2 }));
-    expect(edges).toContainEqual(expect.objectContaining({ source: modelIds.F0, target: modelIds.F, isComposed: false, timeScale: 1 }));
-    expect(edges).toContainEqual(expect.objectContaining({ source: modelIds.F0, target: modelIds.G, isComposed: true, timeScale: 2 }));
+    expect(edges).toContainEqual(
+      expect.objectContaining({ source: modelIds.F, target: modelIds.G, isComposed: false, timeScale: 2 }),
+    );
+    expect(edges).toContainEqual(
+      expect.objectContaining({ source: modelIds.F0, target: modelIds.F, isComposed: false, timeScale: 1 }),
+    );
+    expect(edges).toContainEqual(
+      expect.objectContaining({ source: modelIds.F0, target: modelIds.G, isComposed: true, timeScale: 2 }),
+    );
   });
 
   it("writes every review step to the audit log", async () => {
     const audit = await modeler.get(`${base}/audit?limit=200`);
     const actions = (audit.body.data.items ?? audit.body.data).map((e: { action: string }) => e.action);
-    for (const a of ["reduction.upload", "reduction.verify", "reduction.comment", "reduction.approve"]) expect(actions).toContain(a);
+    for (const a of ["reduction.upload", "reduction.verify", "reduction.comment", "reduction.approve"])
+      expect(actions).toContain(a);
   });
 
   it("serves the certificate as a download", async () => {
@@ -183,17 +221,29 @@ describe("review and the model hierarchy", () => {
 describe("POST /reductions/searches (searches as background runs)", () => {
   beforeAll(async () => {
     worker = await startRunWorker({
-      db: t.db, log, databaseUrl: config.DATABASE_URL, mailer, publicUrl: config.publicUrl,
-      settings: { ...loadRunSettings({ RUN_HEARTBEAT_MS: "200", RUN_STALE_SECONDS: "5", RUN_REAP_EVERY_MS: "500" }, 2), notifyAfterSeconds: 3600 },
+      db: t.db,
+      log,
+      databaseUrl: config.DATABASE_URL,
+      mailer,
+      publicUrl: config.publicUrl,
+      settings: {
+        ...loadRunSettings({ RUN_HEARTBEAT_MS: "200", RUN_STALE_SECONDS: "5", RUN_REAP_EVERY_MS: "500" }, 2),
+        notifyAfterSeconds: 3600,
+      },
     });
   });
 
   it("discovers the repressor ring hidden in the demo tide clock and stores it as a proposed, valid reduction", async () => {
-    const res = await modeler.post(`${base}/reductions/searches`).send({ mode: "discover", sourceModelId: tideClock, maxTargetNodes: 3, maxTime: 1, maxBlock: 2 });
+    const res = await modeler
+      .post(`${base}/reductions/searches`)
+      .send({ mode: "discover", sourceModelId: tideClock, maxTargetNodes: 3, maxTime: 1, maxBlock: 2 });
     expect([200, 201]).toContain(res.status);
     const run = await finishedRun(res.body.data.id);
     expect(run.state, JSON.stringify(run.error)).toBe("succeeded");
-    const result = run.result as { reductionIds: string[]; findings: { certificate: { target: { nodes: { name: string; inputs: string[]; table: string }[] } } }[] };
+    const result = run.result as {
+      reductionIds: string[];
+      findings: { certificate: { target: { nodes: { name: string; inputs: string[]; table: string }[] } } }[];
+    };
     expect(result.reductionIds.length).toBe(result.findings.length);
     // The best-ranked target is the ring X1 -| X2 -| X3 -| X1: three nodes, each the negation of one other node.
     const ring = result.findings[0]!.certificate.target.nodes;
@@ -201,23 +251,41 @@ describe("POST /reductions/searches (searches as background runs)", () => {
     for (const node of ring) expect(node).toMatchObject({ inputs: [expect.any(String)], table: "10" });
     expect(new Set(ring.map((n) => n.inputs[0])).size).toBe(3);
     const stored = await modeler.get(`${base}/reductions/${result.reductionIds[0]}`);
-    expect(stored.body.data).toMatchObject({ reviewState: "proposed", foundInRunId: run.id, target: null, lastVerification: { isValid: true, checkedBy: null } });
+    expect(stored.body.data).toMatchObject({
+      reviewState: "proposed",
+      foundInRunId: run.id,
+      target: null,
+      lastVerification: { isValid: true, checkedBy: null },
+    });
     expect(verifyCertificate(stored.body.data.certificate).valid).toBe(true);
 
     // Saving the discovered ring as a model links the reduction to it; approving it puts the edge in the hierarchy.
-    const saved = await modeler.post(`${base}/reductions/${result.reductionIds[0]}/save-target`).send({ name: `Tide ring ${suffix}` });
+    const saved = await modeler
+      .post(`${base}/reductions/${result.reductionIds[0]}/save-target`)
+      .send({ name: `Tide ring ${suffix}` });
     expect(saved.status).toBe(201);
     expect(saved.body.data.target).toMatchObject({ modelName: `Tide ring ${suffix}`, revision: 1 });
-    expect((await modeler.post(`${base}/reductions/${result.reductionIds[0]}/save-target`).send({ name: "again" })).status).toBe(409);
+    expect(
+      (await modeler.post(`${base}/reductions/${result.reductionIds[0]}/save-target`).send({ name: "again" })).status,
+    ).toBe(409);
     const ringModel = await modeler.get(`${base}/models/${saved.body.data.target.modelId}`);
     expect(ringModel.body.data.revision.network.nodes).toHaveLength(3);
     await reviewer.post(`${base}/reductions/${result.reductionIds[0]}/decision`).send({ decision: "approve" });
     const edges = (await viewer.get(`${base}/model-hierarchy`)).body.data.edges;
-    expect(edges).toContainEqual(expect.objectContaining({ source: tideClock, target: saved.body.data.target.modelId, isComposed: false }));
+    expect(edges).toContainEqual(
+      expect.objectContaining({ source: tideClock, target: saved.body.data.target.modelId, isComposed: false }),
+    );
   });
 
   it("answers a repeated search with the stored run instead of searching again", async () => {
-    const body = { mode: "given-target", notion: "block-emulation", sourceModelId: modelIds.F, targetModelId: modelIds.G, maxTime: 2, maxBlock: 2 };
+    const body = {
+      mode: "given-target",
+      notion: "block-emulation",
+      sourceModelId: modelIds.F,
+      targetModelId: modelIds.G,
+      maxTime: 2,
+      maxBlock: 2,
+    };
     const first = await modeler.post(`${base}/reductions/searches`).send(body);
     expect(first.status).toBe(201);
     const run = await finishedRun(first.body.data.id);
@@ -229,14 +297,25 @@ describe("POST /reductions/searches (searches as background runs)", () => {
   });
 
   it("reports a search that finds nothing as a succeeded run with no findings, within its bounds", async () => {
-    const res = await modeler.post(`${base}/reductions/searches`).send({ mode: "given-target", notion: "block-emulation", sourceModelId: modelIds.G, targetModelId: modelIds.F, maxTime: 1, maxBlock: 1 });
+    const res = await modeler
+      .post(`${base}/reductions/searches`)
+      .send({
+        mode: "given-target",
+        notion: "block-emulation",
+        sourceModelId: modelIds.G,
+        targetModelId: modelIds.F,
+        maxTime: 1,
+        maxBlock: 1,
+      });
     const run = await finishedRun(res.body.data.id);
     expect(run.state).toBe("succeeded");
     expect(run.result).toMatchObject({ found: false, findings: [], bounds: { maxTime: 1, maxBlock: 1 } });
   });
 
   it("refuses observables that are not nodes of the source, naming them", async () => {
-    const res = await modeler.post(`${base}/reductions/searches`).send({ mode: "coarse-grain", sourceModelId: modelIds.F, observe: ["P", "Nope"] });
+    const res = await modeler
+      .post(`${base}/reductions/searches`)
+      .send({ mode: "coarse-grain", sourceModelId: modelIds.F, observe: ["P", "Nope"] });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toContain('"Nope"');
   });
@@ -245,7 +324,9 @@ describe("POST /reductions/searches (searches as background runs)", () => {
     const body = { mode: "discover", sourceModelId: modelIds.F, maxTargetNodes: 1 };
     expect((await viewer.post(`${base}/reductions/searches`).send(body)).status).toBe(403);
     expect((await reviewer.post(`${base}/reductions/searches`).send(body)).status).toBe(403);
-    const other = await modeler.post(`${base}/reductions/searches`).send({ ...body, sourceModelId: "00000000-0000-4000-8000-00000000ffff" });
+    const other = await modeler
+      .post(`${base}/reductions/searches`)
+      .send({ ...body, sourceModelId: "00000000-0000-4000-8000-00000000ffff" });
     expect(other.status).toBe(404);
   });
 });

@@ -9,14 +9,22 @@ import { hashPassword } from "../../server/http/password-hash";
 import { SESSION_COOKIE, signSession } from "../../server/http/session";
 import { insertReduction } from "../../server/db/repositories/reductions";
 import { statementKey } from "../../server/reductions/statement-key";
-import { blockEmulationCertificate } from "../../shared/engine/certificates";
-import { compileDefinition, readRuleText } from "../../shared/engine/rules";
-import type { Certificate } from "../../shared/schemas/reductions";
+import { blockEmulationCertificate } from "@shared/engine/certificates";
+import { compileDefinition, readRuleText } from "@shared/engine/rules";
+import type { Certificate } from "@shared/schemas/reductions";
 import { buildTestApp, testConfig } from "../support/test-app";
 
 const callers = ["anonymous", "nonMember", "viewer", "reviewer", "modeler", "owner", "admin"] as const;
 type Caller = (typeof callers)[number];
-type Statuses = [anonymous: number, nonMember: number, viewer: number, reviewer: number, modeler: number, owner: number, admin: number];
+type Statuses = [
+  anonymous: number,
+  nonMember: number,
+  viewer: number,
+  reviewer: number,
+  modeler: number,
+  owner: number,
+  admin: number,
+];
 
 /** What a route may refer to; each cell gets fresh values. */
 interface Fixture {
@@ -52,67 +60,243 @@ const PASSWORD = "matrix-password-1";
 // anonymous, non-member, viewer, reviewer, modeler, owner, admin
 const rows: Row[] = [
   { method: "get", path: "/api/auth/session", expected: [200, 200, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/auth/sign-up", body: (f) => ({ email: f.freshEmail, displayName: "New person", password: PASSWORD }), expected: [201, 201, 201, 201, 201, 201, 201] },
-  { method: "post", path: "/api/auth/sign-in", body: () => ({ email: emailOf.viewer, password: PASSWORD }), expected: [200, 200, 200, 200, 200, 200, 200] },
+  {
+    method: "post",
+    path: "/api/auth/sign-up",
+    body: (f) => ({ email: f.freshEmail, displayName: "New person", password: PASSWORD }),
+    expected: [201, 201, 201, 201, 201, 201, 201],
+  },
+  {
+    method: "post",
+    path: "/api/auth/sign-in",
+    body: () => ({ email: emailOf.viewer, password: PASSWORD }),
+    expected: [200, 200, 200, 200, 200, 200, 200],
+  },
   { method: "post", path: "/api/auth/sign-out", expected: [204, 204, 204, 204, 204, 204, 204] },
   { method: "get", path: "/api/users/me", expected: [401, 200, 200, 200, 200, 200, 200] },
-  { method: "patch", path: "/api/users/me", body: () => ({ displayName: "Renamed in the matrix" }), expected: [401, 200, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/users/me/password", body: () => ({ currentPassword: "not-the-password", newPassword: "another-password-2" }), expected: [401, 400, 400, 400, 400, 400, 400] },
+  {
+    method: "patch",
+    path: "/api/users/me",
+    body: () => ({ displayName: "Renamed in the matrix" }),
+    expected: [401, 200, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/users/me/password",
+    body: () => ({ currentPassword: "not-the-password", newPassword: "another-password-2" }),
+    expected: [401, 400, 400, 400, 400, 400, 400],
+  },
   { method: "get", path: "/api/mailbox", expected: [401, 403, 403, 403, 403, 403, 200] },
   { method: "get", path: "/api/projects", expected: [401, 200, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects", body: () => ({ name: "Matrix scratch project" }), expected: [401, 201, 201, 201, 201, 201, 201] },
+  {
+    method: "post",
+    path: "/api/projects",
+    body: () => ({ name: "Matrix scratch project" }),
+    expected: [401, 201, 201, 201, 201, 201, 201],
+  },
   { method: "get", path: "/api/projects/{projectId}", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "patch", path: "/api/projects/{projectId}", body: () => ({ name: "Renamed project" }), expected: [401, 404, 403, 403, 403, 200, 200] },
-  { method: "delete", path: "/api/projects/{projectId}", body: (f) => ({ confirmName: f.projectName }), expected: [401, 404, 403, 403, 403, 204, 204] },
+  {
+    method: "patch",
+    path: "/api/projects/{projectId}",
+    body: () => ({ name: "Renamed project" }),
+    expected: [401, 404, 403, 403, 403, 200, 200],
+  },
+  {
+    method: "delete",
+    path: "/api/projects/{projectId}",
+    body: (f) => ({ confirmName: f.projectName }),
+    expected: [401, 404, 403, 403, 403, 204, 204],
+  },
   { method: "get", path: "/api/projects/{projectId}/members", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "patch", path: "/api/projects/{projectId}/members/{targetUserId}", body: () => ({ role: "modeler" }), expected: [401, 404, 403, 403, 403, 200, 200] },
-  { method: "delete", path: "/api/projects/{projectId}/members/{targetUserId}", expected: [401, 404, 403, 403, 403, 204, 204] },
+  {
+    method: "patch",
+    path: "/api/projects/{projectId}/members/{targetUserId}",
+    body: () => ({ role: "modeler" }),
+    expected: [401, 404, 403, 403, 403, 200, 200],
+  },
+  {
+    method: "delete",
+    path: "/api/projects/{projectId}/members/{targetUserId}",
+    expected: [401, 404, 403, 403, 403, 204, 204],
+  },
   { method: "get", path: "/api/projects/{projectId}/invitations", expected: [401, 404, 403, 403, 403, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/invitations", body: (f) => ({ email: f.freshEmail, role: "viewer" }), expected: [401, 404, 403, 403, 403, 201, 201] },
-  { method: "delete", path: "/api/projects/{projectId}/invitations/{invitationId}", expected: [401, 404, 403, 403, 403, 204, 204] },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/invitations",
+    body: (f) => ({ email: f.freshEmail, role: "viewer" }),
+    expected: [401, 404, 403, 403, 403, 201, 201],
+  },
+  {
+    method: "delete",
+    path: "/api/projects/{projectId}/invitations/{invitationId}",
+    expected: [401, 404, 403, 403, 403, 204, 204],
+  },
   { method: "get", path: "/api/projects/{projectId}/audit", expected: [401, 404, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/invitations/{token}", expected: [200, 200, 200, 200, 200, 200, 200] },
   // The invitation is for an address without an account: only an anonymous visitor can create that account.
-  { method: "post", path: "/api/invitations/{token}/accept", body: () => ({ displayName: "Invited person", password: PASSWORD }), expected: [200, 403, 403, 403, 403, 403, 403] },
+  {
+    method: "post",
+    path: "/api/invitations/{token}/accept",
+    body: () => ({ displayName: "Invited person", password: PASSWORD }),
+    expected: [200, 403, 403, 403, 403, 403, 403],
+  },
   { method: "get", path: "/api/projects/{projectId}/runs", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/runs", body: () => ({ kind: "sleep-count", params: { itemCount: 10, shardCount: 1 } }), expected: [401, 404, 403, 403, 201, 201, 201] },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/runs",
+    body: () => ({ kind: "sleep-count", params: { itemCount: 10, shardCount: 1 } }),
+    expected: [401, 404, 403, 403, 201, 201, 201],
+  },
   { method: "get", path: "/api/projects/{projectId}/runs/{runId}", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/runs/{runId}/cancel", expected: [401, 404, 403, 403, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/runs/{failedRunId}/retry", expected: [401, 404, 403, 403, 200, 200, 200] },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/runs/{runId}/cancel",
+    expected: [401, 404, 403, 403, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/runs/{failedRunId}/retry",
+    expected: [401, 404, 403, 403, 200, 200, 200],
+  },
   { method: "delete", path: "/api/projects/{projectId}/runs/{runId}", expected: [401, 404, 403, 403, 204, 204, 204] },
   { method: "get", path: "/api/projects/{projectId}/models", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/models", body: () => ({ name: "Matrix model", ruleText: "A' = !B\nB' = !A\n" }), expected: [401, 404, 403, 403, 201, 201, 201] },
-  { method: "post", path: "/api/projects/{projectId}/models/validate", body: () => ({ ruleText: "A' = !A\n" }), expected: [401, 404, 200, 200, 200, 200, 200] },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models",
+    body: () => ({ name: "Matrix model", ruleText: "A' = !B\nB' = !A\n" }),
+    expected: [401, 404, 403, 403, 201, 201, 201],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/validate",
+    body: () => ({ ruleText: "A' = !A\n" }),
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
   // A JSON body carries no file: callers allowed to write get 400, the others are stopped before reading it.
-  { method: "post", path: "/api/projects/{projectId}/models/upload", body: () => ({ name: "No file" }), expected: [401, 404, 403, 403, 400, 400, 400] },
-  { method: "post", path: "/api/projects/{projectId}/models/generate", body: () => ({ name: "Matrix ring", generator: { kind: "eca", rule: 30, radius: 1, cells: 6 } }), expected: [401, 404, 403, 403, 201, 201, 201] },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/upload",
+    body: () => ({ name: "No file" }),
+    expected: [401, 404, 403, 403, 400, 400, 400],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/generate",
+    body: () => ({ name: "Matrix ring", generator: { kind: "eca", rule: 30, radius: 1, cells: 6 } }),
+    expected: [401, 404, 403, 403, 201, 201, 201],
+  },
   { method: "get", path: "/api/projects/{projectId}/models/{modelId}", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/models/{modelId}/revisions", body: () => ({ ruleText: "A' = B\nB' = A\n" }), expected: [401, 404, 403, 403, 201, 201, 201] },
-  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/export?format=rules", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/original", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/attractors", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/perturbation", body: () => ({ knockOut: ["A"] }), expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/trajectory", body: () => ({ initial: "01" }), expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "get", path: "/api/projects/{projectId}/models/{modelId}/revisions/1/structure", expected: [401, 404, 200, 200, 200, 200, 200] },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions",
+    body: () => ({ ruleText: "A' = B\nB' = A\n" }),
+    expected: [401, 404, 403, 403, 201, 201, 201],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions/1",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions/1/export?format=rules",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions/1/original",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions/1/attractors",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions/1/perturbation",
+    body: () => ({ knockOut: ["A"] }),
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions/1/trajectory",
+    body: () => ({ initial: "01" }),
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/revisions/1/structure",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
   { method: "get", path: "/api/projects/{projectId}/reductions", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/reductions", body: (f) => ({ sourceModelId: f.modelId, targetModelId: f.modelId, certificate: f.certificate }), expected: [401, 404, 403, 403, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/reductions/searches", body: (f) => ({ mode: "discover", sourceModelId: f.modelId, maxTargetNodes: 1 }), expected: [401, 404, 403, 403, 201, 201, 201] },
-  { method: "get", path: "/api/projects/{projectId}/reductions/{reductionId}", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "get", path: "/api/projects/{projectId}/reductions/{reductionId}/certificate", expected: [401, 404, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/decision", body: () => ({ decision: "approve", comment: "matrix" }), expected: [401, 404, 403, 200, 403, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/verify", expected: [401, 404, 403, 200, 403, 200, 200] },
-  { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/comments", body: () => ({ body: "matrix comment" }), expected: [401, 404, 403, 201, 201, 201, 201] },
-  { method: "post", path: "/api/projects/{projectId}/reductions/{reductionId}/save-target", body: () => ({ name: "Matrix target" }), expected: [401, 404, 403, 403, 409, 409, 409] },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/reductions",
+    body: (f) => ({ sourceModelId: f.modelId, targetModelId: f.modelId, certificate: f.certificate }),
+    expected: [401, 404, 403, 403, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/reductions/searches",
+    body: (f) => ({ mode: "discover", sourceModelId: f.modelId, maxTargetNodes: 1 }),
+    expected: [401, 404, 403, 403, 201, 201, 201],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/reductions/{reductionId}",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/reductions/{reductionId}/certificate",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/reductions/{reductionId}/decision",
+    body: () => ({ decision: "approve", comment: "matrix" }),
+    expected: [401, 404, 403, 200, 403, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/reductions/{reductionId}/verify",
+    expected: [401, 404, 403, 200, 403, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/reductions/{reductionId}/comments",
+    body: () => ({ body: "matrix comment" }),
+    expected: [401, 404, 403, 201, 201, 201, 201],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/reductions/{reductionId}/save-target",
+    body: () => ({ name: "Matrix target" }),
+    expected: [401, 404, 403, 403, 409, 409, 409],
+  },
   { method: "get", path: "/api/projects/{projectId}/model-hierarchy", expected: [401, 404, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/notifications", expected: [401, 200, 200, 200, 200, 200, 200] },
-  { method: "post", path: "/api/notifications/read", body: () => ({ all: true }), expected: [401, 200, 200, 200, 200, 200, 200] },
+  {
+    method: "post",
+    path: "/api/notifications/read",
+    body: () => ({ all: true }),
+    expected: [401, 200, 200, 200, 200, 200, 200],
+  },
   // automata: any signed-in user reads (block size 3 is computed inline in well under a second)
   { method: "get", path: "/api/automata/hierarchies", expected: [401, 200, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/automata/hierarchy?maxBlock=3", expected: [401, 200, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/automata/rules/18?maxBlock=3", expected: [401, 200, 200, 200, 200, 200, 200] },
-  { method: "get", path: "/api/automata/witness?source=18&target=90&maxBlock=3", expected: [401, 200, 200, 200, 200, 200, 200] },
+  {
+    method: "get",
+    path: "/api/automata/witness?source=18&target=90&maxBlock=3",
+    expected: [401, 200, 200, 200, 200, 200, 200],
+  },
 ];
 
 const t = buildTestApp();
@@ -123,8 +307,14 @@ const cookieOf = {} as Record<Exclude<Caller, "anonymous">, string>;
 const runId = randomUUID().slice(0, 8);
 
 async function insertUser(label: string, siteRole: "admin" | "member", passwordHash: string): Promise<string> {
-  const [row] = await t.db("users")
-    .insert({ email: `matrix-${label.toLowerCase()}-${runId}@fixture.emulant.test`, display_name: `Matrix ${label}`, site_role: siteRole, password_hash: passwordHash })
+  const [row] = await t
+    .db("users")
+    .insert({
+      email: `matrix-${label.toLowerCase()}-${runId}@fixture.emulant.test`,
+      display_name: `Matrix ${label}`,
+      site_role: siteRole,
+      password_hash: passwordHash,
+    })
     .returning("id");
   return (row as { id: string }).id;
 }
@@ -134,7 +324,11 @@ async function makeFixture(): Promise<Fixture> {
   const [project] = await t.db("projects").insert({ name: projectName }).returning("id");
   const projectId = (project as { id: string }).id;
   const passwordHash = await t.db("users").select("password_hash").where({ id: userId.viewer }).first();
-  const targetUserId = await insertUser(`target-${randomUUID().slice(0, 8)}`, "member", (passwordHash as { password_hash: string }).password_hash);
+  const targetUserId = await insertUser(
+    `target-${randomUUID().slice(0, 8)}`,
+    "member",
+    (passwordHash as { password_hash: string }).password_hash,
+  );
   await t.db("memberships").insert([
     { project_id: projectId, user_id: userId.viewer, role: "viewer" },
     { project_id: projectId, user_id: userId.reviewer, role: "reviewer" },
@@ -145,16 +339,42 @@ async function makeFixture(): Promise<Fixture> {
   const pending = newInvitationToken();
   const accept = newInvitationToken();
   const expiresAt = new Date(Date.now() + 3_600_000);
-  const [invitation] = await t.db("invitations")
-    .insert({ project_id: projectId, email: `pending-${randomUUID().slice(0, 8)}@fixture.emulant.test`, role: "viewer", token_hash: pending.tokenHash, invited_by: userId.owner, expires_at: expiresAt })
+  const [invitation] = await t
+    .db("invitations")
+    .insert({
+      project_id: projectId,
+      email: `pending-${randomUUID().slice(0, 8)}@fixture.emulant.test`,
+      role: "viewer",
+      token_hash: pending.tokenHash,
+      invited_by: userId.owner,
+      expires_at: expiresAt,
+    })
     .returning("id");
   await t.db("invitations").insert({
-    project_id: projectId, email: `invitee-${randomUUID().slice(0, 8)}@fixture.emulant.test`, role: "viewer", token_hash: accept.tokenHash, invited_by: userId.owner, expires_at: expiresAt,
+    project_id: projectId,
+    email: `invitee-${randomUUID().slice(0, 8)}@fixture.emulant.test`,
+    role: "viewer",
+    token_hash: accept.tokenHash,
+    invited_by: userId.owner,
+    expires_at: expiresAt,
   });
   // Runs without shards: no worker ever picks them up, so their state is what the cell expects.
-  const run = { project_id: projectId, kind: "sleep-count", params: JSON.stringify({ itemCount: 1 }), params_hash: "matrix", time_limit_seconds: 60, shard_count: 0 };
-  const [queuedRun] = await t.db("runs").insert({ ...run, state: "queued" }).returning("id");
-  const [failedRun] = await t.db("runs").insert({ ...run, state: "failed", error: JSON.stringify({ code: "MATRIX", message: "failed for the matrix" }) }).returning("id");
+  const run = {
+    project_id: projectId,
+    kind: "sleep-count",
+    params: JSON.stringify({ itemCount: 1 }),
+    params_hash: "matrix",
+    time_limit_seconds: 60,
+    shard_count: 0,
+  };
+  const [queuedRun] = await t
+    .db("runs")
+    .insert({ ...run, state: "queued" })
+    .returning("id");
+  const [failedRun] = await t
+    .db("runs")
+    .insert({ ...run, state: "failed", error: JSON.stringify({ code: "MATRIX", message: "failed for the matrix" }) })
+    .returning("id");
   const modelId = await insertMatrixModel(projectId);
   const { reductionId, certificate } = await insertMatrixReduction(projectId, modelId);
   return {
@@ -173,32 +393,72 @@ async function makeFixture(): Promise<Fixture> {
 }
 
 async function insertMatrixModel(projectId: string): Promise<string> {
-  const toggle = { nodes: [{ name: "A", rule: { kind: "not", arg: { kind: "var", name: "B" } } }, { name: "B", rule: { kind: "not", arg: { kind: "var", name: "A" } } }] };
-  const [model] = await t.db("models").insert({ project_id: projectId, name: "Matrix toggle", created_by: userId.modeler }).returning("id");
+  const toggle = {
+    nodes: [
+      { name: "A", rule: { kind: "not", arg: { kind: "var", name: "B" } } },
+      { name: "B", rule: { kind: "not", arg: { kind: "var", name: "A" } } },
+    ],
+  };
+  const [model] = await t
+    .db("models")
+    .insert({ project_id: projectId, name: "Matrix toggle", created_by: userId.modeler })
+    .returning("id");
   const modelId = (model as { id: string }).id;
-  const [revision] = await t.db("model_revisions")
+  const [revision] = await t
+    .db("model_revisions")
     .insert({
-      model_id: modelId, revision: 1, definition: JSON.stringify(toggle), rule_text: "A' = !B\nB' = !A\n", node_count: 2, source: "rules", created_by: userId.modeler,
+      model_id: modelId,
+      revision: 1,
+      definition: JSON.stringify(toggle),
+      rule_text: "A' = !B\nB' = !A\n",
+      node_count: 2,
+      source: "rules",
+      created_by: userId.modeler,
       network_summary: JSON.stringify({ nodes: ["A", "B"], edgeCount: 2, inputs: [], thresholdNodes: [] }),
     })
     .returning("id");
   const bytes = Buffer.from("A' = !B\nB' = !A\n");
-  await t.db("model_files").insert({ revision_id: (revision as { id: string }).id, file_name: "toggle.rules", media_type: "text/plain", bytes, size_bytes: bytes.length });
+  await t
+    .db("model_files")
+    .insert({
+      revision_id: (revision as { id: string }).id,
+      file_name: "toggle.rules",
+      media_type: "text/plain",
+      bytes,
+      size_bytes: bytes.length,
+    });
   return modelId;
 }
 
 /** The toggle emulates itself with one-node blocks (the identity encoding); stored as a proposed reduction. */
-async function insertMatrixReduction(projectId: string, modelId: string): Promise<{ reductionId: string; certificate: Certificate }> {
-  const revision = (await t.db("model_revisions").where({ model_id: modelId, revision: 1 }).first("id", "rule_text")) as { id: string; rule_text: string };
+async function insertMatrixReduction(
+  projectId: string,
+  modelId: string,
+): Promise<{ reductionId: string; certificate: Certificate }> {
+  const revision = (await t
+    .db("model_revisions")
+    .where({ model_id: modelId, revision: 1 })
+    .first("id", "rule_text")) as { id: string; rule_text: string };
   const net = compileDefinition(readRuleText(revision.rule_text));
   const certificate = blockEmulationCertificate(net, net, {
     time: 1,
-    blocks: [{ nodes: [0], zero: [0], one: [1] }, { nodes: [1], zero: [0], one: [1] }],
+    blocks: [
+      { nodes: [0], zero: [0], one: [1] },
+      { nodes: [1], zero: [0], one: [1] },
+    ],
     context: [-1, -1],
   }) as Certificate;
   const stored = await insertReduction(t.db, {
-    projectId, sourceRevisionId: revision.id, targetRevisionId: revision.id, notion: "block-emulation", timeScale: 1, certificate,
-    targetKey: statementKey(certificate, revision.id), flags: [], foundBy: userId.modeler, foundInRunId: null,
+    projectId,
+    sourceRevisionId: revision.id,
+    targetRevisionId: revision.id,
+    notion: "block-emulation",
+    timeScale: 1,
+    certificate,
+    targetKey: statementKey(certificate, revision.id),
+    flags: [],
+    foundBy: userId.modeler,
+    foundInRunId: null,
   });
   return { reductionId: stored.id, certificate };
 }

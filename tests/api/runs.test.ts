@@ -7,8 +7,8 @@ import { loadRunSettings } from "../../server/jobs/run-settings";
 import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
 import { createLogger } from "../../server/logger";
 import { createFakeMailer } from "../../server/mail/mailer";
-import { HierarchyRunResult } from "../../shared/schemas/automata";
-import type { Run } from "../../shared/schemas/runs";
+import { HierarchyRunResult } from "@shared/schemas/automata";
+import type { Run } from "@shared/schemas/runs";
 import { signInAs, type Agent } from "../support/sessions";
 import { buildTestApp, testConfig } from "../support/test-app";
 
@@ -25,8 +25,16 @@ let worker: RunWorker | null = null;
 
 const startWorker = async (over: Partial<ReturnType<typeof loadRunSettings>> = {}) => {
   worker = await startRunWorker({
-    db: t.db, log, databaseUrl: config.DATABASE_URL, mailer, publicUrl: config.publicUrl,
-    settings: { ...loadRunSettings({ RUN_HEARTBEAT_MS: "200", RUN_STALE_SECONDS: "5", RUN_REAP_EVERY_MS: "500" }, 2), notifyAfterSeconds: 0, ...over },
+    db: t.db,
+    log,
+    databaseUrl: config.DATABASE_URL,
+    mailer,
+    publicUrl: config.publicUrl,
+    settings: {
+      ...loadRunSettings({ RUN_HEARTBEAT_MS: "200", RUN_STALE_SECONDS: "5", RUN_REAP_EVERY_MS: "500" }, 2),
+      notifyAfterSeconds: 0,
+      ...over,
+    },
   });
 };
 const stopWorker = async () => {
@@ -44,7 +52,10 @@ async function finished(runId: string, timeoutMs = 30_000): Promise<Run> {
   }
 }
 
-const sleepCount = (itemCount: number, extra: object = {}) => ({ kind: "sleep-count", params: { itemCount, shardCount: 2, delayMsPerItem: 0, ...extra } });
+const sleepCount = (itemCount: number, extra: object = {}) => ({
+  kind: "sleep-count",
+  params: { itemCount, shardCount: 2, delayMsPerItem: 0, ...extra },
+});
 
 beforeAll(async () => {
   owner = await signInAs(t.app, "owner@demo.emulant.test");
@@ -83,7 +94,8 @@ describe("POST /api/projects/:projectId/runs without a worker", () => {
     expect(cancel.status).toBe(200);
     expect(cancel.body.data.state).toBe("cancelled");
     expect((await owner.post(`/api/projects/${projectId}/runs/${ids[0]}/cancel`)).status).toBe(409);
-    for (const id of ids.slice(1)) expect((await owner.delete(`/api/projects/${projectId}/runs/${id}`)).status).toBe(204);
+    for (const id of ids.slice(1))
+      expect((await owner.delete(`/api/projects/${projectId}/runs/${id}`)).status).toBe(204);
     expect((await owner.get(`/api/projects/${projectId}/runs/${ids[1]}`)).status).toBe(404);
   });
 
@@ -118,13 +130,17 @@ describe("runs with an in-process worker", () => {
     }
     expect(done.result).toEqual({ itemCount: 500, sum, oddCount: odd });
     // Key order in params does not matter for reuse.
-    const again = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "sleep-count", params: { delayMsPerItem: 0, shardCount: 2, itemCount: 500 } });
+    const again = await owner
+      .post(`/api/projects/${projectId}/runs`)
+      .send({ kind: "sleep-count", params: { delayMsPerItem: 0, shardCount: 2, itemCount: 500 } });
     expect(again.status).toBe(200);
     expect(again.body.data).toMatchObject({ id: first.body.data.id, reused: true, state: "succeeded" });
   });
 
   it("retries a cancelled run, keeping shards already done, and the result is complete", async () => {
-    const res = await owner.post(`/api/projects/${projectId}/runs`).send(sleepCount(900, { shardCount: 3, delayMsPerItem: 4 }));
+    const res = await owner
+      .post(`/api/projects/${projectId}/runs`)
+      .send(sleepCount(900, { shardCount: 3, delayMsPerItem: 4 }));
     const id = res.body.data.id as string;
     // Cancel once a shard is done (two run at once, ~1.2 s each, then the third), so the retry has something to keep.
     for (let i = 0; i < 200; i++) {
@@ -141,13 +157,21 @@ describe("runs with an in-process worker", () => {
     const done = await finished(id);
     expect(done.state).toBe("succeeded");
     expect((done.result as { itemCount: number }).itemCount).toBe(900);
-    const after = await t.db("run_shards").whereIn("id", kept.map((k) => k.id)).select("id", "completed_at");
+    const after = await t
+      .db("run_shards")
+      .whereIn(
+        "id",
+        kept.map((k) => k.id),
+      )
+      .select("id", "completed_at");
     expect(after.map((a) => a.completed_at.getTime()).sort()).toEqual(kept.map((k) => k.completed_at.getTime()).sort());
     expect((await owner.post(`/api/projects/${projectId}/runs/${id}/retry`)).status).toBe(409);
   });
 
   it("fails a run that exceeds its time limit with TIME_LIMIT", async () => {
-    const res = await owner.post(`/api/projects/${projectId}/runs`).send(sleepCount(400, { shardCount: 1, delayMsPerItem: 20 }));
+    const res = await owner
+      .post(`/api/projects/${projectId}/runs`)
+      .send(sleepCount(400, { shardCount: 1, delayMsPerItem: 20 }));
     await t.db("runs").where({ id: res.body.data.id }).update({ time_limit_seconds: 1 });
     const done = await finished(res.body.data.id);
     expect(done.state).toBe("failed");
@@ -174,9 +198,14 @@ describe("runs with an in-process worker", () => {
     expect(list.status).toBe(200);
     const mine = list.body.data.items.filter((n: { link: string }) => n.link?.includes(projectId));
     expect(mine.some((n: { kind: string }) => n.kind === "run.succeeded")).toBe(true);
-    expect(mine.some((n: { kind: string; body: string }) => n.kind === "run.failed" && n.body.includes("time limit"))).toBe(true);
+    expect(
+      mine.some((n: { kind: string; body: string }) => n.kind === "run.failed" && n.body.includes("time limit")),
+    ).toBe(true);
     expect(list.body.data.unreadCount).toBeGreaterThanOrEqual(2);
-    const mail = await t.db("mail_messages").whereRaw("? = any(mail_to)", ["owner@demo.emulant.test"]).where("subject", "like", "Emulant: Your sleep-count run%");
+    const mail = await t
+      .db("mail_messages")
+      .whereRaw("? = any(mail_to)", ["owner@demo.emulant.test"])
+      .where("subject", "like", "Emulant: Your sleep-count run%");
     expect(mail.length).toBeGreaterThanOrEqual(2);
     const read = await owner.post("/api/notifications/read").send({ all: true });
     expect(read.status).toBe(200);
@@ -187,27 +216,38 @@ describe("runs with an in-process worker", () => {
     // Two genes repressing each other have exactly the fixed points 10 and 01 under synchronous update, plus the
     // 2-cycle 00 <-> 11 (common practice; the circuit is the toggle switch of Gardner, Cantor and Collins,
     // "Construction of a genetic toggle switch in Escherichia coli", Nature 2000, read as a Boolean network).
-    const res = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "attractors", params: { ruleText: "a' = !b\nb' = !a" } });
+    const res = await owner
+      .post(`/api/projects/${projectId}/runs`)
+      .send({ kind: "attractors", params: { ruleText: "a' = !b\nb' = !a" } });
     expect(res.status).toBe(201);
     const done = await finished(res.body.data.id);
     expect(done.state).toBe("succeeded");
     const result = done.result as { attractors: { length: number; states: string[] }[] };
-    const fixed = result.attractors.filter((a) => a.length === 1).flatMap((a) => a.states).sort();
+    const fixed = result.attractors
+      .filter((a) => a.length === 1)
+      .flatMap((a) => a.states)
+      .sort();
     expect(fixed).toEqual(["01", "10"]);
     expect(result.attractors.filter((a) => a.length === 2)).toHaveLength(1);
   });
 
   it("runs the attractors kind on a model revision of the project, and refuses a revision id from elsewhere with 404", async () => {
-    const model = await owner.post(`/api/projects/${projectId}/models`).send({ name: `Switch ${randomUUID().slice(0, 6)}`, ruleText: "a' = !b\nb' = !a" });
+    const model = await owner
+      .post(`/api/projects/${projectId}/models`)
+      .send({ name: `Switch ${randomUUID().slice(0, 6)}`, ruleText: "a' = !b\nb' = !a" });
     expect(model.status).toBe(201);
     const revision = await t.db("model_revisions").where({ model_id: model.body.data.model.id }).first();
-    const res = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "attractors", modelRevisionId: revision.id, params: {} });
+    const res = await owner
+      .post(`/api/projects/${projectId}/runs`)
+      .send({ kind: "attractors", modelRevisionId: revision.id, params: {} });
     expect(res.status).toBe(201);
     expect(res.body.data.modelRevisionId).toBe(revision.id);
     const done = await finished(res.body.data.id);
     expect(done.state).toBe("succeeded");
     expect((done.result as { attractors: unknown[] }).attractors).toHaveLength(3);
-    const stranger = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "attractors", modelRevisionId: randomUUID(), params: {} });
+    const stranger = await owner
+      .post(`/api/projects/${projectId}/runs`)
+      .send({ kind: "attractors", modelRevisionId: randomUUID(), params: {} });
     expect(stranger.status).toBe(404);
     const neither = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "attractors", params: {} });
     expect(neither.status).toBe(400);
@@ -219,7 +259,9 @@ describe("the eca-hierarchy kind", () => {
   afterAll(() => stopWorker());
 
   it("computes the hierarchy in shards whose merge equals the one-call computation, as the automata pages expect it", async () => {
-    const res = await owner.post(`/api/projects/${projectId}/runs`).send({ kind: "eca-hierarchy", params: { maxBlock: 3 } });
+    const res = await owner
+      .post(`/api/projects/${projectId}/runs`)
+      .send({ kind: "eca-hierarchy", params: { maxBlock: 3 } });
     expect(res.status).toBe(201);
     expect(res.body.data.shardCount).toBe(8);
     const done = await finished(res.body.data.id, 60_000);

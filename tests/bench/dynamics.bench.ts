@@ -5,8 +5,8 @@
 import { spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import seedrandom from "seedrandom";
-import { networkFromFunctions, type BooleanNetwork } from "../../shared/engine/network";
-import { analyseSynchronous } from "../../shared/engine/state-graph";
+import { networkFromFunctions, type BooleanNetwork } from "@shared/engine/network";
+import { analyseSynchronous } from "@shared/engine/state-graph";
 
 function randomNK(n: number, k: number, seed: number): BooleanNetwork {
   const rng = seedrandom(String(seed));
@@ -81,7 +81,15 @@ function measureOne(kind: string, n: number, k: number, seed: number): void {
   const seconds = (performance.now() - t0) / 1000;
   const usage = process.resourceUsage();
   const heap = process.memoryUsage();
-  console.log(JSON.stringify({ seconds, maxRssMB: usage.maxRSS / 1024, heapUsedMB: heap.heapUsed / 2 ** 20, arrayBuffersMB: heap.arrayBuffers / 2 ** 20, ...summary }));
+  console.log(
+    JSON.stringify({
+      seconds,
+      maxRssMB: usage.maxRSS / 1024,
+      heapUsedMB: heap.heapUsed / 2 ** 20,
+      arrayBuffersMB: heap.arrayBuffers / 2 ** 20,
+      ...summary,
+    }),
+  );
 }
 
 function main(): void {
@@ -97,19 +105,41 @@ function main(): void {
     [24, 2, 3],
     [24, 3, 4],
   ];
-  console.log("Exact synchronous analysis, seeded random NK networks (p = 0.5). Timings on a shared 2-core machine are noisy.");
+  console.log(
+    "Exact synchronous analysis, seeded random NK networks (p = 0.5). Timings on a shared 2-core machine are noisy.",
+  );
   console.log("Targets: N=20 under 1 s, N=24 under 20 s (fast engine).");
-  console.log("Memory: peak resident set (maxRSS, includes the Node/tsx runtime of about 60 MB) and, in brackets, V8 heap + typed-array buffers at the end of the run.");
-  console.log("N   K  seed | fast s   fast maxRSS MB (heap+buf) | ref s    ref maxRSS MB (heap+buf) | ref/fast time | attractors  max basin  max transient");
+  console.log(
+    "Memory: peak resident set (maxRSS, includes the Node/tsx runtime of about 60 MB) and, in brackets, V8 heap + typed-array buffers at the end of the run.",
+  );
+  console.log(
+    "N   K  seed | fast s   fast maxRSS MB (heap+buf) | ref s    ref maxRSS MB (heap+buf) | ref/fast time | attractors  max basin  max transient",
+  );
   for (const [n, k, seed] of cases) {
     const run = (kind: string) => {
-      const r = spawnSync(process.execPath, ["--import", "tsx", self, "--one", kind, String(n), String(k), String(seed)], { encoding: "utf8", maxBuffer: 1 << 20 });
+      const r = spawnSync(
+        process.execPath,
+        ["--import", "tsx", self, "--one", kind, String(n), String(k), String(seed)],
+        { encoding: "utf8", maxBuffer: 1 << 20 },
+      );
       if (r.status !== 0) throw new Error(`${kind} run failed: ${r.stderr}`);
-      return JSON.parse(r.stdout.trim().split("\n").at(-1)!) as { seconds: number; maxRssMB: number; heapUsedMB: number; arrayBuffersMB: number; attractors: number; biggestBasin: number; maxTransient: number };
+      return JSON.parse(r.stdout.trim().split("\n").at(-1)!) as {
+        seconds: number;
+        maxRssMB: number;
+        heapUsedMB: number;
+        arrayBuffersMB: number;
+        attractors: number;
+        biggestBasin: number;
+        maxTransient: number;
+      };
     };
     const fast = run("fast");
     const ref = run("reference");
-    if (fast.attractors !== ref.attractors || fast.biggestBasin !== ref.biggestBasin || fast.maxTransient !== ref.maxTransient) {
+    if (
+      fast.attractors !== ref.attractors ||
+      fast.biggestBasin !== ref.biggestBasin ||
+      fast.maxTransient !== ref.maxTransient
+    ) {
       throw new Error(`fast and reference disagree on N=${n} K=${k} seed=${seed}`);
     }
     console.log(

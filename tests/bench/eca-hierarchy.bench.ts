@@ -5,8 +5,14 @@
 import { spawnSync } from "node:child_process";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { Worker, isMainThread, parentPort, workerData } from "node:worker_threads";
-import { ecaHierarchy, naiveEcaMinBlocks, runHierarchyShard, mergeHierarchyParts, assembleEcaHierarchy } from "../../shared/engine/block-emulation";
-import type { HierarchyPart } from "../../shared/engine/block-emulation";
+import {
+  ecaHierarchy,
+  naiveEcaMinBlocks,
+  runHierarchyShard,
+  mergeHierarchyParts,
+  assembleEcaHierarchy,
+} from "@shared/engine/block-emulation";
+import type { HierarchyPart } from "@shared/engine/block-emulation";
 
 interface Measure {
   seconds: number;
@@ -28,7 +34,11 @@ function heapMB(): number {
 }
 
 /** The hierarchy split into `threads` shards, one worker thread each, merged and assembled on the main thread. */
-async function threadedHierarchy(maxBlock: number, threads: number, self: string): Promise<{ pairs: number; relations: number }> {
+async function threadedHierarchy(
+  maxBlock: number,
+  threads: number,
+  self: string,
+): Promise<{ pairs: number; relations: number }> {
   const parts = await Promise.all(
     Array.from(
       { length: threads },
@@ -73,7 +83,17 @@ async function measureChild(kind: string, a: number, b: number): Promise<void> {
   const seconds = (performance.now() - t0) / 1000;
   const cpu = process.cpuUsage(cpu0);
   const cpuSeconds = (cpu.user + cpu.system) / 1e6;
-  console.log(JSON.stringify({ seconds, cpuSeconds, maxRssMB: process.resourceUsage().maxRSS / 1024, peakHeapMB: peak, pairs, relations, rules }));
+  console.log(
+    JSON.stringify({
+      seconds,
+      cpuSeconds,
+      maxRssMB: process.resourceUsage().maxRSS / 1024,
+      peakHeapMB: peak,
+      pairs,
+      relations,
+      rules,
+    }),
+  );
 }
 
 function spawn(self: string, kind: string, a: number, b: number, timeoutS?: number): Measure | null {
@@ -83,7 +103,8 @@ function spawn(self: string, kind: string, a: number, b: number, timeoutS?: numb
     timeout: timeoutS ? timeoutS * 1000 : undefined,
   });
   if (r.error || r.status !== 0) {
-    if (timeoutS && (r.signal === "SIGTERM" || (r.error as NodeJS.ErrnoException | undefined)?.code === "ETIMEDOUT")) return null;
+    if (timeoutS && (r.signal === "SIGTERM" || (r.error as NodeJS.ErrnoException | undefined)?.code === "ETIMEDOUT"))
+      return null;
     throw new Error(`${kind} run failed: ${r.stderr || r.error}`);
   }
   return JSON.parse(r.stdout.trim().split("\n").at(-1)!) as Measure;
@@ -93,7 +114,11 @@ const naivePairs = (k: number) => 256 * 2 ** k * (2 ** k - 1);
 
 async function main(): Promise<void> {
   if (!isMainThread) {
-    const { maxBlock, shardIndex, shardCount } = workerData as { maxBlock: number; shardIndex: number; shardCount: number };
+    const { maxBlock, shardIndex, shardCount } = workerData as {
+      maxBlock: number;
+      shardIndex: number;
+      shardCount: number;
+    };
     parentPort!.postMessage(runHierarchyShard({ maxBlock, shardIndex, shardCount }).part);
     return;
   }
@@ -105,13 +130,25 @@ async function main(): Promise<void> {
   const self = fileURLToPath(import.meta.url);
   const blocks = [8, 10, 11, 12];
   const maxK = Math.max(...blocks);
-  console.log("Block-emulation hierarchy of the 256 elementary rules, block sizes 1..K, time t = k. Shared 2-core machine: timings are noisy.");
+  console.log(
+    "Block-emulation hierarchy of the 256 elementary rules, block sizes 1..K, time t = k. Shared 2-core machine: timings are noisy.",
+  );
   console.log("Targets: K=11 under 5 s, K=14 under 10 min (fast engine, one thread).");
-  console.log("CPU s is the run's own processor time (user + system): less sensitive than wall time to other work on the machine.");
-  console.log("Memory: peak resident set of the run's own process (maxRSS, includes ~60 MB of Node/tsx runtime) and peak V8 heap + buffers.");
-  console.log(`Naive reference: every ordered pair of distinct k-cell words, simulated cell by cell, for all 256 rules and every k <= K.`);
-  console.log(`  Capped: a block size whose full run would exceed ${NAIVE_BUDGET_S} s is run on an even sample of source rules and scaled to 256;`);
-  console.log(`  when even one rule would exceed it, its time is extrapolated from the last measured seconds per pair times (k/k')^2 (work per pair ~ k^2).`);
+  console.log(
+    "CPU s is the run's own processor time (user + system): less sensitive than wall time to other work on the machine.",
+  );
+  console.log(
+    "Memory: peak resident set of the run's own process (maxRSS, includes ~60 MB of Node/tsx runtime) and peak V8 heap + buffers.",
+  );
+  console.log(
+    `Naive reference: every ordered pair of distinct k-cell words, simulated cell by cell, for all 256 rules and every k <= K.`,
+  );
+  console.log(
+    `  Capped: a block size whose full run would exceed ${NAIVE_BUDGET_S} s is run on an even sample of source rules and scaled to 256;`,
+  );
+  console.log(
+    `  when even one rule would exceed it, its time is extrapolated from the last measured seconds per pair times (k/k')^2 (work per pair ~ k^2).`,
+  );
   console.log("");
   // naive, one block size at a time
   const naive: { k: number; seconds: number; how: string; maxRssMB: number; peakHeapMB: number }[] = [];
@@ -128,7 +165,13 @@ async function main(): Promise<void> {
     } else if (predictedPerRule * 2 <= NAIVE_BUDGET_S) {
       const rules = Math.max(2, Math.min(128, 2 ** Math.floor(Math.log2(NAIVE_BUDGET_S / predictedPerRule))));
       const m = spawn(self, "naive", k, rules)!;
-      naive.push({ k, seconds: (m.seconds * 256) / rules, how: `sampled ${rules}/256 rules`, maxRssMB: m.maxRssMB, peakHeapMB: m.peakHeapMB });
+      naive.push({
+        k,
+        seconds: (m.seconds * 256) / rules,
+        how: `sampled ${rules}/256 rules`,
+        maxRssMB: m.maxRssMB,
+        peakHeapMB: m.peakHeapMB,
+      });
       perPair = m.seconds / m.pairs;
       perPairK = k;
     } else {
@@ -137,13 +180,19 @@ async function main(): Promise<void> {
   }
   console.log("naive per block size: " + naive.map((n) => `k=${n.k} ${n.seconds.toFixed(1)} s (${n.how})`).join("; "));
   console.log("");
-  console.log("K  | fast s  (CPU s)  maxRSS MB  heap MB  pairs examined | naive s (how)                          maxRSS MB  heap MB  pairs examined | naive/fast time  pairs ratio");
+  console.log(
+    "K  | fast s  (CPU s)  maxRSS MB  heap MB  pairs examined | naive s (how)                          maxRSS MB  heap MB  pairs examined | naive/fast time  pairs ratio",
+  );
   for (const K of blocks) {
     const fast = spawn(self, "fast", K, 0)!;
     const parts = naive.filter((n) => n.k <= K);
     const nSeconds = parts.reduce((s, n) => s + n.seconds, 0);
     const measuredOnly = parts.every((n) => n.how === "measured");
-    const how = measuredOnly ? "measured" : parts.some((n) => n.how === "extrapolated") ? "partly extrapolated" : "partly sampled";
+    const how = measuredOnly
+      ? "measured"
+      : parts.some((n) => n.how === "extrapolated")
+        ? "partly extrapolated"
+        : "partly sampled";
     const nPairs = parts.reduce((s, n) => s + naivePairs(n.k), 0);
     const nRss = Math.max(...parts.map((n) => n.maxRssMB).filter((x) => !Number.isNaN(x)));
     const nHeap = Math.max(...parts.map((n) => n.peakHeapMB).filter((x) => !Number.isNaN(x)));
@@ -157,12 +206,16 @@ async function main(): Promise<void> {
   console.log("Same hierarchy split into 2 shards on 2 worker threads (CPU s counts both threads):");
   for (const K of [11, 12]) {
     const m = spawn(self, "threads", K, 2)!;
-    console.log(`K=${K}: ${m.seconds.toFixed(2)} s wall (${m.cpuSeconds.toFixed(2)} s CPU), maxRSS ${m.maxRssMB.toFixed(0)} MB, ${m.pairs} pairs examined, ${m.relations} relations`);
+    console.log(
+      `K=${K}: ${m.seconds.toFixed(2)} s wall (${m.cpuSeconds.toFixed(2)} s CPU), maxRSS ${m.maxRssMB.toFixed(0)} MB, ${m.pairs} pairs examined, ${m.relations} relations`,
+    );
   }
   console.log("");
   const k14 = spawn(self, "fast", 14, 0, FULL_K14_LIMIT_S);
   if (k14) {
-    console.log(`K=14 fast hierarchy: ${k14.seconds.toFixed(1)} s wall (${k14.cpuSeconds.toFixed(1)} s CPU), maxRSS ${k14.maxRssMB.toFixed(0)} MB, heap ${k14.peakHeapMB.toFixed(0)} MB, ${k14.pairs} pairs examined, ${k14.relations} relations`);
+    console.log(
+      `K=14 fast hierarchy: ${k14.seconds.toFixed(1)} s wall (${k14.cpuSeconds.toFixed(1)} s CPU), maxRSS ${k14.maxRssMB.toFixed(0)} MB, heap ${k14.peakHeapMB.toFixed(0)} MB, ${k14.pairs} pairs examined, ${k14.relations} relations`,
+    );
   } else {
     console.log(`K=14 fast hierarchy: did not finish within ${FULL_K14_LIMIT_S} s`);
   }

@@ -15,10 +15,10 @@ import {
   interactionCount,
   discoverEmulatedTargets,
   canonicalTargetKey,
-} from "../../shared/engine/emulation";
-import { findDynamicalEmbedding } from "../../shared/engine/embedding";
-import { coarseGrain, nodeObservable } from "../../shared/engine/coarse-graining";
-import { blockEmulationCertificate, embeddingCertificate, verifyCertificate } from "../../shared/engine/certificates";
+} from "@shared/engine/emulation";
+import { findDynamicalEmbedding } from "@shared/engine/embedding";
+import { coarseGrain, nodeObservable } from "@shared/engine/coarse-graining";
+import { blockEmulationCertificate, embeddingCertificate, verifyCertificate } from "@shared/engine/certificates";
 
 const rows: string[][] = [];
 const time = <T>(f: () => T): [T, number] => {
@@ -45,7 +45,12 @@ for (const n of [16, 24, 32, 64]) {
     const H = networkFromSuccessors(["h0", "h1", "h2"], powerTable(successorsOfNetwork(G), t));
     const [r, s] = time(() => searchBlockEmulation(source, H, { maxTime: 3, maxBlock: 3 }));
     const valid = r.found ? verifyCertificate(blockEmulationCertificate(source, H, r.witness!)).valid : "-";
-    rows.push([`emulate n=${n} target=G^${t}`, s.toFixed(2), verdict(s, 60), `found=${r.found} at t=${r.witness?.time ?? "-"} verified=${valid} sat=${r.satQueries}`]);
+    rows.push([
+      `emulate n=${n} target=G^${t}`,
+      s.toFixed(2),
+      verdict(s, 60),
+      `found=${r.found} at t=${r.witness?.time ?? "-"} verified=${valid} sat=${r.satQueries}`,
+    ]);
   }
   if (n === 16) {
     // For comparison: the exhaustive enumeration of encodings, which grows with 2^n and fits sources of about 12 nodes.
@@ -55,13 +60,23 @@ for (const n of [16, 24, 32, 64]) {
       const H = networkFromSuccessors(["h0", "h1", "h2"], powerTable(successorsOfNetwork(G), t));
       const [r, s] = time(() => searchBlockEmulation(source, H, { maxTime: 3, maxBlock: 3, method: "enumeration" }));
       const valid = r.found ? verifyCertificate(blockEmulationCertificate(source, H, r.witness!)).valid : "-";
-      rows.push([`emulate n=12 target=G^${t} by enumeration`, s.toFixed(2), "", `found=${r.found} at t=${r.witness?.time ?? "-"} verified=${valid}`]);
+      rows.push([
+        `emulate n=12 target=G^${t} by enumeration`,
+        s.toFixed(2),
+        "",
+        `found=${r.found} at t=${r.witness?.time ?? "-"} verified=${valid}`,
+      ]);
     }
   }
   const unrelated = interactingTarget("u");
   const noise = randomNetwork(rng, n, 2);
   const [r, s] = time(() => searchBlockEmulation(noise, unrelated, { maxTime: 3, maxBlock: 3 }));
-  rows.push([`emulate n=${n} random source`, s.toFixed(2), verdict(s, 60), `found=${r.found} at t=${r.witness?.time ?? "-"} sat=${r.satQueries}`]);
+  rows.push([
+    `emulate n=${n} random source`,
+    s.toFixed(2),
+    verdict(s, 60),
+    `found=${r.found} at t=${r.witness?.time ?? "-"} sat=${r.satQueries}`,
+  ]);
 }
 
 // Discover (no target given): enumeration up to 16 nodes, SAT above; the planted target must be among the findings.
@@ -70,7 +85,12 @@ for (const n of [12, 24, 64]) {
   const { source } = plantEmulation(rng, G, n, 2);
   const [d, s] = time(() => discoverEmulatedTargets(source, { maxTargetNodes: 3, maxTime: 1, maxBlock: 2 }));
   const planted = d.targets.some((x) => x.key === canonicalTargetKey(successorsOfNetwork(G), 3));
-  rows.push([`discover n=${n} m<=3 t=1 blocks<=2`, s.toFixed(2), "", `targets=${d.targets.length} non-trivial=${d.targets.filter((x) => !x.trivial).length} planted found=${planted}`]);
+  rows.push([
+    `discover n=${n} m<=3 t=1 blocks<=2`,
+    s.toFixed(2),
+    "",
+    `targets=${d.targets.length} non-trivial=${d.targets.filter((x) => !x.trivial).length} planted found=${planted}`,
+  ]);
 }
 
 for (const n of [16, 20]) {
@@ -79,13 +99,34 @@ for (const n of [16, 20]) {
   const G2 = networkFromSuccessors(G.names, powerTable(successorsOfNetwork(G), 2));
   const [r, s] = time(() => findDynamicalEmbedding(source, G2, 2));
   const valid = r.found ? verifyCertificate(embeddingCertificate(source, G2, 2, r.map!)).valid : "-";
-  rows.push([`embed n=${n} planted m=4 target=G^2 t=2`, s.toFixed(2), n === 20 ? verdict(s, 10) : "", `found=${r.found} verified=${valid}`]);
+  rows.push([
+    `embed n=${n} planted m=4 target=G^2 t=2`,
+    s.toFixed(2),
+    n === 20 ? verdict(s, 10) : "",
+    `found=${r.found} verified=${valid}`,
+  ]);
   const random = randomNetwork(rng, n, 3);
   const [r2, s2] = time(() => findDynamicalEmbedding(random, G, 1));
-  rows.push([`embed n=${n} random source m=4 t=1`, s2.toFixed(2), n === 20 ? verdict(s2, 10) : "", `found=${r2.found}`]);
+  rows.push([
+    `embed n=${n} random source m=4 t=1`,
+    s2.toFixed(2),
+    n === 20 ? verdict(s2, 10) : "",
+    `found=${r2.found}`,
+  ]);
   const F = randomNetwork(rng, n, 3);
-  const [c, s3] = time(() => coarseGrain(F, [0, 1, 2].map((v) => nodeObservable(F, v)), 1));
-  rows.push([`coarse-grain n=${n} 3 observables`, s3.toFixed(2), n === 20 ? verdict(s3, 10) : "", `closes=${c.closes} groups=${c.groups}`]);
+  const [c, s3] = time(() =>
+    coarseGrain(
+      F,
+      [0, 1, 2].map((v) => nodeObservable(F, v)),
+      1,
+    ),
+  );
+  rows.push([
+    `coarse-grain n=${n} 3 observables`,
+    s3.toFixed(2),
+    n === 20 ? verdict(s3, 10) : "",
+    `closes=${c.closes} groups=${c.groups}`,
+  ]);
 }
 
 const width = [0, 1, 2, 3].map((i) => Math.max(...rows.map((r) => r[i]!.length), 8));

@@ -28,10 +28,9 @@ describe("accounts and projects in headless Chromium", () => {
     await page.getByRole("button", { name: "Create account" }).click();
     // The field itself stops at the 120-character limit the server enforces.
     expect((await page.getByLabel("Your name").inputValue()).length).toBe(120);
-    await expect.poll(() => page.getByRole("alert").allTextContents()).toEqual([
-      "Enter a valid e-mail address, like name@example.org",
-      "A password needs at least 10 characters",
-    ]);
+    await expect
+      .poll(() => page.getByRole("alert").allTextContents())
+      .toEqual(["Enter a valid e-mail address, like name@example.org", "A password needs at least 10 characters"]);
     await screenshot(page, "accounts-sign-up-errors");
     await page.getByLabel("Your name").fill("Lena Brightwater");
     await page.getByLabel("E-mail address").fill(email);
@@ -54,7 +53,12 @@ describe("accounts and projects in headless Chromium", () => {
     // Twelve projects through the API with the browser's own session, so the table has two pages.
     const created = await page.evaluate(async () => {
       const names = Array.from({ length: 12 }, (_, i) => `Algae set ${String(i + 1).padStart(2, "0")}`);
-      for (const name of names) await fetch("/api/projects", { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ name }) });
+      for (const name of names)
+        await fetch("/api/projects", {
+          method: "POST",
+          headers: { "Content-Type": "application/json" },
+          body: JSON.stringify({ name }),
+        });
       return names.length;
     });
     expect(created).toBe(12);

@@ -66,7 +66,9 @@ describe("invitation by e-mail in headless Chromium", () => {
     await page.getByTestId("invite-panel").getByLabel("E-mail address").fill(invitee);
     await page.getByLabel("Role", { exact: true }).selectOption("viewer");
     await page.getByRole("button", { name: "Send invitation" }).click();
-    await expect.poll(() => page.getByTestId("invite-panel").getByRole("status").textContent()).toContain(`Invitation sent to ${invitee} as viewer`);
+    await expect
+      .poll(() => page.getByTestId("invite-panel").getByRole("status").textContent())
+      .toContain(`Invitation sent to ${invitee} as viewer`);
     await expect.poll(() => page.getByTestId("pending-invitations").textContent()).toContain(invitee);
     await screenshot(page, "accounts-members-owner");
     await signOut(page);
@@ -114,12 +116,24 @@ describe("invitation by e-mail in headless Chromium", () => {
 
     // ...and the API refuses it even when asked directly from the signed-in page.
     const refused = await page.evaluate(async (id) => {
-      const rename = await fetch(`/api/projects/${id}`, { method: "PATCH", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ name: "Taken over" }) });
-      const invite = await fetch(`/api/projects/${id}/invitations`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ email: "x@example.org", role: "owner" }) });
+      const rename = await fetch(`/api/projects/${id}`, {
+        method: "PATCH",
+        headers: { "Content-Type": "application/json" },
+        body: JSON.stringify({ name: "Taken over" }),
+      });
+      const invite = await fetch(`/api/projects/${id}/invitations`, {
+        method: "POST",
+        headers: { "Content-Type": "application/json" },
+        body: JSON.stringify({ email: "x@example.org", role: "owner" }),
+      });
       return [rename.status, (await rename.json()).error.code, invite.status];
     }, projectId);
     expect(refused).toEqual([403, "FORBIDDEN", 403]);
-    const row = await server.db("memberships as m").join("users as u", "u.id", "m.user_id").where({ "m.project_id": projectId, "u.email": invitee }).first();
+    const row = await server
+      .db("memberships as m")
+      .join("users as u", "u.id", "m.user_id")
+      .where({ "m.project_id": projectId, "u.email": invitee })
+      .first();
     expect(row.role).toBe("viewer");
     expect(errors).toEqual([]);
   });

@@ -31,11 +31,15 @@ describe("models screens in headless Chromium", () => {
     await page.getByTestId("mode-upload").click();
 
     // A multi-valued file is refused with its reason shown, before anything is stored.
-    await page.getByTestId("upload-input").setInputFiles({ name: "multi.sbml", mimeType: "application/xml", buffer: Buffer.from(MULTIVALUED_SBML) });
+    await page
+      .getByTestId("upload-input")
+      .setInputFiles({ name: "multi.sbml", mimeType: "application/xml", buffer: Buffer.from(MULTIVALUED_SBML) });
     await expect.poll(() => page.getByTestId("parse-errors").textContent()).toContain("CI has maxLevel 2");
     await screenshot(page, "models-upload-error");
 
-    await page.getByTestId("upload-input").setInputFiles({ name: "ring.sbml", mimeType: "application/xml", buffer: Buffer.from(REPRESSOR_RING_SBML) });
+    await page
+      .getByTestId("upload-input")
+      .setInputFiles({ name: "ring.sbml", mimeType: "application/xml", buffer: Buffer.from(REPRESSOR_RING_SBML) });
     await page.waitForURL(/\/models\/[0-9a-f-]{36}$/);
     await expect.poll(() => page.getByTestId("model-title").textContent()).toBe("Repressor ring");
     await expect.poll(() => page.getByTestId("wiring-diagram").getAttribute("data-nodes")).toBe("3");
@@ -109,7 +113,9 @@ describe("models screens in headless Chromium", () => {
   it("offers a background run for the 24-node demo model and lays out its wiring", async () => {
     const { page } = browser;
     await page.goto(`${server.baseUrl}/projects/${PROJECT}/models/00000000-0000-4000-8000-000000000305`);
-    await expect.poll(() => page.getByTestId("wiring-diagram").getAttribute("data-nodes"), { timeout: 30_000 }).toBe("24");
+    await expect
+      .poll(() => page.getByTestId("wiring-diagram").getAttribute("data-nodes"), { timeout: 30_000 })
+      .toBe("24");
     await expect.poll(() => page.getByTestId("attractor-run-panel").isVisible()).toBe(true);
     expect(await page.getByTestId("start-attractor-run").isVisible()).toBe(true);
     await page.waitForTimeout(500);
@@ -122,10 +128,14 @@ describe("models screens in headless Chromium", () => {
   it("hides the writing controls from a viewer", async () => {
     const viewer = await openBrowser();
     try {
-      const res = await viewer.context.request.post(server.baseUrl + "/api/auth/sign-in", { data: { email: "viewer@demo.emulant.test", password: "demo-password" } });
+      const res = await viewer.context.request.post(server.baseUrl + "/api/auth/sign-in", {
+        data: { email: "viewer@demo.emulant.test", password: "demo-password" },
+      });
       expect(res.status()).toBe(200);
       await viewer.page.goto(`${server.baseUrl}/projects/${PROJECT}/models/00000000-0000-4000-8000-000000000302`);
-      await expect.poll(() => viewer.page.getByTestId("attractor-table").getAttribute("data-count"), { timeout: 30_000 }).toBe("12");
+      await expect
+        .poll(() => viewer.page.getByTestId("attractor-table").getAttribute("data-count"), { timeout: 30_000 })
+        .toBe("12");
       expect(await viewer.page.getByTestId("rule-editor").count()).toBe(0);
       await viewer.page.goto(`${server.baseUrl}/projects/${PROJECT}/models`);
       await expect.poll(() => viewer.page.getByTestId("models-table").isVisible()).toBe(true);

@@ -20,14 +20,27 @@ beforeAll(async () => {
   // stored search result or earlier decision from another test is reused.
   const { request } = browser.context;
   await browser.signIn("owner@demo.emulant.test");
-  const tide = await (await request.get(`${server.baseUrl}/api/projects/${DEMO_PROJECT}/models/${TIDE_CLOCK_MODEL}`)).json();
-  projectId = (await (await request.post(server.baseUrl + "/api/projects", { data: { name: `Reductions in the browser ${randomUUID().slice(0, 6)}` } })).json()).data.id;
-  for (const [email, role] of [["modeler@demo.emulant.test", "modeler"], ["reviewer@demo.emulant.test", "reviewer"]] as const) {
+  const tide = await (
+    await request.get(`${server.baseUrl}/api/projects/${DEMO_PROJECT}/models/${TIDE_CLOCK_MODEL}`)
+  ).json();
+  projectId = (
+    await (
+      await request.post(server.baseUrl + "/api/projects", {
+        data: { name: `Reductions in the browser ${randomUUID().slice(0, 6)}` },
+      })
+    ).json()
+  ).data.id;
+  for (const [email, role] of [
+    ["modeler@demo.emulant.test", "modeler"],
+    ["reviewer@demo.emulant.test", "reviewer"],
+  ] as const) {
     const user = await server.db("users").where({ email }).first("id");
     await server.db("memberships").insert({ project_id: projectId, user_id: user.id, role });
   }
   await browser.signIn("modeler@demo.emulant.test");
-  const created = await request.post(`${server.baseUrl}/api/projects/${projectId}/models`, { data: { name: "Tide clock (copy)", ruleText: tide.data.revision.ruleText } });
+  const created = await request.post(`${server.baseUrl}/api/projects/${projectId}/models`, {
+    data: { name: "Tide clock (copy)", ruleText: tide.data.revision.ruleText },
+  });
   if (created.status() !== 201) throw new Error(`model copy failed: ${created.status()}`);
 });
 
@@ -48,7 +61,9 @@ describe("reductions in the browser", () => {
     await page.getByTestId("start-search").click();
     await page.getByTestId("search-started").waitFor();
     await page.getByTestId("search-started").getByRole("link").click();
-    await expect.poll(() => page.getByTestId("run-state").getAttribute("data-state"), { timeout: 60_000 }).toBe("succeeded");
+    await expect
+      .poll(() => page.getByTestId("run-state").getAttribute("data-state"), { timeout: 60_000 })
+      .toBe("succeeded");
 
     await page.goto(`${server.baseUrl}/projects/${projectId}/reductions`);
     await page.getByTestId("reductions-table").waitFor();

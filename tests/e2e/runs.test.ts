@@ -13,7 +13,9 @@ beforeAll(async () => {
   browser = await openBrowserSession({ withWorker: true, signInAs: "owner@demo.emulant.test" });
   server = browser.server;
   // A fresh project: a stored result of an earlier test run would be reused instead of running.
-  const created = await browser.context.request.post(server.baseUrl + "/api/projects", { data: { name: `Runs in the browser ${randomUUID().slice(0, 6)}` } });
+  const created = await browser.context.request.post(server.baseUrl + "/api/projects", {
+    data: { name: `Runs in the browser ${randomUUID().slice(0, 6)}` },
+  });
   projectId = (await created.json()).data.id;
 });
 
@@ -39,7 +41,9 @@ describe("runs in the browser", () => {
     await screenshot(page, "runs-progress-early");
     await expect.poll(fraction, { timeout: 20_000 }).toBeGreaterThan(first + 0.05);
     await expect.poll(() => page.getByTestId("run-state").getAttribute("data-state")).toBe("running");
-    await expect.poll(() => page.getByTestId("run-times").textContent()).toMatch(/Elapsed \d+:\d\d · about \d+:\d\d left/);
+    await expect
+      .poll(() => page.getByTestId("run-times").textContent())
+      .toMatch(/Elapsed \d+:\d\d · about \d+:\d\d left/);
     const bar = await page.getByRole("progressbar", { name: "Run progress" }).getAttribute("aria-valuenow");
     expect(Number(bar)).toBeGreaterThan(0);
     await screenshot(page, "runs-progress-moving");
@@ -62,11 +66,23 @@ describe("runs in the browser", () => {
     const { page } = browser;
     const owner = await server.db("users").where({ email: "owner@demo.emulant.test" }).first();
     const title = `Your sleep-count run finished (${randomUUID().slice(0, 6)})`;
-    await server.db("notifications").insert({ user_id: owner.id, kind: "run.succeeded", title, body: "The run you started finished after 2 min.", link: `/projects/${projectId}/runs` });
+    await server
+      .db("notifications")
+      .insert({
+        user_id: owner.id,
+        kind: "run.succeeded",
+        title,
+        body: "The run you started finished after 2 min.",
+        link: `/projects/${projectId}/runs`,
+      });
     await page.goto(`${server.baseUrl}/projects/${projectId}/runs`);
-    await expect.poll(async () => Number(await page.getByTestId("notification-count").textContent())).toBeGreaterThanOrEqual(1);
+    await expect
+      .poll(async () => Number(await page.getByTestId("notification-count").textContent()))
+      .toBeGreaterThanOrEqual(1);
     await page.getByTestId("notification-bell").click();
-    await expect.poll(() => page.getByRole("dialog", { name: "Notifications" }).getByText(title).isVisible()).toBe(true);
+    await expect
+      .poll(() => page.getByRole("dialog", { name: "Notifications" }).getByText(title).isVisible())
+      .toBe(true);
     await screenshot(page, "runs-notifications");
     await expect.poll(() => page.getByTestId("notification-count").count()).toBe(0);
   });

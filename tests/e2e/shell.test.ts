@@ -21,7 +21,11 @@ describe("application shell in headless Chromium", () => {
     await expect.poll(() => page.getByTestId("health-badge").getAttribute("data-status")).toBe("up");
     // The font must be the bundled one: document.fonts reports it loaded without any network beyond our server.
     await page.evaluate(() => document.fonts.ready);
-    const isInterLoaded = await page.evaluate(() => document.fonts.check('16px "Inter Variable"') && [...document.fonts].some((f) => f.family.includes("Inter Variable") && f.status === "loaded"));
+    const isInterLoaded = await page.evaluate(
+      () =>
+        document.fonts.check('16px "Inter Variable"') &&
+        [...document.fonts].some((f) => f.family.includes("Inter Variable") && f.status === "loaded"),
+    );
     expect(isInterLoaded).toBe(true);
     const family = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
     expect(family).toContain("Inter Variable");

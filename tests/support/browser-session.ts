@@ -16,13 +16,19 @@ export interface BrowserSession {
   close(): Promise<void>;
 }
 
-export async function openBrowserSession(opts: { signInAs?: string; withWorker?: boolean } = {}): Promise<BrowserSession> {
+export async function openBrowserSession(
+  opts: { signInAs?: string; withWorker?: boolean } = {},
+): Promise<BrowserSession> {
   const server = await startTestServer();
   let worker: RunWorker | null = null;
   if (opts.withWorker) {
     const config = testConfig();
     worker = await startRunWorker({
-      db: server.db, log: createLogger(config), databaseUrl: config.DATABASE_URL, mailer: null, publicUrl: server.baseUrl,
+      db: server.db,
+      log: createLogger(config),
+      databaseUrl: config.DATABASE_URL,
+      mailer: null,
+      publicUrl: server.baseUrl,
       settings: loadRunSettings({ RUN_HEARTBEAT_MS: "300" }, 2),
     });
   }

@@ -10,8 +10,16 @@ export async function openBrowser(): Promise<{ context: BrowserContext; page: Pa
     executablePath: "/usr/bin/chromium",
     headless: true,
     viewport: { width: 1280, height: 800 },
-    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
-      "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--headless",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {

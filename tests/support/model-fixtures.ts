@@ -53,4 +53,7 @@ export const REPRESSOR_RING_SBML = `<?xml version="1.0" encoding="UTF-8"?>
 `;
 
 /** The same file with one species made three-valued, which a Boolean reader must refuse by name. */
-export const MULTIVALUED_SBML = REPRESSOR_RING_SBML.replace('qual:id="CI" qual:compartment="cell" qual:constant="false" qual:maxLevel="1"', 'qual:id="CI" qual:compartment="cell" qual:constant="false" qual:maxLevel="2"');
+export const MULTIVALUED_SBML = REPRESSOR_RING_SBML.replace(
+  'qual:id="CI" qual:compartment="cell" qual:constant="false" qual:maxLevel="1"',
+  'qual:id="CI" qual:compartment="cell" qual:constant="false" qual:maxLevel="2"',
+);

@@ -16,7 +16,11 @@ export async function signInAs(app: Express, email: string, password = DEMO_PASS
 }
 
 /** Creates a fresh account (unique address) and returns its agent and id; for fixtures independent of the seed. */
-export async function signUpFresh(app: Express, label: string, password = DEMO_PASSWORD): Promise<{ agent: Agent; id: string; email: string }> {
+export async function signUpFresh(
+  app: Express,
+  label: string,
+  password = DEMO_PASSWORD,
+): Promise<{ agent: Agent; id: string; email: string }> {
   const email = `${label}-${randomUUID().slice(0, 8)}@fixture.emulant.test`;
   const agent = request.agent(app);
   const res = await agent.post("/api/auth/sign-up").send({ email, displayName: `Fixture ${label}`, password });

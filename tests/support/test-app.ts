@@ -28,10 +28,21 @@ export function buildTestApp(overrides: Pick<AppDeps, "signInLimits" | "runQueue
   // Run jobs go to pg-boss on the test database; the sender opens its connections only when a run is started.
   const runQueue = overrides.runQueue ?? lazyRunQueue(config.DATABASE_URL, log);
   const app = createApp({ db, log, config, mailer, ...overrides, runQueue });
-  return { app, db, close: async () => { await runQueue.stop(); await mailer.close(); await db.destroy(); } };
+  return {
+    app,
+    db,
+    close: async () => {
+      await runQueue.stop();
+      await mailer.close();
+      await db.destroy();
+    },
+  };
 }
 
-export interface RunningServer extends TestApp { baseUrl: string; server: Server }
+export interface RunningServer extends TestApp {
+  baseUrl: string;
+  server: Server;
+}
 
 /** Listens on an ephemeral loopback port; the browser tests load the built client from it. */
 export async function startTestServer(): Promise<RunningServer> {

@@ -18,11 +18,18 @@ describe("attractors command", () => {
     const { out } = captureOutput();
     expect(await run([fixture, "--json"])).toBe(0);
     expect(out).toHaveLength(1);
-    const result = JSON.parse(out[0]!) as { nodes: string[]; stateCount: number; attractors: { length: number; basin: number; states: string[] }[] };
+    const result = JSON.parse(out[0]!) as {
+      nodes: string[];
+      stateCount: number;
+      attractors: { length: number; basin: number; states: string[] }[];
+    };
     expect(Object.keys(result)).toEqual(["nodes", "stateCount", "attractors"]);
     expect(result.nodes).toEqual(["CycD", "Rb", "E2F", "CycE", "CycA", "p27", "Cdc20", "Cdh1", "UbcH10", "CycB"]);
     expect(result.stateCount).toBe(1024);
-    expect(result.attractors.map((a) => [a.length, a.basin])).toEqual([[1, 512], [7, 512]]);
+    expect(result.attractors.map((a) => [a.length, a.basin])).toEqual([
+      [1, 512],
+      [7, 512],
+    ]);
     expect(Object.keys(result.attractors[0]!)).toEqual(["length", "basin", "states"]);
     const cycle = result.attractors[1]!.states;
     expect(cycle.every((s) => s[0] === "1")).toBe(true);

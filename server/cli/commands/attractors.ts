@@ -1,11 +1,12 @@
 // `attractors <model file> [--json]`: exact synchronous analysis of a model of up to 24 nodes. With --json, one
 // JSON object {"nodes", "stateCount", "attractors": [{"length", "basin", "states"}]}, each cycle from its
 // textually smallest state, sorted by basin descending then first state; without it, a readable table.
-import { EngineError } from "../../../shared/engine/errors";
-import { analyseSynchronous, attractorsAsText } from "../../../shared/engine/state-graph";
+import { EngineError } from "@shared/engine/errors";
+import { analyseSynchronous, attractorsAsText } from "@shared/engine/state-graph";
 import { CommandError, parseCommandArgs, printJson, readModel, runCommand } from "../cli-io";
 
-export const summary = "attractors <model file> [--json]: every synchronous attractor with its basin size (up to 24 nodes)";
+export const summary =
+  "attractors <model file> [--json]: every synchronous attractor with its basin size (up to 24 nodes)";
 
 const USAGE = "usage: attractors <model file (.sbml, .xml, .rules, .txt, .csv)> [--json]";
 
@@ -37,7 +38,9 @@ export function run(args: string[]): Promise<number> {
     attractors.forEach((a, i) => {
       const share = `${((100 * a.basin) / analysis.stateCount).toFixed(1)}%`;
       const shown = a.states.length > 8 ? [...a.states.slice(0, 8), `... (${a.states.length - 8} more)`] : a.states;
-      lines.push(`${String(i + 1).padStart(3)}  ${String(a.length).padStart(6)}  ${String(a.basin).padStart(10)}  ${share.padStart(6)}    ${shown.join(" -> ")}`);
+      lines.push(
+        `${String(i + 1).padStart(3)}  ${String(a.length).padStart(6)}  ${String(a.basin).padStart(10)}  ${share.padStart(6)}    ${shown.join(" -> ")}`,
+      );
     });
     process.stdout.write(lines.join("\n") + "\n");
     return 0;

@@ -2,9 +2,9 @@ import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, afterEach, describe, expect, it, vi } from "vitest";
-import { compileDefinition, readRuleText } from "../../../shared/engine/rules";
-import { readSbmlQual } from "../../../shared/formats/sbml-qual";
-import { readTruthTableCsv } from "../../../shared/formats/truth-table-csv";
+import { compileDefinition, readRuleText } from "@shared/engine/rules";
+import { readSbmlQual } from "@shared/formats/sbml-qual";
+import { readTruthTableCsv } from "@shared/formats/truth-table-csv";
 import { captureOutput } from "../capture-output.test-support";
 import { run } from "./convert";
 
@@ -42,7 +42,9 @@ describe("convert command", () => {
     const r = await convert([file, "--to", "sbml"]);
     expect(r.code).toBe(1);
     expect(r.out).toBe("");
-    expect(r.err).toBe(`${file}:1:8: missing ")" to close "(" at column 6\n${file}:2:3: missing prime after B; write B' = ...\n`);
+    expect(r.err).toBe(
+      `${file}:1:8: missing ")" to close "(" at column 6\n${file}:2:3: missing prime after B; write B' = ...\n`,
+    );
   });
 
   it("convert exits 2 with usage for a missing --to, an unknown target or an unknown extension", async () => {

@@ -23,7 +23,11 @@ describe("cycles command", () => {
     writeFileSync(file, ringWithFollowers());
     const { out } = captureOutput();
     expect(await run([file, "--max-length", "6", "--json"])).toBe(0);
-    const result = JSON.parse(out.join("")) as { nodes: string[]; complete: boolean; cycles: { length: number; states: string[] }[] };
+    const result = JSON.parse(out.join("")) as {
+      nodes: string[];
+      complete: boolean;
+      cycles: { length: number; states: string[] }[];
+    };
     expect(result.nodes).toHaveLength(100);
     expect(result.complete).toBe(true);
     expect(result.cycles.map((c) => c.length)).toEqual([2, 6]);

@@ -1,8 +1,8 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { captureOutput } from "../capture-output.test-support";
 import { run } from "./eca-emulations";
-import { ecaRule } from "../../../shared/engine/automata";
-import { verifyEmulation } from "../../../shared/engine/block-emulation";
+import { ecaRule } from "@shared/engine/automata";
+import { verifyEmulation } from "@shared/engine/block-emulation";
 
 afterEach(() => vi.restoreAllMocks());
 
@@ -26,11 +26,19 @@ describe("eca-emulations command", () => {
     expect(await run(["--rule", "1", "--block", "4", "--time", "2", "--json"])).toBe(0);
     const doc = JSON.parse(io.out.join(""));
     expect(doc.time).toBe(2);
-    for (const e of doc.emulations) expect(verifyEmulation(ecaRule(1), e.target, e.encoding["0"], e.encoding["1"], 2).valid).toBe(true);
+    for (const e of doc.emulations)
+      expect(verifyEmulation(ecaRule(1), e.target, e.encoding["0"], e.encoding["1"], 2).valid).toBe(true);
   });
 
   it("run rejects bad arguments on stderr with exit code 2", async () => {
-    for (const args of [["--rule", "256", "--block", "3"], ["--block", "3"], ["--rule", "1", "--block", "0"], ["--rule", "1", "--block", "3", "--time", "4"], ["--rule", "1", "--block", "3", "--frob"], ["--rule", "x", "--block", "3"]]) {
+    for (const args of [
+      ["--rule", "256", "--block", "3"],
+      ["--block", "3"],
+      ["--rule", "1", "--block", "0"],
+      ["--rule", "1", "--block", "3", "--time", "4"],
+      ["--rule", "1", "--block", "3", "--frob"],
+      ["--rule", "x", "--block", "3"],
+    ]) {
       const io = captureOutput();
       expect(await run(args)).toBe(2);
       expect(io.err.join("")).toMatch(/eca-emulations: .+\nusage:/);

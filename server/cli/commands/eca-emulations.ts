@@ -1,7 +1,7 @@
 // `eca-emulations --rule F --block k [--time t] [--json]`: every elementary rule that F emulates at block size k and
 // time t (default k), one witness each, targets ascending, codewords leftmost cell first.
-import { ecaRule } from "../../../shared/engine/automata";
-import { blockEmulations, MAX_SEARCH_BLOCK } from "../../../shared/engine/block-emulation";
+import { ecaRule } from "@shared/engine/automata";
+import { blockEmulations, MAX_SEARCH_BLOCK } from "@shared/engine/block-emulation";
 import { integerOption, parseCommandArgs, printJson, runCommand } from "../cli-io";
 
 export const summary = "elementary rules emulated by --rule F at --block k [--time t] [--json]";
@@ -10,7 +10,11 @@ const USAGE = "usage: eca-emulations --rule F (0..255) --block k (1..20) [--time
 
 export function run(args: string[]): Promise<number> {
   return runCommand("eca-emulations", USAGE, async () => {
-    const { values } = parseCommandArgs(args, { rule: { type: "string" }, block: { type: "string" }, time: { type: "string" }, json: { type: "boolean" } }, 0);
+    const { values } = parseCommandArgs(
+      args,
+      { rule: { type: "string" }, block: { type: "string" }, time: { type: "string" }, json: { type: "boolean" } },
+      0,
+    );
     const rule = integerOption(values.rule, "--rule", 0, 255);
     const block = integerOption(values.block, "--block", 1, MAX_SEARCH_BLOCK);
     const time = integerOption(values.time, "--time", 1, block, block);

@@ -21,7 +21,13 @@ describe("eca-hierarchy command", () => {
   });
 
   it("run rejects a missing or out-of-range --max-block on stderr with exit code 2", async () => {
-    for (const args of [[], ["--max-block"], ["--max-block", "0"], ["--max-block", "99"], ["--max-block", "3", "--x"]]) {
+    for (const args of [
+      [],
+      ["--max-block"],
+      ["--max-block", "0"],
+      ["--max-block", "99"],
+      ["--max-block", "3", "--x"],
+    ]) {
       const io = captureOutput();
       expect(await run(args)).toBe(2);
       expect(io.err.join("")).toMatch(/eca-hierarchy: .+\nusage:/);

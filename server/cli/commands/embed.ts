@@ -8,14 +8,32 @@ const USAGE = "usage: embed --source <model file> --target <model file> [--time 
 
 export function run(args: string[]): Promise<number> {
   return runCommand("embed", USAGE, async () => {
-    const { values } = parseCommandArgs(args, { source: { type: "string" }, target: { type: "string" }, time: { type: "string" }, json: { type: "boolean" } });
+    const { values } = parseCommandArgs(args, {
+      source: { type: "string" },
+      target: { type: "string" },
+      time: { type: "string" },
+      json: { type: "boolean" },
+    });
     const source = await readModelFile(values.source, "--source model file");
     const target = await readModelFile(values.target, "--target model file");
-    const search = { mode: "given-target" as const, notion: "dynamical-embedding" as const, sourceModelId: "", targetModelId: "", maxTime: integerOption(values.time, "--time", 1, 8, 1) };
+    const search = {
+      mode: "given-target" as const,
+      notion: "dynamical-embedding" as const,
+      sourceModelId: "",
+      targetModelId: "",
+      maxTime: integerOption(values.time, "--time", 1, 8, 1),
+    };
     const result = mergeShards(source, target, search, [searchShard(source, target, search, { range: null }, {})]);
-    const out = result.found ? { found: true, witness: result.findings[0]!.certificate } : { found: false, bounds: { maxTime: search.maxTime } };
+    const out = result.found
+      ? { found: true, witness: result.findings[0]!.certificate }
+      : { found: false, bounds: { maxTime: search.maxTime } };
     if (values.json) printJson(out);
-    else process.stdout.write(result.found ? `G embeds into F at time scale ${result.findings[0]!.certificate.time}\n` : `no embedding for time scales 1..${search.maxTime}\n`);
+    else
+      process.stdout.write(
+        result.found
+          ? `G embeds into F at time scale ${result.findings[0]!.certificate.time}\n`
+          : `no embedding for time scales 1..${search.maxTime}\n`,
+      );
     return 0;
   });
 }

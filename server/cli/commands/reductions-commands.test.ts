@@ -4,7 +4,7 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { verifyCertificate } from "../../../shared/engine/certificates";
+import { verifyCertificate } from "@shared/engine/certificates";
 import { captureOutput } from "../capture-output.test-support";
 import { run as coarseGrain } from "./coarse-grain";
 import { run as discover } from "./discover";
@@ -34,7 +34,11 @@ describe("emulate, embed, coarse-grain, discover and verify commands", () => {
     const found = await json(emulate, ["--source", F, "--target", G, "--time", "2", "--json"]);
     expect(found.code).toBe(0);
     expect(found.body.found).toBe(true);
-    expect(found.body.witness).toMatchObject({ notion: "block-emulation", time: 2, witness: { blocks: [{ target: "X", nodes: ["P", "Q"] }], context: {} } });
+    expect(found.body.witness).toMatchObject({
+      notion: "block-emulation",
+      time: 2,
+      witness: { blocks: [{ target: "X", nodes: ["P", "Q"] }], context: {} },
+    });
     // Both 00/11 and 10/01 are valid codeword pairs here; any witness must pass the independent verifier.
     expect(verifyCertificate(found.body.witness).valid).toBe(true);
     const none = await json(emulate, ["--source", F, "--target", G, "--time", "1", "--json"]);
@@ -71,8 +75,10 @@ describe("emulate, embed, coarse-grain, discover and verify commands", () => {
   it("discover lists the oscillator X' = !X among the targets of F at t = 2, not flagged trivial", async () => {
     const { code, body } = await json(discover, [F, "--max-target-nodes", "1", "--time", "2", "--json"]);
     expect(code).toBe(0);
-    const oscillator = body.targets.find((t: { nodes: number; witness: { target: { nodes: { table: string; inputs: string[] }[] } } }) =>
-      t.nodes === 1 && t.witness.target.nodes[0]!.table === "10" && t.witness.target.nodes[0]!.inputs.length === 1);
+    const oscillator = body.targets.find(
+      (t: { nodes: number; witness: { target: { nodes: { table: string; inputs: string[] }[] } } }) =>
+        t.nodes === 1 && t.witness.target.nodes[0]!.table === "10" && t.witness.target.nodes[0]!.inputs.length === 1,
+    );
     expect(oscillator).toBeDefined();
     expect(oscillator.flags).not.toContain("trivial");
   });

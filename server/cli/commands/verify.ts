@@ -1,6 +1,6 @@
 // `verify <certificate.json>`: re-checks a reduction certificate by plain simulation with the independent verifier.
 // Exit 0 only for a valid certificate; 1 when it is invalid or unreadable; 2 for usage errors.
-import { verifyCertificate } from "../../../shared/engine/certificates";
+import { verifyCertificate } from "@shared/engine/certificates";
 import { CommandError, parseCommandArgs, readTextFile, runCommand, UsageError } from "../cli-io";
 
 export const summary = "verify <certificate.json> [--json]: re-check a reduction certificate (exit 0 only when valid)";
@@ -19,7 +19,10 @@ export function run(args: string[]): Promise<number> {
     }
     const report = verifyCertificate(certificate);
     if (values.json) process.stdout.write(JSON.stringify(report) + "\n");
-    else if (report.valid) process.stdout.write(`valid ${report.notion} certificate, time scale ${report.time}: ${report.statesChecked} states re-simulated\n`);
+    else if (report.valid)
+      process.stdout.write(
+        `valid ${report.notion} certificate, time scale ${report.time}: ${report.statesChecked} states re-simulated\n`,
+      );
     else process.stdout.write(`INVALID certificate:\n${report.problems.map((p) => `  - ${p}`).join("\n")}\n`);
     return report.valid ? 0 : 1;
   });

@@ -34,10 +34,23 @@ export async function recordAudit(db: Knex, input: AuditInput): Promise<void> {
   });
 }
 
-interface AuditRow { id: string; project_id: string; actor_id: string | null; actor_name: string; action: string; target: string | null; details: Record<string, unknown>; created_at: Date }
+interface AuditRow {
+  id: string;
+  project_id: string;
+  actor_id: string | null;
+  actor_name: string;
+  action: string;
+  target: string | null;
+  details: Record<string, unknown>;
+  created_at: Date;
+}
 
 /** Newest first; `before` is the id of the last entry already shown, for paging back in time. */
-export async function listAudit(db: Knex, projectId: string, opts: { limit: number; before?: string }): Promise<AuditEntry[]> {
+export async function listAudit(
+  db: Knex,
+  projectId: string,
+  opts: { limit: number; before?: string },
+): Promise<AuditEntry[]> {
   const q = db<AuditRow>("audit_log").where({ project_id: projectId }).orderBy("id", "desc").limit(opts.limit);
   if (opts.before) q.andWhere("id", "<", opts.before);
   const rows = await q;

@@ -1,9 +1,19 @@
 // Stored block-emulation hierarchies: one row per parameter set, the relation one row per pair. A hierarchy is
 // written whole in one transaction, so a reader sees either none or all of it.
 import type { Knex } from "knex";
-import type { HierarchyPair, HierarchyPairWithWitness, HierarchySummary, TimeMode, Witness } from "../../../shared/schemas/automata";
+import type {
+  HierarchyPair,
+  HierarchyPairWithWitness,
+  HierarchySummary,
+  TimeMode,
+  Witness,
+} from "@shared/schemas/automata";
 
-export interface HierarchyKey { maxBlock: number; timeMode: TimeMode; radius: number }
+export interface HierarchyKey {
+  maxBlock: number;
+  timeMode: TimeMode;
+  radius: number;
+}
 
 export interface HierarchyRecord extends HierarchyKey {
   pairs: HierarchyPairWithWitness[];
@@ -27,9 +37,16 @@ interface HierarchyRow {
   run_id: string | null;
 }
 
-interface PairRow { source: number; target: number; min_block: number; witness: Witness }
+interface PairRow {
+  source: number;
+  target: number;
+  min_block: number;
+  witness: Witness;
+}
 
-export interface StoredHierarchy extends HierarchySummary { emulateNothing: number[] }
+export interface StoredHierarchy extends HierarchySummary {
+  emulateNothing: number[];
+}
 
 function toSummary(row: HierarchyRow): StoredHierarchy {
   return {
@@ -60,7 +77,11 @@ export async function findHierarchy(db: Knex, key: HierarchyKey): Promise<Stored
 }
 
 export async function listHierarchies(db: Knex): Promise<StoredHierarchy[]> {
-  const rows = (await summaryQuery(db).orderBy([{ column: "h.radius" }, { column: "h.time_mode" }, { column: "h.max_block" }])) as HierarchyRow[];
+  const rows = (await summaryQuery(db).orderBy([
+    { column: "h.radius" },
+    { column: "h.time_mode" },
+    { column: "h.max_block" },
+  ])) as HierarchyRow[];
   return rows.map(toSummary);
 }
 
@@ -68,9 +89,21 @@ export async function listHierarchies(db: Knex): Promise<StoredHierarchy[]> {
 export async function hierarchyPairs(db: Knex, hierarchyId: string): Promise<HierarchyPair[]> {
   const rows = (await db("eca_hierarchy_pairs")
     .where({ hierarchy_id: hierarchyId })
-    .select("source", "target", "min_block", db.raw("(witness->>'time')::int as time"), db.raw("(witness->'via') is not null as composed"))
+    .select(
+      "source",
+      "target",
+      "min_block",
+      db.raw("(witness->>'time')::int as time"),
+      db.raw("(witness->'via') is not null as composed"),
+    )
     .orderBy([{ column: "source" }, { column: "target" }])) as (PairRow & { time: number; composed: boolean })[];
-  return rows.map((r) => ({ source: r.source, target: r.target, minBlock: r.min_block, time: r.time, composed: r.composed }));
+  return rows.map((r) => ({
+    source: r.source,
+    target: r.target,
+    minBlock: r.min_block,
+    time: r.time,
+    composed: r.composed,
+  }));
 }
 
 function withWitness(r: PairRow): HierarchyPairWithWitness {
@@ -86,7 +119,11 @@ export async function hierarchyPairsWithWitnesses(db: Knex, hierarchyId: string)
   return rows.map(withWitness);
 }
 
-export async function rulePairs(db: Knex, hierarchyId: string, rule: number): Promise<{ emulates: HierarchyPairWithWitness[]; emulatedBy: HierarchyPairWithWitness[] }> {
+export async function rulePairs(
+  db: Knex,
+  hierarchyId: string,
+  rule: number,
+): Promise<{ emulates: HierarchyPairWithWitness[]; emulatedBy: HierarchyPairWithWitness[] }> {
   const rows = (await db("eca_hierarchy_pairs")
     .where({ hierarchy_id: hierarchyId })
     .andWhere((q) => q.where({ source: rule }).orWhere({ target: rule }))
@@ -98,8 +135,16 @@ export async function rulePairs(db: Knex, hierarchyId: string, rule: number): Pr
   };
 }
 
-export async function findPair(db: Knex, hierarchyId: string, source: number, target: number): Promise<HierarchyPairWithWitness | null> {
-  const row = (await db("eca_hierarchy_pairs").where({ hierarchy_id: hierarchyId, source, target }).select("source", "target", "min_block", "witness").first()) as PairRow | undefined;
+export async function findPair(
+  db: Knex,
+  hierarchyId: string,
+  source: number,
+  target: number,
+): Promise<HierarchyPairWithWitness | null> {
+  const row = (await db("eca_hierarchy_pairs")
+    .where({ hierarchy_id: hierarchyId, source, target })
+    .select("source", "target", "min_block", "witness")
+    .first()) as PairRow | undefined;
   return row ? withWitness(row) : null;
 }
 
@@ -109,7 +154,10 @@ const INSERT_CHUNK = 2000;
  * Stores a computed hierarchy. When another request or run stored the same parameters first, theirs is kept and
  * returned: both computed the same relation, and the first one's provenance is the true one.
  */
-export async function saveHierarchy(db: Knex, record: HierarchyRecord): Promise<{ hierarchy: StoredHierarchy; inserted: boolean }> {
+export async function saveHierarchy(
+  db: Knex,
+  record: HierarchyRecord,
+): Promise<{ hierarchy: StoredHierarchy; inserted: boolean }> {
   const inserted = await db.transaction(async (trx) => {
     const rows = (await trx("eca_hierarchies")
       .insert({
@@ -149,7 +197,12 @@ export async function deleteHierarchy(db: Knex, key: HierarchyKey): Promise<numb
   return db("eca_hierarchies").where({ max_block: key.maxBlock, time_mode: key.timeMode, radius: key.radius }).delete();
 }
 
-export interface FinishedHierarchyRun { id: string; startedBy: string | null; result: unknown; wallMs: number | null }
+export interface FinishedHierarchyRun {
+  id: string;
+  startedBy: string | null;
+  result: unknown;
+  wallMs: number | null;
+}
 
 /**
  * The latest succeeded background "eca-hierarchy" run for these parameters whose result has not been stored yet
@@ -163,6 +216,14 @@ export async function findFinishedHierarchyRun(db: Knex, key: HierarchyKey): Pro
     .whereNotNull("result")
     .orderBy("finished_at", "desc")
     .select("id", "started_by", "result", db.raw("extract(epoch from (finished_at - started_at)) * 1000 as wall_ms"))
-    .first()) as { id: string; started_by: string | null; result: unknown; wall_ms: string | number | null } | undefined;
-  return row ? { id: row.id, startedBy: row.started_by, result: row.result, wallMs: row.wall_ms === null ? null : Number(row.wall_ms) } : null;
+    .first()) as
+    { id: string; started_by: string | null; result: unknown; wall_ms: string | number | null } | undefined;
+  return row
+    ? {
+        id: row.id,
+        startedBy: row.started_by,
+        result: row.result,
+        wallMs: row.wall_ms === null ? null : Number(row.wall_ms),
+      }
+    : null;
 }

@@ -2,7 +2,7 @@
 // into a working link; a 256-bit random token needs no slow hash.
 import type { Knex } from "knex";
 import { createHash, randomBytes } from "node:crypto";
-import type { ProjectRole } from "../../../shared/types/roles";
+import type { ProjectRole } from "@shared/types/roles";
 
 export interface Invitation {
   id: string;
@@ -52,7 +52,15 @@ export function hashInvitationToken(token: string): string {
 }
 
 const selectColumns = [
-  "i.id", "i.project_id", "i.email", "i.role", "u.display_name as invited_by_name", "i.expires_at", "i.created_at", "i.accepted_at", "i.revoked_at",
+  "i.id",
+  "i.project_id",
+  "i.email",
+  "i.role",
+  "u.display_name as invited_by_name",
+  "i.expires_at",
+  "i.created_at",
+  "i.accepted_at",
+  "i.revoked_at",
 ];
 
 export async function insertInvitation(
@@ -60,19 +68,38 @@ export async function insertInvitation(
   input: { projectId: string; email: string; role: ProjectRole; tokenHash: string; invitedBy: string; expiresAt: Date },
 ): Promise<Invitation> {
   const [row] = await db("invitations")
-    .insert({ project_id: input.projectId, email: input.email, role: input.role, token_hash: input.tokenHash, invited_by: input.invitedBy, expires_at: input.expiresAt })
+    .insert({
+      project_id: input.projectId,
+      email: input.email,
+      role: input.role,
+      token_hash: input.tokenHash,
+      invited_by: input.invitedBy,
+      expires_at: input.expiresAt,
+    })
     .returning("id");
   return (await findInvitation(db, input.projectId, (row as { id: string }).id))!;
 }
 
 export async function findInvitation(db: Knex, projectId: string, id: string): Promise<Invitation | null> {
-  const row = await db("invitations as i").leftJoin("users as u", "u.id", "i.invited_by").select(selectColumns).where({ "i.id": id, "i.project_id": projectId }).first();
+  const row = await db("invitations as i")
+    .leftJoin("users as u", "u.id", "i.invited_by")
+    .select(selectColumns)
+    .where({ "i.id": id, "i.project_id": projectId })
+    .first();
   return row ? toInvitation(row as InvitationRow) : null;
 }
 
 /** Locks the row, so two people following the same link at once cannot both use it. */
-export async function findInvitationByTokenHash(db: Knex, tokenHash: string, opts: { lock: boolean }): Promise<Invitation | null> {
-  const q = db("invitations as i").leftJoin("users as u", "u.id", "i.invited_by").select(selectColumns).where("i.token_hash", tokenHash).first();
+export async function findInvitationByTokenHash(
+  db: Knex,
+  tokenHash: string,
+  opts: { lock: boolean },
+): Promise<Invitation | null> {
+  const q = db("invitations as i")
+    .leftJoin("users as u", "u.id", "i.invited_by")
+    .select(selectColumns)
+    .where("i.token_hash", tokenHash)
+    .first();
   if (opts.lock) q.forUpdate("i");
   const row = await q;
   return row ? toInvitation(row as InvitationRow) : null;
@@ -92,7 +119,11 @@ export async function listPendingInvitations(db: Knex, projectId: string): Promi
 
 /** A new invitation to the same address replaces any earlier one still pending, so only the newest link works. */
 export async function revokePendingFor(db: Knex, projectId: string, email: string): Promise<void> {
-  await db("invitations").where({ project_id: projectId, email }).whereNull("accepted_at").whereNull("revoked_at").update({ revoked_at: db.fn.now() });
+  await db("invitations")
+    .where({ project_id: projectId, email })
+    .whereNull("accepted_at")
+    .whereNull("revoked_at")
+    .update({ revoked_at: db.fn.now() });
 }
 
 export async function revokeInvitation(db: Knex, id: string): Promise<void> {

@@ -1,6 +1,6 @@
 // Project memberships: who holds which role in which project.
 import type { Knex } from "knex";
-import type { ProjectRole, SiteRole } from "../../../shared/types/roles";
+import type { ProjectRole, SiteRole } from "@shared/types/roles";
 
 export interface Member {
   userId: string;
@@ -11,10 +11,24 @@ export interface Member {
   joinedAt: string;
 }
 
-interface MemberRow { user_id: string; email: string; display_name: string; site_role: SiteRole; role: ProjectRole; created_at: Date }
+interface MemberRow {
+  user_id: string;
+  email: string;
+  display_name: string;
+  site_role: SiteRole;
+  role: ProjectRole;
+  created_at: Date;
+}
 
 function toMember(r: MemberRow): Member {
-  return { userId: r.user_id, email: r.email, displayName: r.display_name, siteRole: r.site_role, role: r.role, joinedAt: r.created_at.toISOString() };
+  return {
+    userId: r.user_id,
+    email: r.email,
+    displayName: r.display_name,
+    siteRole: r.site_role,
+    role: r.role,
+    joinedAt: r.created_at.toISOString(),
+  };
 }
 
 export async function roleOf(db: Knex, projectId: string, userId: string): Promise<ProjectRole | null> {
@@ -27,7 +41,9 @@ export async function listMembers(db: Knex, projectId: string): Promise<Member[]
     .join("users as u", "u.id", "m.user_id")
     .select("m.user_id", "u.email", "u.display_name", "u.site_role", "m.role", "m.created_at")
     .where("m.project_id", projectId)
-    .orderByRaw("case m.role when 'owner' then 0 when 'modeler' then 1 when 'reviewer' then 2 else 3 end, lower(u.display_name)");
+    .orderByRaw(
+      "case m.role when 'owner' then 0 when 'modeler' then 1 when 'reviewer' then 2 else 3 end, lower(u.display_name)",
+    );
   return (rows as MemberRow[]).map(toMember);
 }
 

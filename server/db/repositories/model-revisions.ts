@@ -1,7 +1,7 @@
 // Immutable revisions of a model (the table refuses updates): insert and read, never change.
 import type { Knex } from "knex";
-import type { ModelDefinition } from "../../../shared/engine/rules";
-import type { ModelSource, NetworkSummary, RevisionDetail, RevisionSummary } from "../../../shared/schemas/models";
+import type { ModelDefinition } from "@shared/engine/rules";
+import type { ModelSource, NetworkSummary, RevisionDetail, RevisionSummary } from "@shared/schemas/models";
 
 interface RevisionRow {
   id: string;
@@ -22,7 +22,10 @@ interface RevisionRow {
   size_bytes: number | null;
 }
 
-export interface StoredRevision extends RevisionDetail { modelId: string; definition: ModelDefinition }
+export interface StoredRevision extends RevisionDetail {
+  modelId: string;
+  definition: ModelDefinition;
+}
 
 function toSummary(r: RevisionRow): RevisionSummary {
   return {
@@ -50,7 +53,8 @@ export async function listRevisions(db: Knex, modelId: string): Promise<Revision
 }
 
 export async function findRevision(db: Knex, modelId: string, revision: number): Promise<StoredRevision | null> {
-  const r = (await baseQuery(db).where({ "r.model_id": modelId, "r.revision": revision }).first()) as RevisionRow | undefined;
+  const r = (await baseQuery(db).where({ "r.model_id": modelId, "r.revision": revision }).first()) as
+    RevisionRow | undefined;
   if (!r) return null;
   return {
     ...toSummary(r),
@@ -93,12 +97,25 @@ export async function insertRevision(trx: Knex, input: NewRevision): Promise<str
 }
 
 /** A cached analysis result of one revision, or null. */
-export async function findAnalysis<T>(db: Knex, revisionId: string, kind: "synchronous", paramsKey = ""): Promise<T | null> {
-  const row = (await db("model_analyses").where({ revision_id: revisionId, kind, params_key: paramsKey }).first("result")) as { result: T } | undefined;
+export async function findAnalysis<T>(
+  db: Knex,
+  revisionId: string,
+  kind: "synchronous",
+  paramsKey = "",
+): Promise<T | null> {
+  const row = (await db("model_analyses")
+    .where({ revision_id: revisionId, kind, params_key: paramsKey })
+    .first("result")) as { result: T } | undefined;
   return row ? row.result : null;
 }
 
-export async function storeAnalysis(db: Knex, revisionId: string, kind: "synchronous", result: unknown, paramsKey = ""): Promise<void> {
+export async function storeAnalysis(
+  db: Knex,
+  revisionId: string,
+  kind: "synchronous",
+  result: unknown,
+  paramsKey = "",
+): Promise<void> {
   await db("model_analyses")
     .insert({ revision_id: revisionId, kind, params_key: paramsKey, result: JSON.stringify(result) })
     .onConflict(["revision_id", "kind", "params_key"])

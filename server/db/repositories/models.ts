@@ -1,7 +1,7 @@
 // Models of a project: a named line of revisions. Writes happen inside the caller's transaction together with the
 // revision they create, so a model never exists without its first revision.
 import type { Knex } from "knex";
-import type { ModelSource, ModelSummary } from "../../../shared/schemas/models";
+import type { ModelSource, ModelSummary } from "@shared/schemas/models";
 
 interface ModelRow {
   id: string;
@@ -43,32 +43,57 @@ function summaryQuery(db: Knex) {
     .leftJoin("users as cu", "cu.id", "m.created_by")
     .leftJoin("users as uu", "uu.id", "r.created_by")
     .select(
-      "m.id", "m.project_id", "m.name", "m.description", "m.latest_revision", "m.created_by", "m.created_at", "m.updated_at",
-      "cu.display_name as created_by_name", "r.created_by as updated_by", "uu.display_name as updated_by_name",
-      "r.node_count", "r.source",
+      "m.id",
+      "m.project_id",
+      "m.name",
+      "m.description",
+      "m.latest_revision",
+      "m.created_by",
+      "m.created_at",
+      "m.updated_at",
+      "cu.display_name as created_by_name",
+      "r.created_by as updated_by",
+      "uu.display_name as updated_by_name",
+      "r.node_count",
+      "r.source",
     );
 }
 
 export async function listModels(db: Knex, projectId: string): Promise<ModelSummary[]> {
-  const rows = (await summaryQuery(db).where("m.project_id", projectId).orderBy([{ column: "m.updated_at", order: "desc" }, { column: "m.name" }])) as ModelRow[];
+  const rows = (await summaryQuery(db)
+    .where("m.project_id", projectId)
+    .orderBy([{ column: "m.updated_at", order: "desc" }, { column: "m.name" }])) as ModelRow[];
   return rows.map(toSummary);
 }
 
 export async function findModel(db: Knex, projectId: string, modelId: string): Promise<ModelSummary | null> {
-  const row = (await summaryQuery(db).where({ "m.project_id": projectId, "m.id": modelId }).first()) as ModelRow | undefined;
+  const row = (await summaryQuery(db).where({ "m.project_id": projectId, "m.id": modelId }).first()) as
+    ModelRow | undefined;
   return row ? toSummary(row) : null;
 }
 
-export async function insertModel(trx: Knex, input: { projectId: string; name: string; description: string; createdBy: string }): Promise<string> {
+export async function insertModel(
+  trx: Knex,
+  input: { projectId: string; name: string; description: string; createdBy: string },
+): Promise<string> {
   const [row] = await trx("models")
-    .insert({ project_id: input.projectId, name: input.name, description: input.description, created_by: input.createdBy, latest_revision: 1 })
+    .insert({
+      project_id: input.projectId,
+      name: input.name,
+      description: input.description,
+      created_by: input.createdBy,
+      latest_revision: 1,
+    })
     .returning("id");
   return (row as { id: string }).id;
 }
 
 /** Locks the model row so two concurrent edits get consecutive revision numbers; returns the next number. */
 export async function lockNextRevision(trx: Knex, projectId: string, modelId: string): Promise<number | null> {
-  const row = (await trx("models").where({ id: modelId, project_id: projectId }).forUpdate().first("latest_revision")) as { latest_revision: number } | undefined;
+  const row = (await trx("models")
+    .where({ id: modelId, project_id: projectId })
+    .forUpdate()
+    .first("latest_revision")) as { latest_revision: number } | undefined;
   return row ? row.latest_revision + 1 : null;
 }
 

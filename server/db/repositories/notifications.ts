@@ -1,21 +1,59 @@
 // In-app notifications: one row per message to one user; unread until read_at is set.
 import type { Knex } from "knex";
-import type { Notification } from "../../../shared/schemas/runs";
+import type { Notification } from "@shared/schemas/runs";
 
-interface NotificationRow { id: string; kind: string; title: string; body: string; link: string | null; run_id: string | null; created_at: Date; read_at: Date | null }
-
-function toNotification(r: NotificationRow): Notification {
-  return { id: r.id, kind: r.kind, title: r.title, body: r.body, link: r.link, runId: r.run_id, createdAt: r.created_at.toISOString(), readAt: r.read_at ? r.read_at.toISOString() : null };
+interface NotificationRow {
+  id: string;
+  kind: string;
+  title: string;
+  body: string;
+  link: string | null;
+  run_id: string | null;
+  created_at: Date;
+  read_at: Date | null;
 }
 
-export async function insertNotification(db: Knex, n: { userId: string; kind: string; title: string; body: string; link?: string | null; runId?: string | null }): Promise<Notification> {
-  const [row] = await db("notifications").insert({ user_id: n.userId, kind: n.kind, title: n.title, body: n.body, link: n.link ?? null, run_id: n.runId ?? null }).returning("*");
+function toNotification(r: NotificationRow): Notification {
+  return {
+    id: r.id,
+    kind: r.kind,
+    title: r.title,
+    body: r.body,
+    link: r.link,
+    runId: r.run_id,
+    createdAt: r.created_at.toISOString(),
+    readAt: r.read_at ? r.read_at.toISOString() : null,
+  };
+}
+
+export async function insertNotification(
+  db: Knex,
+  n: { userId: string; kind: string; title: string; body: string; link?: string | null; runId?: string | null },
+): Promise<Notification> {
+  const [row] = await db("notifications")
+    .insert({
+      user_id: n.userId,
+      kind: n.kind,
+      title: n.title,
+      body: n.body,
+      link: n.link ?? null,
+      run_id: n.runId ?? null,
+    })
+    .returning("*");
   return toNotification(row);
 }
 
-export async function listNotifications(db: Knex, userId: string, limit = 30): Promise<{ items: Notification[]; unreadCount: number }> {
+export async function listNotifications(
+  db: Knex,
+  userId: string,
+  limit = 30,
+): Promise<{ items: Notification[]; unreadCount: number }> {
   const rows = await db("notifications").where({ user_id: userId }).orderBy("created_at", "desc").limit(limit);
-  const unread = await db("notifications").where({ user_id: userId }).whereNull("read_at").count<{ count: string }[]>("* as count").first();
+  const unread = await db("notifications")
+    .where({ user_id: userId })
+    .whereNull("read_at")
+    .count<{ count: string }[]>("* as count")
+    .first();
   return { items: rows.map(toNotification), unreadCount: Number(unread?.count ?? 0) };
 }
 

@@ -1,6 +1,6 @@
 // Projects and the list each person may see (their memberships; site admins see all).
 import type { Knex } from "knex";
-import type { ProjectRole } from "../../../shared/types/roles";
+import type { ProjectRole } from "@shared/types/roles";
 
 export interface Project {
   id: string;
@@ -17,7 +17,14 @@ export interface ProjectListItem extends Project {
   memberCount: number;
 }
 
-interface ProjectRow { id: string; name: string; description: string; archived_at: Date | null; created_at: Date; updated_at: Date }
+interface ProjectRow {
+  id: string;
+  name: string;
+  description: string;
+  archived_at: Date | null;
+  created_at: Date;
+  updated_at: Date;
+}
 
 const columns = ["p.id", "p.name", "p.description", "p.archived_at", "p.created_at", "p.updated_at"];
 
@@ -44,26 +51,40 @@ export async function listProjectsFor(db: Knex, user: { id: string; siteRole: st
     .leftJoin("memberships as mine", function () {
       this.on("mine.project_id", "p.id").andOnVal("mine.user_id", user.id);
     })
-    .select([...columns, "mine.role as role", db.raw("(select count(*)::int from memberships c where c.project_id = p.id) as member_count")])
+    .select([
+      ...columns,
+      "mine.role as role",
+      db.raw("(select count(*)::int from memberships c where c.project_id = p.id) as member_count"),
+    ])
     .orderBy("p.name");
   if (user.siteRole !== "admin") q.whereNotNull("mine.role");
   const rows = (await q) as (ProjectRow & { role: ProjectRole | null; member_count: number })[];
   return rows.map((r) => ({ ...toProject(r), role: r.role, memberCount: r.member_count }));
 }
 
-export async function insertProject(db: Knex, input: { name: string; description: string; createdBy: string }): Promise<Project> {
+export async function insertProject(
+  db: Knex,
+  input: { name: string; description: string; createdBy: string },
+): Promise<Project> {
   const [row] = await db("projects as p")
     .insert({ name: input.name, description: input.description, created_by: input.createdBy })
     .returning(["id", "name", "description", "archived_at", "created_at", "updated_at"]);
   return toProject(row as ProjectRow);
 }
 
-export async function updateProject(db: Knex, id: string, patch: { name?: string; description?: string; archived?: boolean }): Promise<Project> {
+export async function updateProject(
+  db: Knex,
+  id: string,
+  patch: { name?: string; description?: string; archived?: boolean },
+): Promise<Project> {
   const changes: Record<string, unknown> = { updated_at: db.fn.now() };
   if (patch.name !== undefined) changes.name = patch.name;
   if (patch.description !== undefined) changes.description = patch.description;
   if (patch.archived !== undefined) changes.archived_at = patch.archived ? db.fn.now() : null;
-  const [row] = await db("projects").where({ id }).update(changes).returning(["id", "name", "description", "archived_at", "created_at", "updated_at"]);
+  const [row] = await db("projects")
+    .where({ id })
+    .update(changes)
+    .returning(["id", "name", "description", "archived_at", "created_at", "updated_at"]);
   return toProject(row as ProjectRow);
 }
 

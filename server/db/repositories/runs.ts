@@ -1,31 +1,66 @@
 // Runs: one row per requested analysis; shards are in run-shards.ts. Rows become the shared Run shape here.
 import type { Knex } from "knex";
-import type { Run, RunError, RunState } from "../../../shared/schemas/runs";
+import type { Run, RunError, RunState } from "@shared/schemas/runs";
 
 interface RunRow {
-  id: string; project_id: string; model_revision_id: string | null; kind: string; params: unknown; params_hash: string;
-  started_by: string | null; state: RunState; progress_fraction: number; progress_phase: string; shard_count: number;
-  time_limit_seconds: number; created_at: Date; started_at: Date | null; finished_at: Date | null; result: unknown;
-  error: RunError | null; attempt: number; shards_done?: number | string;
+  id: string;
+  project_id: string;
+  model_revision_id: string | null;
+  kind: string;
+  params: unknown;
+  params_hash: string;
+  started_by: string | null;
+  state: RunState;
+  progress_fraction: number;
+  progress_phase: string;
+  shard_count: number;
+  time_limit_seconds: number;
+  created_at: Date;
+  started_at: Date | null;
+  finished_at: Date | null;
+  result: unknown;
+  error: RunError | null;
+  attempt: number;
+  shards_done?: number | string;
 }
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
 export function toRun(r: RunRow): Run {
   return {
-    id: r.id, projectId: r.project_id, modelRevisionId: r.model_revision_id, kind: r.kind, params: r.params,
-    paramsHash: r.params_hash, startedBy: r.started_by, state: r.state, progressFraction: Number(r.progress_fraction),
-    progressPhase: r.progress_phase, shardCount: r.shard_count, shardsDone: Number(r.shards_done ?? 0),
-    timeLimitSeconds: r.time_limit_seconds, createdAt: r.created_at.toISOString(), startedAt: iso(r.started_at),
-    finishedAt: iso(r.finished_at), result: r.result ?? null, error: r.error ?? null, attempt: r.attempt,
+    id: r.id,
+    projectId: r.project_id,
+    modelRevisionId: r.model_revision_id,
+    kind: r.kind,
+    params: r.params,
+    paramsHash: r.params_hash,
+    startedBy: r.started_by,
+    state: r.state,
+    progressFraction: Number(r.progress_fraction),
+    progressPhase: r.progress_phase,
+    shardCount: r.shard_count,
+    shardsDone: Number(r.shards_done ?? 0),
+    timeLimitSeconds: r.time_limit_seconds,
+    createdAt: r.created_at.toISOString(),
+    startedAt: iso(r.started_at),
+    finishedAt: iso(r.finished_at),
+    result: r.result ?? null,
+    error: r.error ?? null,
+    attempt: r.attempt,
   };
 }
 
 const shardsDone = "(select count(*) from run_shards s where s.run_id = runs.id and s.state = 'done') as shards_done";
 
 export interface NewRun {
-  projectId: string; modelRevisionId: string | null; kind: string; params: unknown; paramsHash: string;
-  startedBy: string | null; timeLimitSeconds: number; shardInputs: unknown[];
+  projectId: string;
+  modelRevisionId: string | null;
+  kind: string;
+  params: unknown;
+  paramsHash: string;
+  startedBy: string | null;
+  timeLimitSeconds: number;
+  shardInputs: unknown[];
 }
 
 /** Inserts the run and its shards in one transaction; the caller enqueues the shard jobs afterwards. */
@@ -33,8 +68,14 @@ export async function insertRun(db: Knex, r: NewRun): Promise<{ run: Run; shardI
   return db.transaction(async (trx) => {
     const [row] = await trx("runs")
       .insert({
-        project_id: r.projectId, model_revision_id: r.modelRevisionId, kind: r.kind, params: JSON.stringify(r.params),
-        params_hash: r.paramsHash, started_by: r.startedBy, time_limit_seconds: r.timeLimitSeconds, shard_count: r.shardInputs.length,
+        project_id: r.projectId,
+        model_revision_id: r.modelRevisionId,
+        kind: r.kind,
+        params: JSON.stringify(r.params),
+        params_hash: r.paramsHash,
+        started_by: r.startedBy,
+        time_limit_seconds: r.timeLimitSeconds,
+        shard_count: r.shardInputs.length,
       })
       .returning("*");
     const shards = await trx("run_shards")
@@ -45,8 +86,12 @@ export async function insertRun(db: Knex, r: NewRun): Promise<{ run: Run; shardI
   });
 }
 
-export async function findReusableRun(db: Knex, key: { projectId: string; kind: string; modelRevisionId: string | null; paramsHash: string }): Promise<Run | null> {
-  const q = db("runs").select("*", db.raw(shardsDone))
+export async function findReusableRun(
+  db: Knex,
+  key: { projectId: string; kind: string; modelRevisionId: string | null; paramsHash: string },
+): Promise<Run | null> {
+  const q = db("runs")
+    .select("*", db.raw(shardsDone))
     .where({ project_id: key.projectId, kind: key.kind, params_hash: key.paramsHash, state: "succeeded" });
   if (key.modelRevisionId) q.where("model_revision_id", key.modelRevisionId);
   else q.whereNull("model_revision_id");
@@ -61,20 +106,36 @@ export async function getRun(db: Knex, runId: string, projectId?: string): Promi
   return row ? toRun(row) : null;
 }
 
-export async function listRuns(db: Knex, projectId: string, f: { kind?: string; state?: RunState; limit: number }): Promise<Run[]> {
-  const q = db("runs").select("*", db.raw(shardsDone)).where({ project_id: projectId }).orderBy("created_at", "desc").limit(f.limit);
+export async function listRuns(
+  db: Knex,
+  projectId: string,
+  f: { kind?: string; state?: RunState; limit: number },
+): Promise<Run[]> {
+  const q = db("runs")
+    .select("*", db.raw(shardsDone))
+    .where({ project_id: projectId })
+    .orderBy("created_at", "desc")
+    .limit(f.limit);
   if (f.kind) q.where({ kind: f.kind });
   if (f.state) q.where({ state: f.state });
   return (await q).map(toRun);
 }
 
 export async function countUnfinishedRuns(db: Knex, projectId: string): Promise<number> {
-  const row = await db("runs").where({ project_id: projectId }).whereIn("state", ["queued", "running"]).count<{ count: string }[]>("* as count").first();
+  const row = await db("runs")
+    .where({ project_id: projectId })
+    .whereIn("state", ["queued", "running"])
+    .count<{ count: string }[]>("* as count")
+    .first();
   return Number(row?.count ?? 0);
 }
 
 /** Moves a queued run to running unless the project already has `limit` runs running; true when it may start. */
-export async function tryStartRun(db: Knex, runId: string, limit: number): Promise<"started" | "running" | "wait" | "finished"> {
+export async function tryStartRun(
+  db: Knex,
+  runId: string,
+  limit: number,
+): Promise<"started" | "running" | "wait" | "finished"> {
   return db.transaction(async (trx) => {
     const run = await trx("runs").where({ id: runId }).forUpdate().first();
     if (!run) return "finished";
@@ -82,18 +143,32 @@ export async function tryStartRun(db: Knex, runId: string, limit: number): Promi
     if (run.state !== "queued") return "finished";
     // Serialise starts per project so two workers cannot both see "one slot left".
     await trx.raw("select pg_advisory_xact_lock(hashtext(?))", [`runs:${run.project_id}`]);
-    const row = await trx("runs").where({ project_id: run.project_id, state: "running" }).count<{ count: string }[]>("* as count").first();
+    const row = await trx("runs")
+      .where({ project_id: run.project_id, state: "running" })
+      .count<{ count: string }[]>("* as count")
+      .first();
     if (Number(row?.count ?? 0) >= limit) return "wait";
-    await trx("runs").where({ id: runId }).update({ state: "running", started_at: trx.fn.now(), progress_phase: "starting" });
+    await trx("runs")
+      .where({ id: runId })
+      .update({ state: "running", started_at: trx.fn.now(), progress_phase: "starting" });
     return "started";
   });
 }
 
 /** Marks a run finished only if it is still unfinished; answers the updated run or null when nothing changed. */
-export async function finishRun(db: Knex, runId: string, state: "succeeded" | "failed" | "cancelled", out: { result?: unknown; error?: RunError }): Promise<Run | null> {
-  const [row] = await db("runs").where({ id: runId }).whereIn("state", ["queued", "running"])
+export async function finishRun(
+  db: Knex,
+  runId: string,
+  state: "succeeded" | "failed" | "cancelled",
+  out: { result?: unknown; error?: RunError },
+): Promise<Run | null> {
+  const [row] = await db("runs")
+    .where({ id: runId })
+    .whereIn("state", ["queued", "running"])
     .update({
-      state, finished_at: db.fn.now(), result: out.result === undefined ? null : JSON.stringify(out.result),
+      state,
+      finished_at: db.fn.now(),
+      result: out.result === undefined ? null : JSON.stringify(out.result),
       error: out.error ? JSON.stringify(out.error) : null,
       ...(state === "succeeded" ? { progress_fraction: 1, progress_phase: "done" } : { progress_phase: state }),
     })
@@ -104,12 +179,25 @@ export async function finishRun(db: Knex, runId: string, state: "succeeded" | "f
 /** Puts a failed or cancelled run back in the queue; finished shards and every checkpoint are kept. */
 export async function resetRunForRetry(db: Knex, runId: string): Promise<string[] | null> {
   return db.transaction(async (trx) => {
-    const [row] = await trx("runs").where({ id: runId }).whereIn("state", ["failed", "cancelled"])
-      .update({ state: "queued", finished_at: null, started_at: null, error: null, result: null, progress_phase: "queued", attempt: trx.raw("attempt + 1") })
+    const [row] = await trx("runs")
+      .where({ id: runId })
+      .whereIn("state", ["failed", "cancelled"])
+      .update({
+        state: "queued",
+        finished_at: null,
+        started_at: null,
+        error: null,
+        result: null,
+        progress_phase: "queued",
+        attempt: trx.raw("attempt + 1"),
+      })
       .returning("id");
     if (!row) return null;
-    const shards = await trx("run_shards").where({ run_id: runId }).whereNot({ state: "done" })
-      .update({ state: "queued", lease: null, heartbeat_at: null, boss_job_id: null, queued_at: trx.fn.now() }).returning("id");
+    const shards = await trx("run_shards")
+      .where({ run_id: runId })
+      .whereNot({ state: "done" })
+      .update({ state: "queued", lease: null, heartbeat_at: null, boss_job_id: null, queued_at: trx.fn.now() })
+      .returning("id");
     return shards.map((s) => s.id as string);
   });
 }
@@ -118,22 +206,38 @@ export async function deleteRun(db: Knex, runId: string): Promise<boolean> {
   return (await db("runs").where({ id: runId }).del()) > 0;
 }
 
-export async function runState(db: Knex, runId: string): Promise<{ state: RunState; startedAt: Date | null; timeLimitSeconds: number; now: Date } | null> {
-  const row = await db("runs").where({ id: runId }).select("state", "started_at", "time_limit_seconds", db.raw("now() as now")).first();
-  return row ? { state: row.state, startedAt: row.started_at, timeLimitSeconds: row.time_limit_seconds, now: row.now } : null;
+export async function runState(
+  db: Knex,
+  runId: string,
+): Promise<{ state: RunState; startedAt: Date | null; timeLimitSeconds: number; now: Date } | null> {
+  const row = await db("runs")
+    .where({ id: runId })
+    .select("state", "started_at", "time_limit_seconds", db.raw("now() as now"))
+    .first();
+  return row
+    ? { state: row.state, startedAt: row.started_at, timeLimitSeconds: row.time_limit_seconds, now: row.now }
+    : null;
 }
 
 /** Run progress is the mean of its shards' fractions; the phase is the latest shard's. */
 export async function refreshRunProgress(db: Knex, runId: string, phase: string): Promise<void> {
-  await db("runs").where({ id: runId, state: "running" }).update({
-    progress_fraction: db.raw("least(1, (select coalesce(avg(case when s.state = 'done' then 1 else s.progress_fraction end), 0) from run_shards s where s.run_id = runs.id))"),
-    progress_phase: phase,
-  });
+  await db("runs")
+    .where({ id: runId, state: "running" })
+    .update({
+      progress_fraction: db.raw(
+        "least(1, (select coalesce(avg(case when s.state = 'done' then 1 else s.progress_fraction end), 0) from run_shards s where s.run_id = runs.id))",
+      ),
+      progress_phase: phase,
+    });
 }
 
 /** The rule text of a model revision of this project, or null when the revision is not in the project. */
 export async function revisionRuleText(db: Knex, projectId: string, revisionId: string): Promise<string | null> {
-  const row = await db("model_revisions as r").join("models as m", "m.id", "r.model_id")
-    .where("r.id", revisionId).where("m.project_id", projectId).select("r.rule_text").first();
+  const row = await db("model_revisions as r")
+    .join("models as m", "m.id", "r.model_id")
+    .where("r.id", revisionId)
+    .where("m.project_id", projectId)
+    .select("r.rule_text")
+    .first();
   return row ? (row.rule_text as string) : null;
 }

@@ -1,6 +1,6 @@
 // Accounts: rows become domain objects here; the password hash never leaves this module except for verification.
 import type { Knex } from "knex";
-import type { SiteRole } from "../../../shared/types/roles";
+import type { SiteRole } from "@shared/types/roles";
 
 export interface User {
   id: string;
@@ -24,7 +24,14 @@ interface UserRow {
 const columns = ["id", "email", "display_name", "site_role", "session_version", "created_at"];
 
 function toUser(r: UserRow): User {
-  return { id: r.id, email: r.email, displayName: r.display_name, siteRole: r.site_role, sessionVersion: r.session_version, createdAt: r.created_at.toISOString() };
+  return {
+    id: r.id,
+    email: r.email,
+    displayName: r.display_name,
+    siteRole: r.site_role,
+    sessionVersion: r.session_version,
+    createdAt: r.created_at.toISOString(),
+  };
 }
 
 export async function findUserById(db: Knex, id: string): Promise<User | null> {
@@ -39,7 +46,10 @@ export async function findUserByEmail(db: Knex, email: string): Promise<User | n
 
 /** The stored hash for a sign-in check, together with the user it belongs to. */
 export async function findCredentials(db: Knex, email: string): Promise<{ user: User; passwordHash: string } | null> {
-  const row = (await db("users").select([...columns, "password_hash"]).where({ email: email.toLowerCase() }).first()) as UserRow | undefined;
+  const row = (await db("users")
+    .select([...columns, "password_hash"])
+    .where({ email: email.toLowerCase() })
+    .first()) as UserRow | undefined;
   return row ? { user: toUser(row), passwordHash: row.password_hash! } : null;
 }
 
@@ -48,13 +58,21 @@ export async function insertUser(
   input: { email: string; displayName: string; passwordHash: string; siteRole?: SiteRole },
 ): Promise<User> {
   const [row] = await db("users")
-    .insert({ email: input.email.toLowerCase(), display_name: input.displayName, password_hash: input.passwordHash, site_role: input.siteRole ?? "member" })
+    .insert({
+      email: input.email.toLowerCase(),
+      display_name: input.displayName,
+      password_hash: input.passwordHash,
+      site_role: input.siteRole ?? "member",
+    })
     .returning(columns);
   return toUser(row as UserRow);
 }
 
 export async function updateDisplayName(db: Knex, id: string, displayName: string): Promise<User> {
-  const [row] = await db("users").where({ id }).update({ display_name: displayName, updated_at: db.fn.now() }).returning(columns);
+  const [row] = await db("users")
+    .where({ id })
+    .update({ display_name: displayName, updated_at: db.fn.now() })
+    .returning(columns);
   return toUser(row as UserRow);
 }
 
@@ -68,6 +86,7 @@ export async function updatePassword(db: Knex, id: string, passwordHash: string)
 }
 
 export async function passwordHashOf(db: Knex, id: string): Promise<string | null> {
-  const row = (await db("users").select("password_hash").where({ id }).first()) as { password_hash: string } | undefined;
+  const row = (await db("users").select("password_hash").where({ id }).first()) as
+    { password_hash: string } | undefined;
   return row?.password_hash ?? null;
 }

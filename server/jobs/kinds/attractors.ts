@@ -1,6 +1,6 @@
 // "attractors": exact synchronous attractors and basins of one network (one shard: the state space is walked
 // once as a whole, see shared/engine/state-graph).
-import { AttractorsParams } from "../../../shared/schemas/runs";
+import { AttractorsParams } from "@shared/schemas/runs";
 import { ruleTextIssues } from "../../models/model-reading";
 import { RunRequestError } from "../run-errors";
 import { taskFile, type RunKindDefinition } from "../run-kind";
@@ -12,11 +12,17 @@ export const attractorsKind: RunKindDefinition<AttractorsParams> = {
   timeLimitSeconds: 3600,
   plan(p, revision) {
     const ruleText = p.ruleText ?? revision?.ruleText;
-    if (!ruleText) throw new RunRequestError(400, "INVALID_INPUT", "An attractors run needs a model revision or rule text");
+    if (!ruleText)
+      throw new RunRequestError(400, "INVALID_INPUT", "An attractors run needs a model revision or rule text");
     // Text sent with the run is read here, so its mistakes come back with their place and its size stays bounded.
     if (p.ruleText) {
       const first = ruleTextIssues(p.ruleText).issues[0];
-      if (first) throw new RunRequestError(400, "PARSE_ERROR", `params.ruleText: ${first.message} (line ${first.line}, column ${first.column})`);
+      if (first)
+        throw new RunRequestError(
+          400,
+          "PARSE_ERROR",
+          `params.ruleText: ${first.message} (line ${first.line}, column ${first.column})`,
+        );
     }
     return [{ ruleText }];
   },

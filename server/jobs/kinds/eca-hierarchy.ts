@@ -1,8 +1,8 @@
 // "eca-hierarchy": the block-emulation preorder of the 256 elementary rules up to a block size, split into shards
 // of search units (see shared/engine/block-emulation). The result is a HierarchyRunResult; the automata routes
 // file it in eca_hierarchies the first time someone asks for that hierarchy.
-import { hierarchyUnits } from "../../../shared/engine/block-emulation";
-import { HierarchyRunParameters } from "../../../shared/schemas/automata";
+import { hierarchyUnits } from "@shared/engine/block-emulation";
+import { HierarchyRunParameters } from "@shared/schemas/automata";
 import type { EcaHierarchyShard } from "../../workers/tasks/eca-hierarchy";
 import { taskFile, type RunKindDefinition } from "../run-kind";
 
@@ -17,7 +17,11 @@ export const ecaHierarchyKind: RunKindDefinition<HierarchyRunParameters> = {
   timeLimitSeconds: 6 * 3600,
   plan(p) {
     const shardCount = Math.min(MAX_SHARDS, hierarchyUnits(p.maxBlock).length);
-    return Array.from({ length: shardCount }, (_, shardIndex): EcaHierarchyShard => ({ maxBlock: p.maxBlock, shardIndex, shardCount }));
+    return Array.from({ length: shardCount }, (_, shardIndex): EcaHierarchyShard => ({
+      maxBlock: p.maxBlock,
+      shardIndex,
+      shardCount,
+    }));
   },
   merge() {
     throw new Error("eca-hierarchy merges in a worker thread (mergeTaskFile)");

@@ -6,7 +6,10 @@ import { reductionSearchKind } from "./reduction-search";
 import { sleepCountKind } from "./sleep-count";
 
 const kinds = new Map<string, RunKindDefinition<never>>(
-  [sleepCountKind, ecaHierarchyKind, attractorsKind, reductionSearchKind].map((k) => [k.kind, k as unknown as RunKindDefinition<never>]),
+  [sleepCountKind, ecaHierarchyKind, attractorsKind, reductionSearchKind].map((k) => [
+    k.kind,
+    k as unknown as RunKindDefinition<never>,
+  ]),
 );
 
 export function runKind(kind: string): RunKindDefinition<unknown> | undefined {

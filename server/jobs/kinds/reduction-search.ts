@@ -1,6 +1,6 @@
 // "reduction-search": given-target, discover and coarse-graining searches (server/reductions/search-plan.ts). The
 // merged findings become proposed reductions in the same transaction that marks the run succeeded.
-import { ReductionSearchParams } from "../../../shared/schemas/reductions";
+import { ReductionSearchParams } from "@shared/schemas/reductions";
 import { mergeSearch, planSearch, type ShardPartial } from "../../reductions/search-plan";
 import { storeSearchFindings } from "../../reductions/store-findings";
 import { taskFile, type RunKindDefinition } from "../run-kind";

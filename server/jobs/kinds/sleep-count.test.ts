@@ -1,7 +1,11 @@
 import fc from "fast-check";
 import { MessageChannel } from "node:worker_threads";
 import { describe, expect, it } from "vitest";
-import sleepCountTask, { itemValue, type SleepCountPartial, type SleepCountShard } from "../../workers/tasks/sleep-count";
+import sleepCountTask, {
+  itemValue,
+  type SleepCountPartial,
+  type SleepCountShard,
+} from "../../workers/tasks/sleep-count";
 import { paramsHash } from "../run-lifecycle";
 import { sleepCountKind } from "./sleep-count";
 
@@ -16,15 +20,29 @@ function reference(from: number, to: number): SleepCountPartial {
   return out;
 }
 
-async function runShard(shard: SleepCountShard, cursor: number | null, partial: SleepCountPartial | null): Promise<SleepCountPartial> {
+async function runShard(
+  shard: SleepCountShard,
+  cursor: number | null,
+  partial: SleepCountPartial | null,
+): Promise<SleepCountPartial> {
   const { port1, port2 } = new MessageChannel();
-  const out = await sleepCountTask({ input: shard, cursor, partial, port: port2, stopFlag: new Int32Array(new SharedArrayBuffer(4)) });
+  const out = await sleepCountTask({
+    input: shard,
+    cursor,
+    partial,
+    port: port2,
+    stopFlag: new Int32Array(new SharedArrayBuffer(4)),
+  });
   port1.close();
   if (!out.ok) throw new Error(out.error.message);
   return out.partial as SleepCountPartial;
 }
 
-const params = fc.record({ itemCount: fc.integer({ min: 1, max: 5000 }), shardCount: fc.integer({ min: 1, max: 64 }), delayMsPerItem: fc.constant(0) });
+const params = fc.record({
+  itemCount: fc.integer({ min: 1, max: 5000 }),
+  shardCount: fc.integer({ min: 1, max: 64 }),
+  delayMsPerItem: fc.constant(0),
+});
 
 describe("sleep-count run kind", () => {
   it("plan(params) splits [0, itemCount) into contiguous, non-empty shards covering every item once", () => {
@@ -56,12 +74,17 @@ describe("sleep-count run kind", () => {
 
   it("the shard task resumed from a checkpoint (cursor, partial) gives the uninterrupted result", async () => {
     await fc.assert(
-      fc.asyncProperty(fc.integer({ min: 0, max: 2000 }), fc.integer({ min: 1, max: 2000 }), fc.double({ min: 0, max: 1, noNaN: true }), async (from, length, at) => {
-        const shard = { from, to: from + length, delayMsPerItem: 0 };
-        const cursor = from + Math.floor(at * length);
-        const resumed = await runShard(shard, cursor, reference(from, cursor));
-        expect(resumed).toEqual(reference(from, from + length));
-      }),
+      fc.asyncProperty(
+        fc.integer({ min: 0, max: 2000 }),
+        fc.integer({ min: 1, max: 2000 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        async (from, length, at) => {
+          const shard = { from, to: from + length, delayMsPerItem: 0 };
+          const cursor = from + Math.floor(at * length);
+          const resumed = await runShard(shard, cursor, reference(from, cursor));
+          expect(resumed).toEqual(reference(from, from + length));
+        },
+      ),
       { seed: 5003, numRuns: 60 },
     );
   });
@@ -70,12 +93,20 @@ describe("sleep-count run kind", () => {
 describe("paramsHash", () => {
   it("paramsHash(params) ignores key order but tells different values apart", () => {
     fc.assert(
-      fc.property(fc.dictionary(fc.string({ minLength: 1, maxLength: 6 }), fc.oneof(fc.integer(), fc.string(), fc.boolean()), { minKeys: 1, maxKeys: 6 }), (obj) => {
-        const reversed = Object.fromEntries(Object.entries(obj).reverse());
-        expect(paramsHash(reversed)).toBe(paramsHash(obj));
-        const [key, value] = Object.entries(obj)[0]!;
-        expect(paramsHash({ ...obj, [key]: typeof value === "number" ? value + 1 : `${String(value)}!` })).not.toBe(paramsHash(obj));
-      }),
+      fc.property(
+        fc.dictionary(fc.string({ minLength: 1, maxLength: 6 }), fc.oneof(fc.integer(), fc.string(), fc.boolean()), {
+          minKeys: 1,
+          maxKeys: 6,
+        }),
+        (obj) => {
+          const reversed = Object.fromEntries(Object.entries(obj).reverse());
+          expect(paramsHash(reversed)).toBe(paramsHash(obj));
+          const [key, value] = Object.entries(obj)[0]!;
+          expect(paramsHash({ ...obj, [key]: typeof value === "number" ? value + 1 : `${String(value)}!` })).not.toBe(
+            paramsHash(obj),
+          );
+        },
+      ),
       { seed: 5004 },
     );
   });

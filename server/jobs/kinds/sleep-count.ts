@@ -1,6 +1,6 @@
 // "sleep-count": the deterministic, sharded demonstration kind used by tests and the benchmark. It splits
 // [0, itemCount) into contiguous shards; merging adds the shards' counts, so a lost or doubled shard shows.
-import { SleepCountParams, type SleepCountResult } from "../../../shared/schemas/runs";
+import { SleepCountParams, type SleepCountResult } from "@shared/schemas/runs";
 import type { SleepCountPartial, SleepCountShard } from "../../workers/tasks/sleep-count";
 import { taskFile, type RunKindDefinition } from "../run-kind";
 
@@ -13,7 +13,11 @@ export const sleepCountKind: RunKindDefinition<SleepCountParams> = {
     const shardCount = Math.min(p.shardCount, p.itemCount);
     const shards: SleepCountShard[] = [];
     for (let i = 0; i < shardCount; i++) {
-      shards.push({ from: Math.floor((i * p.itemCount) / shardCount), to: Math.floor(((i + 1) * p.itemCount) / shardCount), delayMsPerItem: p.delayMsPerItem });
+      shards.push({
+        from: Math.floor((i * p.itemCount) / shardCount),
+        to: Math.floor(((i + 1) * p.itemCount) / shardCount),
+        delayMsPerItem: p.delayMsPerItem,
+      });
     }
     return shards;
   },

@@ -1,6 +1,6 @@
 // Thin wrapper: rule text in, synchronous attractors (states as 0/1 text) and transient figures out.
-import { compileDefinition, readRuleText } from "../../../shared/engine/rules";
-import { analyseSynchronous, attractorsAsText } from "../../../shared/engine/state-graph";
+import { compileDefinition, readRuleText } from "@shared/engine/rules";
+import { analyseSynchronous, attractorsAsText } from "@shared/engine/state-graph";
 import { runTask } from "../task-context";
 import type { ShardTaskInput } from "../task-protocol";
 

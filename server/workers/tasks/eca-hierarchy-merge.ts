@@ -1,8 +1,8 @@
 // Thin wrapper: merges the shards' unit results and assembles the hierarchy (closure, composed witnesses checked
 // by the independent verifier) in a pool thread, since assembly of large block sizes takes a while.
-import { assembleEcaHierarchy, mergeHierarchyParts } from "../../../shared/engine/block-emulation";
-import { EngineError } from "../../../shared/engine/errors";
-import type { HierarchyRunParameters } from "../../../shared/schemas/automata";
+import { assembleEcaHierarchy, mergeHierarchyParts } from "@shared/engine/block-emulation";
+import { EngineError } from "@shared/engine/errors";
+import type { HierarchyRunParameters } from "@shared/schemas/automata";
 import { runResultFromEngine } from "../../automata/eca-hierarchy-compute";
 import type { MergeTaskInput } from "../../jobs/run-kind";
 import type { EcaHierarchyPartial } from "./eca-hierarchy";
@@ -13,7 +13,11 @@ export default function ecaHierarchyMergeTask(input: MergeTaskInput) {
     const partials = input.partials as EcaHierarchyPartial[];
     const params = input.params as HierarchyRunParameters;
     const hierarchy = assembleEcaHierarchy(mergeHierarchyParts(partials.map((p) => p.part)));
-    if (hierarchy.maxBlock !== params.maxBlock) throw new EngineError("BAD_PARTS", `shards computed block size ${hierarchy.maxBlock}, the run asked for ${params.maxBlock}`);
+    if (hierarchy.maxBlock !== params.maxBlock)
+      throw new EngineError(
+        "BAD_PARTS",
+        `shards computed block size ${hierarchy.maxBlock}, the run asked for ${params.maxBlock}`,
+      );
     const computeMs = partials.reduce((s, p) => s + p.computeMs, 0) + performance.now() - started;
     return { ok: true as const, result: runResultFromEngine(hierarchy, computeMs) };
   } catch (err) {

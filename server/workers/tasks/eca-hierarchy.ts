@@ -1,11 +1,18 @@
 // Thin wrapper: one shard of the elementary-rule block-emulation hierarchy, resumable from a unit cursor; the
 // checkpoint carries every unit result so far, so a resumed shard never searches a unit twice.
-import { runHierarchyShard, type HierarchyPart } from "../../../shared/engine/block-emulation";
+import { runHierarchyShard, type HierarchyPart } from "@shared/engine/block-emulation";
 import { runTask } from "../task-context";
 import type { ShardTaskInput } from "../task-protocol";
 
-export interface EcaHierarchyShard { maxBlock: number; shardIndex: number; shardCount: number }
-export interface EcaHierarchyPartial { part: HierarchyPart; computeMs: number }
+export interface EcaHierarchyShard {
+  maxBlock: number;
+  shardIndex: number;
+  shardCount: number;
+}
+export interface EcaHierarchyPartial {
+  part: HierarchyPart;
+  computeMs: number;
+}
 
 const CHECKPOINT_EVERY_MS = 500;
 
@@ -30,7 +37,10 @@ export default function ecaHierarchyTask(task: ShardTaskInput) {
         units.push(result);
         if (Date.now() - lastCheckpoint < CHECKPOINT_EVERY_MS) return;
         lastCheckpoint = Date.now();
-        ctx.checkpoint(fraction, "searching", cursor, { part: { maxBlock: shard.maxBlock, units: [...units] }, computeMs: spent() });
+        ctx.checkpoint(fraction, "searching", cursor, {
+          part: { maxBlock: shard.maxBlock, units: [...units] },
+          computeMs: spent(),
+        });
       },
     });
     return { part: { maxBlock: shard.maxBlock, units }, computeMs: spent() } satisfies EcaHierarchyPartial;

@@ -1,6 +1,6 @@
 // Thin wrapper: one shard of a reduction search. Block-emulation shards checkpoint their cursor (every unit before
 // it holds no witness), so a restarted worker resumes the shard instead of repeating it.
-import type { ReductionSearchParams } from "../../../shared/schemas/reductions";
+import type { ReductionSearchParams } from "@shared/schemas/reductions";
 import { runSearchShard, type SearchShard } from "../../reductions/search-plan";
 import { runTask } from "../task-context";
 import type { ShardTaskInput } from "../task-protocol";

@@ -1,12 +1,20 @@
 // Demonstration shard task: walks [from, to) one item at a time, sleeping delayMsPerItem per item (a stand-in for
 // real work), and checkpoints every ~200 ms so a resumed shard continues where the last checkpoint left it.
 // The sums stay exact integers (below 10^12, far inside 2^53) for the allowed item counts, so merged results compare exactly.
-import { CancelledError } from "../../../shared/engine/errors";
+import { CancelledError } from "@shared/engine/errors";
 import { runTask } from "../task-context";
 import type { ShardTaskInput } from "../task-protocol";
 
-export interface SleepCountShard { from: number; to: number; delayMsPerItem: number }
-export interface SleepCountPartial { itemCount: number; sum: number; oddCount: number }
+export interface SleepCountShard {
+  from: number;
+  to: number;
+  delayMsPerItem: number;
+}
+export interface SleepCountPartial {
+  itemCount: number;
+  sum: number;
+  oddCount: number;
+}
 
 const CHECKPOINT_EVERY_MS = 200;
 
@@ -19,7 +27,11 @@ export default function sleepCountTask(task: ShardTaskInput) {
   return runTask(task, (ctx) => {
     const shard = task.input as SleepCountShard;
     let cursor = typeof task.cursor === "number" ? task.cursor : shard.from;
-    const partial: SleepCountPartial = (task.partial as SleepCountPartial | null) ?? { itemCount: 0, sum: 0, oddCount: 0 };
+    const partial: SleepCountPartial = (task.partial as SleepCountPartial | null) ?? {
+      itemCount: 0,
+      sum: 0,
+      oddCount: 0,
+    };
     const span = Math.max(1, shard.to - shard.from);
     const sleeper = new Int32Array(new SharedArrayBuffer(4));
     let lastCheckpoint = Date.now();

@@ -12,7 +12,8 @@ export function packedToString(word: number, length: number): string {
 }
 
 export function packedFromString(text: string): number {
-  if (text.length > MAX_PACKED_CELLS) throw new EngineError("BAD_WORD", `a packed word holds at most ${MAX_PACKED_CELLS} cells`);
+  if (text.length > MAX_PACKED_CELLS)
+    throw new EngineError("BAD_WORD", `a packed word holds at most ${MAX_PACKED_CELLS} cells`);
   let w = 0;
   for (let i = 0; i < text.length; i++) {
     const ch = text[i];

@@ -1,6 +1,18 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ecaRule, ecaNumber, reflectEca, complementEca, reflectRule, complementRule, ruleFromNumber, ruleNumber, ecaSymmetryClasses, ecaSymmetryImages, stepWord } from "./index";
+import {
+  ecaRule,
+  ecaNumber,
+  reflectEca,
+  complementEca,
+  reflectRule,
+  complementRule,
+  ruleFromNumber,
+  ruleNumber,
+  ecaSymmetryClasses,
+  ecaSymmetryImages,
+  stepWord,
+} from "./index";
 
 describe("rule symmetries", () => {
   it("ecaSymmetryClasses finds the 88 classes of Li & Packard (Complex Systems 4, 1990) covering all 256 rules", () => {
@@ -29,15 +41,20 @@ describe("rule symmetries", () => {
 
   it("reflectRule and complementRule conjugate the dynamics: reversing or complementing a word commutes with a step", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 2 }), fc.integer({ min: 0, max: 2 ** 32 - 1 }), fc.array(fc.integer({ min: 0, max: 1 }), { minLength: 5, maxLength: 20 }), (radius, n, cells) => {
-        const rule = ruleFromNumber(radius, radius === 1 ? n & 255 : n);
-        const w = Uint8Array.from(cells);
-        const rev = (a: Uint8Array) => Uint8Array.from([...a].reverse());
-        const neg = (a: Uint8Array) => a.map((x) => 1 - x);
-        expect([...stepWord(reflectRule(rule), rev(w))]).toEqual([...rev(stepWord(rule, w))]);
-        expect([...stepWord(complementRule(rule), neg(w))]).toEqual([...neg(stepWord(rule, w))]);
-        expect(ruleNumber(reflectRule(reflectRule(rule)))).toBe(ruleNumber(rule));
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 2 }),
+        fc.integer({ min: 0, max: 2 ** 32 - 1 }),
+        fc.array(fc.integer({ min: 0, max: 1 }), { minLength: 5, maxLength: 20 }),
+        (radius, n, cells) => {
+          const rule = ruleFromNumber(radius, radius === 1 ? n & 255 : n);
+          const w = Uint8Array.from(cells);
+          const rev = (a: Uint8Array) => Uint8Array.from([...a].reverse());
+          const neg = (a: Uint8Array) => a.map((x) => 1 - x);
+          expect([...stepWord(reflectRule(rule), rev(w))]).toEqual([...rev(stepWord(rule, w))]);
+          expect([...stepWord(complementRule(rule), neg(w))]).toEqual([...neg(stepWord(rule, w))]);
+          expect(ruleNumber(reflectRule(reflectRule(rule)))).toBe(ruleNumber(rule));
+        },
+      ),
       { seed: 5, numRuns: 200 },
     );
   });

@@ -43,7 +43,8 @@ export function ruleFromNumber(radius: number, n: bigint | number): RuleTable {
 export function ruleFromTable(radius: number, values: ArrayLike<number>): RuleTable {
   checkRadius(radius);
   const size = 1 << (2 * radius + 1);
-  if (values.length !== size) throw new EngineError("BAD_RULE", `a radius-${radius} rule has ${size} table entries, got ${values.length}`);
+  if (values.length !== size)
+    throw new EngineError("BAD_RULE", `a radius-${radius} rule has ${size} table entries, got ${values.length}`);
   const table = new Uint8Array(size);
   for (let i = 0; i < size; i++) {
     const v = values[i];

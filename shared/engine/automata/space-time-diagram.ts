@@ -13,8 +13,10 @@ export interface SpaceTimeDiagram {
 
 /** The diagram of `steps` steps from `initial` on a ring, keeping every `every`-th row (row 0 always). */
 export function spaceTimeDiagram(rule: RuleTable, initial: Uint8Array, steps: number, every = 1): SpaceTimeDiagram {
-  if (!Number.isInteger(steps) || steps < 0) throw new EngineError("BAD_ARGUMENT", `steps is a non-negative integer, got ${steps}`);
-  if (!Number.isInteger(every) || every < 1) throw new EngineError("BAD_ARGUMENT", `every is a positive integer, got ${every}`);
+  if (!Number.isInteger(steps) || steps < 0)
+    throw new EngineError("BAD_ARGUMENT", `steps is a non-negative integer, got ${steps}`);
+  if (!Number.isInteger(every) || every < 1)
+    throw new EngineError("BAD_ARGUMENT", `every is a positive integer, got ${every}`);
   const width = initial.length;
   const rows = Math.floor(steps / every);
   const cells = new Uint8Array((rows + 1) * width);

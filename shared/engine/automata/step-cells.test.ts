@@ -1,6 +1,17 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ecaRule, ruleFromNumber, stepWord, stepRing, stepPackedWord, spaceTimeDiagram, cellsFromString, cellsToString, packedFromString, packedToString } from "./index";
+import {
+  ecaRule,
+  ruleFromNumber,
+  stepWord,
+  stepRing,
+  stepPackedWord,
+  spaceTimeDiagram,
+  cellsFromString,
+  cellsToString,
+  packedFromString,
+  packedToString,
+} from "./index";
 
 /** The definition, one cell at a time. */
 function referenceStep(table: Uint8Array, radius: number, cells: number[]): number[] {
@@ -16,22 +27,32 @@ function referenceStep(table: Uint8Array, radius: number, cells: number[]): numb
 describe("stepping words and rings", () => {
   it("stepWord matches the cell-by-cell definition and drops r cells at each end", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 3 }), fc.bigInt({ min: 0n, max: 2n ** 128n - 1n }), fc.array(fc.integer({ min: 0, max: 1 }), { minLength: 7, maxLength: 40 }), (radius, n, cells) => {
-        const rule = ruleFromNumber(radius, n % (1n << BigInt(1 << (2 * radius + 1))));
-        expect([...stepWord(rule, Uint8Array.from(cells))]).toEqual(referenceStep(rule.table, radius, cells));
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 3 }),
+        fc.bigInt({ min: 0n, max: 2n ** 128n - 1n }),
+        fc.array(fc.integer({ min: 0, max: 1 }), { minLength: 7, maxLength: 40 }),
+        (radius, n, cells) => {
+          const rule = ruleFromNumber(radius, n % (1n << BigInt(1 << (2 * radius + 1))));
+          expect([...stepWord(rule, Uint8Array.from(cells))]).toEqual(referenceStep(rule.table, radius, cells));
+        },
+      ),
       { seed: 7, numRuns: 300 },
     );
   });
 
   it("stepPackedWord agrees with stepWord on the cells it defines", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 2 }), fc.integer({ min: 0, max: 2 ** 32 - 1 }), fc.integer({ min: 0, max: 2 ** 24 - 1 }), (radius, n, word) => {
-        const rule = ruleFromNumber(radius, radius === 1 ? n & 255 : n);
-        const text = packedToString(word, 24);
-        const expected = cellsToString(stepWord(rule, cellsFromString(text)));
-        expect(packedToString(stepPackedWord(rule, packedFromString(text)), expected.length)).toBe(expected);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 2 }),
+        fc.integer({ min: 0, max: 2 ** 32 - 1 }),
+        fc.integer({ min: 0, max: 2 ** 24 - 1 }),
+        (radius, n, word) => {
+          const rule = ruleFromNumber(radius, radius === 1 ? n & 255 : n);
+          const text = packedToString(word, 24);
+          const expected = cellsToString(stepWord(rule, cellsFromString(text)));
+          expect(packedToString(stepPackedWord(rule, packedFromString(text)), expected.length)).toBe(expected);
+        },
+      ),
       { seed: 9, numRuns: 300 },
     );
   });
@@ -63,7 +84,10 @@ describe("stepping words and rings", () => {
     const all = spaceTimeDiagram(ecaRule(110), initial, 12);
     const sampled = spaceTimeDiagram(ecaRule(110), initial, 12, 3);
     expect(sampled.steps).toBe(4);
-    for (let r = 0; r <= 4; r++) expect([...sampled.cells.subarray(r * 10, r * 10 + 10)]).toEqual([...all.cells.subarray(3 * r * 10, 3 * r * 10 + 10)]);
+    for (let r = 0; r <= 4; r++)
+      expect([...sampled.cells.subarray(r * 10, r * 10 + 10)]).toEqual([
+        ...all.cells.subarray(3 * r * 10, 3 * r * 10 + 10),
+      ]);
     expect(() => spaceTimeDiagram(ecaRule(110), initial, -1)).toThrow(/non-negative/);
   });
 });

@@ -8,7 +8,11 @@ import type { RuleTable } from "./rule-table";
 export function stepWord(rule: RuleTable, cells: Uint8Array): Uint8Array {
   const span = 2 * rule.radius + 1;
   const n = cells.length - span + 1;
-  if (n < 0) throw new EngineError("WORD_TOO_SHORT", `a word of ${cells.length} cells has no cells left after a radius-${rule.radius} step`);
+  if (n < 0)
+    throw new EngineError(
+      "WORD_TOO_SHORT",
+      `a word of ${cells.length} cells has no cells left after a radius-${rule.radius} step`,
+    );
   const out = new Uint8Array(n);
   const mask = rule.table.length - 1;
   let idx = 0;

@@ -58,7 +58,8 @@ export function affineEmulations(map: MiddleBlockMap): PackedEmulation[] {
       let target = 0;
       for (let p = 0; p < 8; p++) target |= (g0 ^ (alpha & (p >> 2)) ^ (beta & (p >> 1)) ^ (gamma & p)) << p;
       if (found.has(target)) continue;
-      const witness = g0 === 0 ? solveConstantZero(sCols, dBits, deltas[0]!, k) : solveConstantOne(sCols, dBits, deltas, k);
+      const witness =
+        g0 === 0 ? solveConstantZero(sCols, dBits, deltas[0]!, k) : solveConstantOne(sCols, dBits, deltas, k);
       if (witness) found.set(target, { target, u0: witness[0], u1: witness[1] });
     }
   }

@@ -12,17 +12,25 @@ describe("blockEmulations", () => {
         const rule = ecaRule(f);
         const fast = blockEmulations(rule, k);
         expect(targets(fast.emulations), `rule ${f}, k ${k}`).toEqual(targets(naiveEmulations(rule, k).emulations));
-        for (const e of fast.emulations) expect(verifyEmulation(rule, e.target, e.u0, e.u1).valid, `rule ${f} -> ${e.target} at k ${k}`).toBe(true);
+        for (const e of fast.emulations)
+          expect(verifyEmulation(rule, e.target, e.u0, e.u1).valid, `rule ${f} -> ${e.target} at k ${k}`).toBe(true);
       }
     }
   });
 
   it("blockEmulations agrees with the reference for shorter time scales t < k", () => {
-    for (const [k, t] of [[3, 1], [4, 2], [5, 3], [6, 4]] as const) {
+    for (const [k, t] of [
+      [3, 1],
+      [4, 2],
+      [5, 3],
+      [6, 4],
+    ] as const) {
       for (let f = 0; f < 256; f += k >= 5 ? 3 : 1) {
         const rule = ecaRule(f);
         const fast = blockEmulations(rule, k, t);
-        expect(targets(fast.emulations), `rule ${f}, k ${k}, t ${t}`).toEqual(targets(naiveEmulations(rule, k, t).emulations));
+        expect(targets(fast.emulations), `rule ${f}, k ${k}, t ${t}`).toEqual(
+          targets(naiveEmulations(rule, k, t).emulations),
+        );
         for (const e of fast.emulations) expect(verifyEmulation(rule, e.target, e.u0, e.u1, t).valid).toBe(true);
       }
     }
@@ -30,12 +38,16 @@ describe("blockEmulations", () => {
 
   it("blockEmulations agrees with the reference for random radius-2 emulators", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 2 ** 32 - 1 }), fc.constantFrom([2, 1], [3, 1], [4, 1], [4, 2], [5, 2]), (n, [k, t]) => {
-        const rule = ruleFromNumber(2, n);
-        const fast = blockEmulations(rule, k, t);
-        expect(targets(fast.emulations)).toEqual(targets(naiveEmulations(rule, k, t).emulations));
-        for (const e of fast.emulations) expect(verifyEmulation(rule, e.target, e.u0, e.u1, t).valid).toBe(true);
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 2 ** 32 - 1 }),
+        fc.constantFrom([2, 1], [3, 1], [4, 1], [4, 2], [5, 2]),
+        (n, [k, t]) => {
+          const rule = ruleFromNumber(2, n);
+          const fast = blockEmulations(rule, k, t);
+          expect(targets(fast.emulations)).toEqual(targets(naiveEmulations(rule, k, t).emulations));
+          for (const e of fast.emulations) expect(verifyEmulation(rule, e.target, e.u0, e.u1, t).valid).toBe(true);
+        },
+      ),
       { seed: 17, numRuns: 60 },
     );
   });
@@ -57,7 +69,9 @@ describe("blockEmulations", () => {
 
   it("blockEmulations at k = 1 gives exactly F and its complement conjugate, since u0, u1 are the two states", () => {
     for (let f = 0; f < 256; f++) {
-      expect(targets(blockEmulations(ecaRule(f), 1).emulations)).toEqual([...new Set([f, complementEca(f)])].sort((a, b) => a - b));
+      expect(targets(blockEmulations(ecaRule(f), 1).emulations)).toEqual(
+        [...new Set([f, complementEca(f)])].sort((a, b) => a - b),
+      );
     }
   });
 

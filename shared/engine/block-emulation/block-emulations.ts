@@ -35,9 +35,18 @@ const conjugate = Array.from({ length: 256 }, (_, g) => complementEca(g));
 /** Below this many fixed points, plain pairing is cheaper than building the edge tables. */
 const EDGE_TABLE_MIN_FIXED = 48;
 
-export function blockEmulations(rule: RuleTable, block: number, time = block, options: BlockSearchOptions = {}): BlockEmulationResult {
+export function blockEmulations(
+  rule: RuleTable,
+  block: number,
+  time = block,
+  options: BlockSearchOptions = {},
+): BlockEmulationResult {
   const map = middleBlockMap(rule, block, time);
-  const toResult = (list: PackedEmulation[], pairsExamined: number, method: BlockEmulationResult["method"]): BlockEmulationResult => ({
+  const toResult = (
+    list: PackedEmulation[],
+    pairsExamined: number,
+    method: BlockEmulationResult["method"],
+  ): BlockEmulationResult => ({
     block,
     time,
     emulations: list
@@ -51,7 +60,10 @@ export function blockEmulations(rule: RuleTable, block: number, time = block, op
   return toResult(list, pairsExamined, "fixed-points");
 }
 
-function fixedPointSearch(map: ReturnType<typeof middleBlockMap>, shouldStop?: () => boolean): { list: PackedEmulation[]; pairsExamined: number } {
+function fixedPointSearch(
+  map: ReturnType<typeof middleBlockMap>,
+  shouldStop?: () => boolean,
+): { list: PackedEmulation[]; pairsExamined: number } {
   const k = map.block;
   const size = 1 << k;
   const u0s = new Int32Array(256);

@@ -76,15 +76,23 @@ describe("ecaHierarchy", () => {
 
   it("composeWitnesses of two relations found by the search yields an emulation at block k*j confirmed by the verifier", () => {
     const byKey = new Map(whole.relations.map((r) => [256 * r.source + r.target, r]));
-    const chains = whole.relations.filter((r) => r.minBlock >= 2 && r.minBlock <= 3 && r.source !== r.target).slice(0, 60);
+    const chains = whole.relations
+      .filter((r) => r.minBlock >= 2 && r.minBlock <= 3 && r.source !== r.target)
+      .slice(0, 60);
     let checked = 0;
     for (const outer of chains) {
       for (const inner of whole.relations) {
         if (inner.source !== outer.target || inner.minBlock < 2 || inner.minBlock > 3 || checked >= 40) continue;
         const w = composeWitnesses(outer, inner);
         expect(w.u0.length).toBe(outer.minBlock * inner.minBlock);
-        expect(verifyEmulation(ecaRule(outer.source), inner.target, w.u0, w.u1).valid, `${outer.source}->${outer.target}->${inner.target}`).toBe(true);
-        expect(byKey.has(256 * outer.source + inner.target) || whole.composed.some((c) => c.source === outer.source && c.target === inner.target)).toBe(true);
+        expect(
+          verifyEmulation(ecaRule(outer.source), inner.target, w.u0, w.u1).valid,
+          `${outer.source}->${outer.target}->${inner.target}`,
+        ).toBe(true);
+        expect(
+          byKey.has(256 * outer.source + inner.target) ||
+            whole.composed.some((c) => c.source === outer.source && c.target === inner.target),
+        ).toBe(true);
         checked++;
       }
     }

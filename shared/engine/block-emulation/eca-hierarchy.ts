@@ -3,7 +3,14 @@
 // into units (symmetry-class representative, block size); emulation is equivariant under reflection and complement
 // (Li & Packard, Complex Systems 4, 1990, for the 88 classes), so only representatives are searched.
 import { CancelledError, EngineError } from "../errors";
-import { ecaRule, ecaSymmetryClasses, ecaSymmetryImages, reflectEca, reverseString, complementString } from "../automata";
+import {
+  ecaRule,
+  ecaSymmetryClasses,
+  ecaSymmetryImages,
+  reflectEca,
+  reverseString,
+  complementString,
+} from "../automata";
 import type { Emulation } from "./block-emulations";
 import { blockEmulations } from "./block-emulations";
 import { composeWitnesses } from "./compose-emulations";
@@ -97,7 +104,10 @@ export interface EcaHierarchy {
 
 function checkMaxBlock(maxBlock: number): void {
   if (!Number.isInteger(maxBlock) || maxBlock < 1 || maxBlock > MAX_HIERARCHY_BLOCK) {
-    throw new EngineError("BAD_BLOCK", `the maximum block size is an integer 1..${MAX_HIERARCHY_BLOCK}, got ${maxBlock}`);
+    throw new EngineError(
+      "BAD_BLOCK",
+      `the maximum block size is an integer 1..${MAX_HIERARCHY_BLOCK}, got ${maxBlock}`,
+    );
   }
 }
 
@@ -111,7 +121,13 @@ export function hierarchyUnits(maxBlock: number): HierarchyUnit[] {
 
 /** The units of one shard: every shardCount-th unit, which spreads the costly large blocks evenly. */
 export function shardUnits(maxBlock: number, shardIndex: number, shardCount: number): HierarchyUnit[] {
-  if (!Number.isInteger(shardCount) || shardCount < 1 || !Number.isInteger(shardIndex) || shardIndex < 0 || shardIndex >= shardCount) {
+  if (
+    !Number.isInteger(shardCount) ||
+    shardCount < 1 ||
+    !Number.isInteger(shardIndex) ||
+    shardIndex < 0 ||
+    shardIndex >= shardCount
+  ) {
     throw new EngineError("BAD_SHARD", `shard ${shardIndex} of ${shardCount} does not exist`);
   }
   return hierarchyUnits(maxBlock).filter((_, i) => i % shardCount === shardIndex);
@@ -123,7 +139,8 @@ const unitWeight = (u: HierarchyUnit) => 2 ** u.block;
 export function runHierarchyShard(options: ShardOptions): ShardRun {
   const { maxBlock, shardIndex = 0, shardCount = 1, cursor = 0, maxUnits = Infinity } = options;
   const units = shardUnits(maxBlock, shardIndex, shardCount);
-  if (!Number.isInteger(cursor) || cursor < 0 || cursor > units.length) throw new EngineError("BAD_CURSOR", `cursor ${cursor} is outside 0..${units.length}`);
+  if (!Number.isInteger(cursor) || cursor < 0 || cursor > units.length)
+    throw new EngineError("BAD_CURSOR", `cursor ${cursor} is outside 0..${units.length}`);
   const total = units.reduce((s, u) => s + unitWeight(u), 0);
   let done = units.slice(0, cursor).reduce((s, u) => s + unitWeight(u), 0);
   const results: HierarchyUnitResult[] = [];
@@ -132,7 +149,12 @@ export function runHierarchyShard(options: ShardOptions): ShardRun {
     if (options.shouldStop?.()) throw new CancelledError();
     const unit = units[position]!;
     const res = blockEmulations(ecaRule(unit.rule), unit.block, unit.block, { shouldStop: options.shouldStop });
-    const result: HierarchyUnitResult = { rule: unit.rule, block: unit.block, emulations: res.emulations, pairsExamined: res.pairsExamined };
+    const result: HierarchyUnitResult = {
+      rule: unit.rule,
+      block: unit.block,
+      emulations: res.emulations,
+      pairsExamined: res.pairsExamined,
+    };
     results.push(result);
     position++;
     done += unitWeight(unit);
@@ -147,7 +169,8 @@ export function mergeHierarchyParts(parts: readonly HierarchyPart[]): HierarchyP
   const maxBlock = parts[0]!.maxBlock;
   const byKey = new Map<string, HierarchyUnitResult>();
   for (const part of parts) {
-    if (part.maxBlock !== maxBlock) throw new EngineError("BAD_PARTS", `parts for maxBlock ${part.maxBlock} and ${maxBlock} cannot merge`);
+    if (part.maxBlock !== maxBlock)
+      throw new EngineError("BAD_PARTS", `parts for maxBlock ${part.maxBlock} and ${maxBlock} cannot merge`);
     for (const u of part.units) byKey.set(`${u.rule}/${u.block}`, u);
   }
   const order = hierarchyUnits(maxBlock);
@@ -187,7 +210,8 @@ export function assembleEcaHierarchy(part: HierarchyPart, options: AssembleOptio
   const expected = hierarchyUnits(maxBlock);
   const have = new Map(part.units.map((u) => [`${u.rule}/${u.block}`, u]));
   const missing = expected.filter((u) => !have.has(`${u.rule}/${u.block}`));
-  if (missing.length > 0) throw new EngineError("INCOMPLETE_HIERARCHY", `${missing.length} of ${expected.length} units are missing`);
+  if (missing.length > 0)
+    throw new EngineError("INCOMPLETE_HIERARCHY", `${missing.length} of ${expected.length} units are missing`);
   const minBlock = new Uint16Array(65536);
   const witness = new Map<number, Emulation>();
   const emulatesAtTwoOrMore = new Uint8Array(256);
@@ -256,7 +280,8 @@ export function assembleEcaHierarchy(part: HierarchyPart, options: AssembleOptio
       w = composeWitnesses(w, witness.get(step)!);
       block *= minBlock[step]!;
     }
-    const verified = options.verifyComposed === false ? undefined : verifyEmulation(ecaRule(source), target, w.u0, w.u1).valid;
+    const verified =
+      options.verifyComposed === false ? undefined : verifyEmulation(ecaRule(source), target, w.u0, w.u1).valid;
     composed.push({ source, target, block, via, u0: w.u0, u1: w.u1, verified });
     options.onProgress?.(0.2 + (0.7 * (n + 1)) / pending.length, "verifying composed witnesses");
   }
@@ -281,7 +306,8 @@ export function assembleEcaHierarchy(part: HierarchyPart, options: AssembleOptio
     for (let b = 0; b < nc; b++) {
       if (a === b || !classReach(a, b)) continue;
       let implied = false;
-      for (let c = 0; c < nc && !implied; c++) if (c !== a && c !== b && classReach(a, c) && classReach(c, b)) implied = true;
+      for (let c = 0; c < nc && !implied; c++)
+        if (c !== a && c !== b && classReach(a, c) && classReach(c, b)) implied = true;
       if (implied) continue;
       let direct = Infinity;
       let viaComposition = Infinity;
@@ -292,19 +318,36 @@ export function assembleEcaHierarchy(part: HierarchyPart, options: AssembleOptio
           viaComposition = Math.min(viaComposition, best[256 * f + g]!);
         }
       }
-      reduction.push(direct < Infinity ? { from: a, to: b, block: direct, composed: false } : { from: a, to: b, block: viaComposition, composed: true });
+      reduction.push(
+        direct < Infinity
+          ? { from: a, to: b, block: direct, composed: false }
+          : { from: a, to: b, block: viaComposition, composed: true },
+      );
     }
   }
   const emulateNothing: number[] = [];
   if (maxBlock >= 2) for (let f = 0; f < 256; f++) if (!emulatesAtTwoOrMore[f]) emulateNothing.push(f);
   options.onProgress?.(1, "done");
-  return { maxBlock, relations, composed, mutualClasses, reduction, symmetryClasses: ecaSymmetryClasses(), emulateNothing, pairsExamined };
+  return {
+    maxBlock,
+    relations,
+    composed,
+    mutualClasses,
+    reduction,
+    symmetryClasses: ecaSymmetryClasses(),
+    emulateNothing,
+    pairsExamined,
+  };
 }
 
 /** The whole hierarchy in one call: one shard, then assembly. */
 export function ecaHierarchy(
   maxBlock: number,
-  options: { verifyComposed?: boolean; onProgress?: (fraction: number, phase: string) => void; shouldStop?: () => boolean } = {},
+  options: {
+    verifyComposed?: boolean;
+    onProgress?: (fraction: number, phase: string) => void;
+    shouldStop?: () => boolean;
+  } = {},
 ): EcaHierarchy {
   const run = runHierarchyShard({
     maxBlock,

@@ -40,7 +40,8 @@ export function solveGf2(columns: readonly Uint8Array[], target: Uint8Array): Gf
   let particular: Uint8Array | null = null;
   if (consistent) {
     particular = new Uint8Array(unknowns);
-    for (let col = 0; col < unknowns; col++) if (pivotOfColumn[col]! >= 0) particular[col] = m[pivotOfColumn[col]!]![unknowns]!;
+    for (let col = 0; col < unknowns; col++)
+      if (pivotOfColumn[col]! >= 0) particular[col] = m[pivotOfColumn[col]!]![unknowns]!;
   }
   const kernel: Uint8Array[] = [];
   for (let free = 0; free < unknowns; free++) {

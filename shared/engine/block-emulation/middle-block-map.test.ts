@@ -23,7 +23,9 @@ describe("middleBlockMap", () => {
           let cells = cellsFromString(packedToString(a, k) + packedToString(b, k) + packedToString(c, k));
           for (let s = 0; s < t; s++) cells = stepWord(rule, cells);
           const start = k - radius * t;
-          expect(packedToString(middleBlockMap(rule, k, t).middle(a, b, c), k)).toBe(cellsToString(cells.subarray(start, start + k)));
+          expect(packedToString(middleBlockMap(rule, k, t).middle(a, b, c), k)).toBe(
+            cellsToString(cells.subarray(start, start + k)),
+          );
         },
       ),
       { seed: 21, numRuns: 150 },

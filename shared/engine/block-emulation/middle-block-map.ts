@@ -107,7 +107,7 @@ export function middleBlockMap(rule: RuleTable, block: number, time: number): Mi
   const layerBytes: number[] = [];
   let width = k + 2 * reach;
   const startBytes = Math.ceil(width / 8);
-  for (let done = 0; done < time; ) {
+  for (let done = 0; done < time;) {
     const s = Math.min(perLayer, time - done);
     layerTables.push(chunkTable(rule, s));
     layerMasks.push((1 << (8 + 2 * r * s)) - 1);

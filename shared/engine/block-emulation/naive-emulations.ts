@@ -84,7 +84,12 @@ export interface NaiveMinBlocks {
 /** The naive hierarchy table: every listed source rule (default all 256), every k, every pair. */
 export function naiveEcaMinBlocks(
   maxBlock: number,
-  options: { sources?: readonly number[]; blocks?: readonly number[]; onProgress?: (fraction: number, phase: string) => void; shouldStop?: () => boolean } = {},
+  options: {
+    sources?: readonly number[];
+    blocks?: readonly number[];
+    onProgress?: (fraction: number, phase: string) => void;
+    shouldStop?: () => boolean;
+  } = {},
 ): NaiveMinBlocks {
   const sources = options.sources ?? Array.from({ length: 256 }, (_, i) => i);
   const blocks = options.blocks ?? Array.from({ length: maxBlock }, (_, i) => i + 1);

@@ -20,12 +20,20 @@ function parseWord(text: string): number[] {
 }
 
 /** Whether `rule` emulates elementary rule `target` with codewords u0, u1 at time `time` (default: their length). */
-export function verifyEmulation(rule: RuleTable, target: number, u0: string, u1: string, time = u0.length): EmulationCheck {
+export function verifyEmulation(
+  rule: RuleTable,
+  target: number,
+  u0: string,
+  u1: string,
+  time = u0.length,
+): EmulationCheck {
   const k = u0.length;
   const r = rule.radius;
-  if (k === 0 || u1.length !== k) throw new EngineError("BAD_WORD", "the two codewords must be non-empty and of equal length");
+  if (k === 0 || u1.length !== k)
+    throw new EngineError("BAD_WORD", "the two codewords must be non-empty and of equal length");
   if (u0 === u1) return { valid: false, failures: [{ triple: "---", expected: "two distinct codewords", found: u0 }] };
-  if (!Number.isInteger(time) || time < 1 || r * time > k) throw new EngineError("BAD_TIME", `time ${time} with radius ${r} does not fit block ${k}`);
+  if (!Number.isInteger(time) || time < 1 || r * time > k)
+    throw new EngineError("BAD_TIME", `time ${time} with radius ${r} does not fit block ${k}`);
   const words = [parseWord(u0), parseWord(u1)];
   const failures: EmulationCheck["failures"] = [];
   for (let a = 0; a < 2; a++) {

@@ -77,7 +77,8 @@ export function networkFromCertificate(cn: CertificateNetwork): BooleanNetwork {
     regulators: cn.nodes.map((node) =>
       Int32Array.from(node.inputs, (name) => {
         const i = index.get(name);
-        if (i === undefined) throw new EngineError("BAD_CERTIFICATE", `node "${node.name}" reads unknown node "${name}"`);
+        if (i === undefined)
+          throw new EngineError("BAD_CERTIFICATE", `node "${node.name}" reads unknown node "${name}"`);
         return i;
       }),
     ),
@@ -89,7 +90,15 @@ export function networkFromCertificate(cn: CertificateNetwork): BooleanNetwork {
 export function blockEmulationCertificate(
   source: BooleanNetwork,
   target: BooleanNetwork,
-  witness: { readonly time: number; readonly blocks: readonly { readonly nodes: readonly number[]; readonly zero: readonly number[]; readonly one: readonly number[] }[]; readonly context: readonly number[] },
+  witness: {
+    readonly time: number;
+    readonly blocks: readonly {
+      readonly nodes: readonly number[];
+      readonly zero: readonly number[];
+      readonly one: readonly number[];
+    }[];
+    readonly context: readonly number[];
+  },
 ): ReductionCertificate {
   const context: Record<string, 0 | 1> = {};
   witness.context.forEach((value, v) => {
@@ -115,7 +124,12 @@ export function blockEmulationCertificate(
 }
 
 /** Certificate for a dynamical embedding given as map[targetState] = sourceState. */
-export function embeddingCertificate(source: BooleanNetwork, target: BooleanNetwork, time: number, map: ArrayLike<number>): ReductionCertificate {
+export function embeddingCertificate(
+  source: BooleanNetwork,
+  target: BooleanNetwork,
+  time: number,
+  map: ArrayLike<number>,
+): ReductionCertificate {
   const m = target.names.length;
   const n = source.names.length;
   const json: Record<string, string> = {};

@@ -20,12 +20,18 @@ import {
 const swap = networkFromFunctions(["a", "b"], [[1], [0]], (_n, x) => x[0]!);
 const keep = networkFromFunctions(["g"], [[0]], (_n, x) => x[0]!);
 const identityBlocks = (net: BooleanNetwork, time: number) =>
-  blockEmulationCertificate(net, net, { time, blocks: net.names.map((_, v) => ({ nodes: [v], zero: [0], one: [1] })), context: net.names.map(() => -1) });
+  blockEmulationCertificate(net, net, {
+    time,
+    blocks: net.names.map((_, v) => ({ nodes: [v], zero: [0], one: [1] })),
+    context: net.names.map(() => -1),
+  });
 
 /** Flip one output bit of one target node's table. */
 function corruptTarget(cert: ReductionCertificate, node: number, row: number): ReductionCertificate {
   const nodes = cert.target.nodes.map((x, i) =>
-    i === node ? { ...x, table: x.table.slice(0, row) + (x.table[row] === "1" ? "0" : "1") + x.table.slice(row + 1) } : x,
+    i === node
+      ? { ...x, table: x.table.slice(0, row) + (x.table[row] === "1" ? "0" : "1") + x.table.slice(row + 1) }
+      : x,
   );
   return { ...cert, target: { nodes } } as ReductionCertificate;
 }
@@ -33,26 +39,52 @@ function corruptTarget(cert: ReductionCertificate, node: number, row: number): R
 describe("verifyCertificate", () => {
   it("verifyCertificate accepts the swap emulating a kept bit at t = 2 and rejects it at t = 1", () => {
     const w = { time: 2, blocks: [{ nodes: [0], zero: [0], one: [1] }], context: [-1, 1] };
-    expect(verifyCertificate(blockEmulationCertificate(swap, keep, w))).toEqual({ valid: true, notion: "block-emulation", time: 2, problems: [], statesChecked: 2 });
+    expect(verifyCertificate(blockEmulationCertificate(swap, keep, w))).toEqual({
+      valid: true,
+      notion: "block-emulation",
+      time: 2,
+      problems: [],
+      statesChecked: 2,
+    });
     const r = verifyCertificate(blockEmulationCertificate(swap, keep, { ...w, time: 1 }));
     expect(r.valid).toBe(false);
     expect(r.problems[0]).toMatch(/target state 0: F\^1\(e\(x\)\) = 10 but e\(G\(x\)\) = 01/);
   });
 
   it("verifyCertificate reports malformed certificates instead of throwing", () => {
-    const good = blockEmulationCertificate(swap, keep, { time: 2, blocks: [{ nodes: [0], zero: [0], one: [1] }], context: [-1, 1] });
+    const good = blockEmulationCertificate(swap, keep, {
+      time: 2,
+      blocks: [{ nodes: [0], zero: [0], one: [1] }],
+      context: [-1, 1],
+    });
     const bad = (patch: Record<string, unknown>) => verifyCertificate({ ...good, ...patch });
     expect(verifyCertificate(null).problems).toEqual(["a certificate must be a JSON object"]);
     expect(bad({ version: 2 }).problems).toEqual(['"version" must be 1']);
     expect(bad({ time: 0 }).valid).toBe(false);
     expect(bad({ notion: "isomorphism" }).problems).toEqual(['unknown notion "isomorphism"']);
-    expect(bad({ witness: { blocks: [{ target: "g", nodes: ["a"], zero: "1", one: "1" }], context: { b: 1 } } }).problems).toEqual(['the two codewords of "g" are equal']);
-    expect(bad({ witness: { blocks: [{ target: "g", nodes: ["a"], zero: "0", one: "1" }], context: {} } }).problems).toEqual(['source node "b" is neither in a block nor in the context']);
-    expect(bad({ witness: { blocks: [{ target: "g", nodes: ["a"], zero: "0", one: "1" }], context: { a: 1, b: 1 } } }).problems).toEqual(['source node "a" is both in a block and in the context']);
-    expect(bad({ witness: { blocks: [{ target: "g", nodes: ["z"], zero: "0", one: "1" }], context: { b: 1 } } }).problems).toEqual(['block of "g" uses unknown source node "z"']);
-    expect(bad({ source: { nodes: [{ name: "a", inputs: ["b"], table: "011" }, { name: "b", inputs: [], table: "0" }] } }).problems).toEqual([
-      'source node "a" table must be a 0/1 string of length 2',
-    ]);
+    expect(
+      bad({ witness: { blocks: [{ target: "g", nodes: ["a"], zero: "1", one: "1" }], context: { b: 1 } } }).problems,
+    ).toEqual(['the two codewords of "g" are equal']);
+    expect(
+      bad({ witness: { blocks: [{ target: "g", nodes: ["a"], zero: "0", one: "1" }], context: {} } }).problems,
+    ).toEqual(['source node "b" is neither in a block nor in the context']);
+    expect(
+      bad({ witness: { blocks: [{ target: "g", nodes: ["a"], zero: "0", one: "1" }], context: { a: 1, b: 1 } } })
+        .problems,
+    ).toEqual(['source node "a" is both in a block and in the context']);
+    expect(
+      bad({ witness: { blocks: [{ target: "g", nodes: ["z"], zero: "0", one: "1" }], context: { b: 1 } } }).problems,
+    ).toEqual(['block of "g" uses unknown source node "z"']);
+    expect(
+      bad({
+        source: {
+          nodes: [
+            { name: "a", inputs: ["b"], table: "011" },
+            { name: "b", inputs: [], table: "0" },
+          ],
+        },
+      }).problems,
+    ).toEqual(['source node "a" table must be a 0/1 string of length 2']);
     const embedding = embeddingCertificate(swap, keep, 2, [1, 1]);
     expect(verifyCertificate(embedding).problems).toEqual(["two target states map to source state 10"]);
   });
@@ -93,8 +125,15 @@ describe("composeCertificates", () => {
         const top = plantEmulation(rng, mid.source, mid.source.names.length * 2 + 2, 2);
         // G emulates G^t2 at time t2 with one-node blocks, so the chain F -> G -> G^t2 has time 1 * t2.
         const G = mid.source;
-        const Gt = networkFromSuccessors(G.names.map((x) => `${x}^${t2}`), powerTable(successorsOfNetwork(G), t2));
-        const second = blockEmulationCertificate(G, Gt, { time: t2, blocks: G.names.map((_, v) => ({ nodes: [v], zero: [0], one: [1] })), context: G.names.map(() => -1) });
+        const Gt = networkFromSuccessors(
+          G.names.map((x) => `${x}^${t2}`),
+          powerTable(successorsOfNetwork(G), t2),
+        );
+        const second = blockEmulationCertificate(G, Gt, {
+          time: t2,
+          blocks: G.names.map((_, v) => ({ nodes: [v], zero: [0], one: [1] })),
+          context: G.names.map(() => -1),
+        });
         expect(verifyCertificate(second).valid).toBe(true);
         const first = blockEmulationCertificate(top.source, G, top.witness);
         const composed = composeCertificates(first, second);
@@ -114,7 +153,10 @@ describe("composeCertificates", () => {
     const mid = plantEmulation(rng, H, 5, 2);
     const top = plantEmulation(rng, mid.source, 12, 2);
     const embed = findDynamicalEmbedding(mid.source, H, 1);
-    const composed = composeCertificates(blockEmulationCertificate(top.source, mid.source, top.witness), embeddingCertificate(mid.source, H, 1, embed.map!));
+    const composed = composeCertificates(
+      blockEmulationCertificate(top.source, mid.source, top.witness),
+      embeddingCertificate(mid.source, H, 1, embed.map!),
+    );
     expect(composed.notion).toBe("dynamical-embedding");
     expect(verifyCertificate(composed).valid).toBe(true);
   });
@@ -125,7 +167,9 @@ describe("composeCertificates", () => {
       node === 0 ? v[0]! ^ v[1]! : node === 3 ? v[0]! & v[1]! : v[0]!,
     );
     // Observing x = a, y = b xor c and z = c closes: x' = y, y' = a xor c = x xor z, z' = z.
-    const G = networkFromFunctions(["x", "y", "z"], [[1], [0, 2], [2]], (node, v) => (node === 1 ? v[0]! ^ v[1]! : v[0]!));
+    const G = networkFromFunctions(["x", "y", "z"], [[1], [0, 2], [2]], (node, v) =>
+      node === 1 ? v[0]! ^ v[1]! : v[0]!,
+    );
     const observables = [
       { inputs: [0], table: Uint8Array.of(0, 1) },
       { inputs: [1, 2], table: Uint8Array.of(0, 1, 1, 0) },

@@ -13,7 +13,10 @@ import {
 } from "./certificate-format";
 
 function sameNetwork(a: CertificateNetwork, b: CertificateNetwork): boolean {
-  return JSON.stringify(a.nodes.map((x) => [x.name, x.inputs, x.table])) === JSON.stringify(b.nodes.map((x) => [x.name, x.inputs, x.table]));
+  return (
+    JSON.stringify(a.nodes.map((x) => [x.name, x.inputs, x.table])) ===
+    JSON.stringify(b.nodes.map((x) => [x.name, x.inputs, x.table]))
+  );
 }
 
 /** The encoding of a block-emulation certificate as a map of state strings (target order -> source order). */
@@ -58,12 +61,22 @@ export function composeCertificates(first: ReductionCertificate, second: Reducti
   if (!sameNetwork(first.target, second.source)) {
     throw new EngineError("NOT_COMPOSABLE", "the first certificate's target is not the second certificate's source");
   }
-  const base = { format: CERTIFICATE_FORMAT, version: CERTIFICATE_VERSION, time: first.time * second.time, source: first.source, target: second.target } as const;
+  const base = {
+    format: CERTIFICATE_FORMAT,
+    version: CERTIFICATE_VERSION,
+    time: first.time * second.time,
+    source: first.source,
+    target: second.target,
+  } as const;
   if (first.notion === "block-emulation" && second.notion === "block-emulation") {
     return { ...base, notion: "block-emulation", witness: composeBlocks(first.witness, second.witness) };
   }
   if (first.notion === "coarse-graining" && second.notion === "coarse-graining") {
-    return { ...base, notion: "coarse-graining", witness: { observables: composeObservables(first, second.witness.observables) } };
+    return {
+      ...base,
+      notion: "coarse-graining",
+      witness: { observables: composeObservables(first, second.witness.observables) },
+    };
   }
   if (first.notion === "coarse-graining" || second.notion === "coarse-graining") {
     throw new EngineError("NOT_COMPOSABLE", "a coarse-graining composes only with another coarse-graining");
@@ -104,7 +117,10 @@ function composeBlocks(w1: BlockEmulationWitnessJson, w2: BlockEmulationWitnessJ
   return { blocks, context };
 }
 
-function composeObservables(first: ReductionCertificate & { notion: "coarse-graining" }, outer: CertificateObservable[]): CertificateObservable[] {
+function composeObservables(
+  first: ReductionCertificate & { notion: "coarse-graining" },
+  outer: CertificateObservable[],
+): CertificateObservable[] {
   const sourceOrder = new Map(first.source.nodes.map((node, i) => [node.name, i] as const));
   const inner = new Map(first.witness.observables.map((o) => [o.target, o] as const));
   return outer.map((o) => {
@@ -113,8 +129,11 @@ function composeObservables(first: ReductionCertificate & { notion: "coarse-grai
       if (!p) throw new EngineError("BAD_CERTIFICATE", `intermediate node "${g}" has no observable`);
       return p;
     });
-    const inputs = [...new Set(used.flatMap((p) => p.inputs))].sort((a, b) => sourceOrder.get(a)! - sourceOrder.get(b)!);
-    if (inputs.length > 20) throw new EngineError("TOO_LARGE", `the composed observable "${o.target}" reads more than 20 nodes`);
+    const inputs = [...new Set(used.flatMap((p) => p.inputs))].sort(
+      (a, b) => sourceOrder.get(a)! - sourceOrder.get(b)!,
+    );
+    if (inputs.length > 20)
+      throw new EngineError("TOO_LARGE", `the composed observable "${o.target}" reads more than 20 nodes`);
     let table = "";
     for (let row = 0; row < 2 ** inputs.length; row++) {
       const value = (name: string) => Math.floor(row / 2 ** inputs.indexOf(name)) % 2;

@@ -39,7 +39,8 @@ function stringList(v: unknown, what: string): string[] {
 }
 
 function bits(v: unknown, length: number, what: string): string {
-  if (typeof v !== "string" || v.length !== length || !/^[01]*$/.test(v)) fail(`${what} must be a 0/1 string of length ${length}`);
+  if (typeof v !== "string" || v.length !== length || !/^[01]*$/.test(v))
+    fail(`${what} must be a 0/1 string of length ${length}`);
   return v;
 }
 
@@ -121,7 +122,8 @@ export function verifyCertificate(input: unknown): VerificationReport {
     if (input.version !== 1) fail('"version" must be 1');
     if (typeof input.notion !== "string") fail('"notion" is missing');
     notion = input.notion;
-    if (typeof input.time !== "number" || !Number.isInteger(input.time) || input.time < 1) fail('"time" must be a whole number of at least 1');
+    if (typeof input.time !== "number" || !Number.isInteger(input.time) || input.time < 1)
+      fail('"time" must be a whole number of at least 1');
     time = input.time;
     const F = readNet(input.source, "source");
     const G = readNet(input.target, "target");
@@ -178,7 +180,9 @@ function checkBlocks(F: Net, G: Net, w: Record<string, unknown>, t: number, coun
     if (value !== 0 && value !== 1) fail(`context value of "${name}" must be 0 or 1`);
     base[v] = value;
   }
-  for (let v = 0; v < n; v++) if (owner[v] === null && !(F.names[v]! in w.context)) fail(`source node "${F.names[v]}" is neither in a block nor in the context`);
+  for (let v = 0; v < n; v++)
+    if (owner[v] === null && !(F.names[v]! in w.context))
+      fail(`source node "${F.names[v]}" is neither in a block nor in the context`);
   const encode = (x: Uint8Array) => {
     const s = Uint8Array.from(base);
     blockOf.forEach((b, j) => b!.nodes.forEach((v, i) => (s[v] = (x[j] ? b!.one : b!.zero)[i] === "1" ? 1 : 0)));
@@ -220,7 +224,8 @@ function checkCoarseGraining(F: Net, G: Net, w: Record<string, unknown>, t: numb
   if (!Array.isArray(w.observables)) fail('a coarse-graining witness needs "observables"');
   const n = F.names.length;
   const m = G.names.length;
-  if (n > MAX_VERIFIED_SOURCE_NODES) fail(`coarse-graining certificates are checked for sources of at most ${MAX_VERIFIED_SOURCE_NODES} nodes`);
+  if (n > MAX_VERIFIED_SOURCE_NODES)
+    fail(`coarse-graining certificates are checked for sources of at most ${MAX_VERIFIED_SOURCE_NODES} nodes`);
   const obs = new Array<{ inputs: number[]; table: string } | null>(m).fill(null);
   for (const raw of w.observables as unknown[]) {
     if (!isRecord(raw) || typeof raw.target !== "string") fail("each observable names its target node");

@@ -25,7 +25,8 @@ function* setPartitions(N: number): Generator<number[]> {
 }
 
 const sameGroups = (a: ArrayLike<unknown>, b: ArrayLike<unknown>) => {
-  for (let x = 0; x < a.length; x++) for (let y = 0; y < a.length; y++) if ((a[x] === a[y]) !== (b[x] === b[y])) return false;
+  for (let x = 0; x < a.length; x++)
+    for (let y = 0; y < a.length; y++) if ((a[x] === a[y]) !== (b[x] === b[y])) return false;
   return true;
 };
 
@@ -42,54 +43,66 @@ function withNoise(rng: () => number, G: BooleanNetwork, extra: number): Boolean
 describe("coarse-graining", () => {
   it("coarsestCompatiblePartition is the coarsest refinement compatible with the map (brute force over all partitions)", () => {
     fc.assert(
-      fc.property(fc.integer(), fc.integer({ min: 1, max: 7 }), fc.integer({ min: 1, max: 3 }), (seed, N, labelCount) => {
-        const rng = seedrandom(String(seed));
-        const succ = Array.from({ length: N }, () => Math.floor(rng() * N));
-        const labels = Array.from({ length: N }, () => Math.floor(rng() * labelCount));
-        const ours = coarsestCompatiblePartition(succ, labels);
-        let best: number[] | null = null;
-        for (const p of setPartitions(N)) {
-          let ok = true;
-          for (let x = 0; x < N && ok; x++) {
-            for (let y = 0; y < N && ok; y++) {
-              if (p[x] !== p[y]) continue;
-              if (labels[x] !== labels[y] || p[succ[x]!] !== p[succ[y]!]) ok = false;
+      fc.property(
+        fc.integer(),
+        fc.integer({ min: 1, max: 7 }),
+        fc.integer({ min: 1, max: 3 }),
+        (seed, N, labelCount) => {
+          const rng = seedrandom(String(seed));
+          const succ = Array.from({ length: N }, () => Math.floor(rng() * N));
+          const labels = Array.from({ length: N }, () => Math.floor(rng() * labelCount));
+          const ours = coarsestCompatiblePartition(succ, labels);
+          let best: number[] | null = null;
+          for (const p of setPartitions(N)) {
+            let ok = true;
+            for (let x = 0; x < N && ok; x++) {
+              for (let y = 0; y < N && ok; y++) {
+                if (p[x] !== p[y]) continue;
+                if (labels[x] !== labels[y] || p[succ[x]!] !== p[succ[y]!]) ok = false;
+              }
             }
+            if (!ok) continue;
+            // Every compatible refinement of the labels refines the coarsest one.
+            for (let x = 0; x < N; x++)
+              for (let y = 0; y < N; y++) if (p[x] === p[y]) expect(ours.groupOf[x]).toBe(ours.groupOf[y]);
+            if (!best || Math.max(...p) < Math.max(...best)) best = p;
           }
-          if (!ok) continue;
-          // Every compatible refinement of the labels refines the coarsest one.
-          for (let x = 0; x < N; x++) for (let y = 0; y < N; y++) if (p[x] === p[y]) expect(ours.groupOf[x]).toBe(ours.groupOf[y]);
-          if (!best || Math.max(...p) < Math.max(...best)) best = p;
-        }
-        expect(ours.groups).toBe(Math.max(...best!) + 1);
-        expect(sameGroups(ours.groupOf, best!)).toBe(true);
-      }),
+          expect(ours.groups).toBe(Math.max(...best!) + 1);
+          expect(sameGroups(ours.groupOf, best!)).toBe(true);
+        },
+      ),
       { seed: 1001, numRuns: 150 },
     );
   });
 
   it("coarseGrain groups two states together exactly when their observable sequences agree along the orbit", () => {
     fc.assert(
-      fc.property(fc.integer(), fc.integer({ min: 2, max: 9 }), fc.integer({ min: 1, max: 3 }), fc.integer({ min: 1, max: 3 }), (seed, n, k, t) => {
-        const F = randomNetwork(seedrandom(String(seed)), n, 3);
-        const obs = [...Array(Math.min(k, n)).keys()].map((v) => nodeObservable(F, v));
-        const r = coarseGrain(F, obs, t);
-        const Ft = transitionTable(F, t);
-        const labels = observeAll(n, obs);
-        const word = (x: number) => {
-          const out: number[] = [];
-          for (let i = 0, s = x; i <= Ft.length; i++, s = Ft[s]!) out.push(labels[s]!);
-          return out.join(",");
-        };
-        const words = Array.from({ length: Ft.length }, (_, x) => word(x));
-        expect(sameGroups(r.groupOf, words)).toBe(true);
-        for (let x = 0; x < Ft.length; x++) {
-          expect(r.groupSucc[r.groupOf[x]!]).toBe(r.groupOf[Ft[x]!]);
-          expect(r.groupLabel[r.groupOf[x]!]).toBe(labels[x]);
-        }
-        const q = successorsOfNetwork(r.quotient);
-        for (let g = 0; g < r.groups; g++) expect(q[g]).toBe(r.groupSucc[g]);
-      }),
+      fc.property(
+        fc.integer(),
+        fc.integer({ min: 2, max: 9 }),
+        fc.integer({ min: 1, max: 3 }),
+        fc.integer({ min: 1, max: 3 }),
+        (seed, n, k, t) => {
+          const F = randomNetwork(seedrandom(String(seed)), n, 3);
+          const obs = [...Array(Math.min(k, n)).keys()].map((v) => nodeObservable(F, v));
+          const r = coarseGrain(F, obs, t);
+          const Ft = transitionTable(F, t);
+          const labels = observeAll(n, obs);
+          const word = (x: number) => {
+            const out: number[] = [];
+            for (let i = 0, s = x; i <= Ft.length; i++, s = Ft[s]!) out.push(labels[s]!);
+            return out.join(",");
+          };
+          const words = Array.from({ length: Ft.length }, (_, x) => word(x));
+          expect(sameGroups(r.groupOf, words)).toBe(true);
+          for (let x = 0; x < Ft.length; x++) {
+            expect(r.groupSucc[r.groupOf[x]!]).toBe(r.groupOf[Ft[x]!]);
+            expect(r.groupLabel[r.groupOf[x]!]).toBe(labels[x]);
+          }
+          const q = successorsOfNetwork(r.quotient);
+          for (let g = 0; g < r.groups; g++) expect(q[g]).toBe(r.groupSucc[g]);
+        },
+      ),
       { seed: 1002, numRuns: 80 },
     );
   });
@@ -129,7 +142,11 @@ describe("coarse-graining", () => {
 
   it("coarseGrain of a 2-node swap observed on one node needs both nodes, and the quotient is a 2-node network", () => {
     // a' = b, b' = a: observing a alone does not close (a's next value is b), so 4 groups are needed.
-    const F = checkNetwork({ names: ["a", "b"], regulators: [Int32Array.of(1), Int32Array.of(0)], tables: [Uint8Array.of(0, 1), Uint8Array.of(0, 1)] });
+    const F = checkNetwork({
+      names: ["a", "b"],
+      regulators: [Int32Array.of(1), Int32Array.of(0)],
+      tables: [Uint8Array.of(0, 1), Uint8Array.of(0, 1)],
+    });
     const r = coarseGrain(F, [nodeObservable(F, 0)], 1);
     expect(r.closes).toBe(false);
     expect(r.groups).toBe(4);
@@ -161,7 +178,11 @@ describe("coarse-graining", () => {
       for (const N of [3, 4]) {
         const F = cellularAutomaton({ cells: N * c.k, rule: c.rule });
         const G = cellularAutomaton({ cells: N, rule: c.target });
-        const obs = G.names.map((name, j) => ({ name, inputs: Array.from({ length: c.k }, (_, i) => j * c.k + i), table: Uint8Array.from(c.table) }));
+        const obs = G.names.map((name, j) => ({
+          name,
+          inputs: Array.from({ length: c.k }, (_, i) => j * c.k + i),
+          table: Uint8Array.from(c.table),
+        }));
         const r = coarseGrain(F, obs, c.time);
         expect(r.closes).toBe(true);
         expect(Array.from(successorsOfNetwork(r.target!))).toEqual(Array.from(successorsOfNetwork(G)));

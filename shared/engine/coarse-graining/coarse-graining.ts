@@ -33,11 +33,17 @@ export interface CoarseGrainingControl {
   readonly shouldStop?: () => boolean;
 }
 
-export function coarseGrain(source: BooleanNetwork, observables: readonly Observable[], time: number, control: CoarseGrainingControl = {}): CoarseGrainingResult {
+export function coarseGrain(
+  source: BooleanNetwork,
+  observables: readonly Observable[],
+  time: number,
+  control: CoarseGrainingControl = {},
+): CoarseGrainingResult {
   const n = source.names.length;
   const m = observables.length;
   if (m < 1) throw new EngineError("BAD_OBSERVABLE", "at least one observable is needed");
-  if (n > MAX_TABULATED_NODES) throw new EngineError("TOO_LARGE", `coarse-graining tabulates at most ${MAX_TABULATED_NODES} source nodes`);
+  if (n > MAX_TABULATED_NODES)
+    throw new EngineError("TOO_LARGE", `coarse-graining tabulates at most ${MAX_TABULATED_NODES} source nodes`);
   control.onProgress?.(0, "tabulating the source map");
   const succ = transitionTable(source, time);
   const labels = observeAll(n, observables);
@@ -71,14 +77,23 @@ export function coarseGrain(source: BooleanNetwork, observables: readonly Observ
   const bits = Math.max(1, Math.ceil(Math.log2(groups)));
   const codes = new Uint32Array(2 ** bits);
   for (let c = 0; c < codes.length; c++) codes[c] = c < groups ? groupSucc[c]! : c;
-  const quotient = networkFromSuccessors(Array.from({ length: bits }, (_, i) => `q${i}`), codes);
+  const quotient = networkFromSuccessors(
+    Array.from({ length: bits }, (_, i) => `q${i}`),
+    codes,
+  );
   control.onProgress?.(1, "refining the partition");
   return { time, closes, target, unobservedLabels, groups, groupOf, groupSucc, groupLabel, quotient };
 }
 
 /** Does F coarse-grain onto the given G through these observables at time t? (G has one node per observable.) */
-export function coarseGrainsOnto(source: BooleanNetwork, target: BooleanNetwork, observables: readonly Observable[], time: number): boolean {
-  if (target.names.length !== observables.length) throw new EngineError("BAD_OBSERVABLE", "the target needs one node per observable");
+export function coarseGrainsOnto(
+  source: BooleanNetwork,
+  target: BooleanNetwork,
+  observables: readonly Observable[],
+  time: number,
+): boolean {
+  if (target.names.length !== observables.length)
+    throw new EngineError("BAD_OBSERVABLE", "the target needs one node per observable");
   const succ = transitionTable(source, time);
   const labels = observeAll(source.names.length, observables);
   const gSucc = successorsOfNetwork(target);

@@ -32,36 +32,46 @@ const randomMap = (rng: () => number, size: number) => Array.from({ length: size
 describe("dynamical embedding", () => {
   it("embedFunctionalGraph agrees with brute force over all one-to-one maps on tiny maps, and its maps are embeddings", () => {
     fc.assert(
-      fc.property(fc.integer(), fc.integer({ min: 1, max: 7 }), fc.integer({ min: 1, max: 4 }), (seed, fSize, gSize) => {
-        const rng = seedrandom(String(seed));
-        const F = randomMap(rng, fSize);
-        const G = randomMap(rng, gSize);
-        const map = embedFunctionalGraph(F, G);
-        expect(map !== null).toBe(bruteForceEmbeds(F, G));
-        if (map) {
-          expect(new Set(map).size).toBe(G.length);
-          for (let x = 0; x < G.length; x++) expect(F[map[x]!]).toBe(map[G[x]!]);
-        }
-      }),
+      fc.property(
+        fc.integer(),
+        fc.integer({ min: 1, max: 7 }),
+        fc.integer({ min: 1, max: 4 }),
+        (seed, fSize, gSize) => {
+          const rng = seedrandom(String(seed));
+          const F = randomMap(rng, fSize);
+          const G = randomMap(rng, gSize);
+          const map = embedFunctionalGraph(F, G);
+          expect(map !== null).toBe(bruteForceEmbeds(F, G));
+          if (map) {
+            expect(new Set(map).size).toBe(G.length);
+            for (let x = 0; x < G.length; x++) expect(F[map[x]!]).toBe(map[G[x]!]);
+          }
+        },
+      ),
       { seed: 901, numRuns: 400 },
     );
   });
 
   it("embedFunctionalGraph finds embeddings hidden in larger maps (the target's graph plus random extra states)", () => {
     fc.assert(
-      fc.property(fc.integer(), fc.integer({ min: 1, max: 16 }), fc.integer({ min: 0, max: 40 }), (seed, gSize, extra) => {
-        const rng = seedrandom(String(seed));
-        const G = randomMap(rng, gSize);
-        // Place G's states at random positions among the source's states; extra states map anywhere.
-        const total = gSize + extra;
-        const pos = [...Array(total).keys()].sort(() => rng() - 0.5);
-        const F = new Array<number>(total);
-        for (let s = 0; s < total; s++) F[s] = Math.floor(rng() * total);
-        for (let x = 0; x < gSize; x++) F[pos[x]!] = pos[G[x]!]!;
-        const map = embedFunctionalGraph(F, G);
-        expect(map).not.toBeNull();
-        for (let x = 0; x < gSize; x++) expect(F[map![x]!]).toBe(map![G[x]!]);
-      }),
+      fc.property(
+        fc.integer(),
+        fc.integer({ min: 1, max: 16 }),
+        fc.integer({ min: 0, max: 40 }),
+        (seed, gSize, extra) => {
+          const rng = seedrandom(String(seed));
+          const G = randomMap(rng, gSize);
+          // Place G's states at random positions among the source's states; extra states map anywhere.
+          const total = gSize + extra;
+          const pos = [...Array(total).keys()].sort(() => rng() - 0.5);
+          const F = new Array<number>(total);
+          for (let s = 0; s < total; s++) F[s] = Math.floor(rng() * total);
+          for (let x = 0; x < gSize; x++) F[pos[x]!] = pos[G[x]!]!;
+          const map = embedFunctionalGraph(F, G);
+          expect(map).not.toBeNull();
+          for (let x = 0; x < gSize; x++) expect(F[map![x]!]).toBe(map![G[x]!]);
+        },
+      ),
       { seed: 902, numRuns: 200 },
     );
   });

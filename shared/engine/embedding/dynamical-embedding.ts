@@ -20,7 +20,11 @@ export interface EmbeddingControl {
 }
 
 /** Decide whether the map `targetSucc` embeds into the map `sourceSucc`; return the embedding or null. */
-export function embedFunctionalGraph(sourceSucc: ArrayLike<number>, targetSucc: ArrayLike<number>, control: EmbeddingControl = {}): Uint32Array | null {
+export function embedFunctionalGraph(
+  sourceSucc: ArrayLike<number>,
+  targetSucc: ArrayLike<number>,
+  control: EmbeddingControl = {},
+): Uint32Array | null {
   if (control.shouldStop?.()) throw new CancelledError();
   const registry = new ShapeRegistry();
   const F = functionalGraph(sourceSucc, registry);
@@ -71,7 +75,8 @@ export function embedFunctionalGraph(sourceSucc: ArrayLike<number>, targetSucc: 
   }
   const gCycles = G.cycles;
   const slots: { cls: CycleClass; index: number }[] = [];
-  for (const cls of classes.values()) for (let k = 0; k < Math.min(cls.cycles.length, gCycles.length); k++) slots.push({ cls, index: k });
+  for (const cls of classes.values())
+    for (let k = 0; k < Math.min(cls.cycles.length, gCycles.length); k++) slots.push({ cls, index: k });
   const rotationFor = (gi: number, cls: CycleClass): number => {
     const gc = gCycles[gi]!;
     if (gc.length !== cls.seq.length) return -1;
@@ -93,7 +98,10 @@ export function embedFunctionalGraph(sourceSucc: ArrayLike<number>, targetSucc: 
     const gKids = G.children.subarray(G.childStart[g]!, G.childStart[g + 1]!);
     if (gKids.length === 0) return;
     const fKids = F.children.subarray(F.childStart[f]!, F.childStart[f + 1]!);
-    const chosen = matchShapes(Array.from(gKids, (x) => G.shape[x]!), Array.from(fKids, (x) => F.shape[x]!));
+    const chosen = matchShapes(
+      Array.from(gKids, (x) => G.shape[x]!),
+      Array.from(fKids, (x) => F.shape[x]!),
+    );
     if (!chosen) throw new EngineError("INTERNAL", "an in-tree that embeds by shape failed to embed");
     const pools = new Map<number, number[]>();
     for (const x of fKids) {
@@ -169,7 +177,12 @@ function bipartiteMatch(left: number, right: number, edge: (i: number, j: number
 }
 
 /** Decide whether F at time scale `time` dynamically embeds G (F up to 22 nodes, G up to 12). */
-export function findDynamicalEmbedding(source: BooleanNetwork, target: BooleanNetwork, time: number, control: EmbeddingControl = {}): EmbeddingResult {
+export function findDynamicalEmbedding(
+  source: BooleanNetwork,
+  target: BooleanNetwork,
+  time: number,
+  control: EmbeddingControl = {},
+): EmbeddingResult {
   if (target.names.length > 12) throw new EngineError("TOO_LARGE", "embedding targets have at most 12 nodes");
   control.onProgress?.(0, "tabulating the source map");
   const map = embedFunctionalGraph(transitionTable(source, time), successorsOfNetwork(target), control);
@@ -177,7 +190,12 @@ export function findDynamicalEmbedding(source: BooleanNetwork, target: BooleanNe
 }
 
 /** Smallest time scale in 1..maxTime at which F embeds G, or found=false at maxTime. */
-export function searchDynamicalEmbedding(source: BooleanNetwork, target: BooleanNetwork, maxTime: number, control: EmbeddingControl = {}): EmbeddingResult {
+export function searchDynamicalEmbedding(
+  source: BooleanNetwork,
+  target: BooleanNetwork,
+  maxTime: number,
+  control: EmbeddingControl = {},
+): EmbeddingResult {
   let last: EmbeddingResult = { found: false, time: maxTime, map: null };
   for (let t = 1; t <= maxTime; t++) {
     last = findDynamicalEmbedding(source, target, t, {

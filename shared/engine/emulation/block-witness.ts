@@ -35,11 +35,13 @@ export function encodeTargetState(witness: BlockEmulationWitness, x: number): Ui
 /** Structural sanity: disjoint non-empty blocks, distinct codewords, context exactly outside the blocks. */
 export function checkWitnessShape(n: number, m: number, w: BlockEmulationWitness): void {
   if (w.blocks.length !== m) throw new EngineError("BAD_WITNESS", `expected ${m} blocks, got ${w.blocks.length}`);
-  if (w.context.length !== n) throw new EngineError("BAD_WITNESS", `expected a context entry for each of ${n} source nodes`);
+  if (w.context.length !== n)
+    throw new EngineError("BAD_WITNESS", `expected a context entry for each of ${n} source nodes`);
   const owner = new Int32Array(n).fill(-1);
   w.blocks.forEach((b, j) => {
     if (b.nodes.length === 0) throw new EngineError("BAD_WITNESS", `block ${j} is empty`);
-    if (b.zero.length !== b.nodes.length || b.one.length !== b.nodes.length) throw new EngineError("BAD_WITNESS", `block ${j} has codewords of the wrong length`);
+    if (b.zero.length !== b.nodes.length || b.one.length !== b.nodes.length)
+      throw new EngineError("BAD_WITNESS", `block ${j} has codewords of the wrong length`);
     if (b.zero.every((z, i) => z === b.one[i])) throw new EngineError("BAD_WITNESS", `block ${j} has equal codewords`);
     for (const v of b.nodes) {
       if (owner[v]! !== -1) throw new EngineError("BAD_WITNESS", `source node ${v} lies in two blocks`);
@@ -48,7 +50,8 @@ export function checkWitnessShape(n: number, m: number, w: BlockEmulationWitness
   });
   for (let v = 0; v < n; v++) {
     const inBlock = owner[v]! !== -1;
-    if (inBlock !== (w.context[v]! === -1)) throw new EngineError("BAD_WITNESS", `source node ${v} must be either in a block or in the context`);
+    if (inBlock !== (w.context[v]! === -1))
+      throw new EngineError("BAD_WITNESS", `source node ${v} must be either in a block or in the context`);
   }
 }
 

@@ -7,7 +7,8 @@ import { EngineError } from "../errors";
 export function permutations(m: number): number[][] {
   if (m === 0) return [[]];
   const out: number[][] = [];
-  for (const p of permutations(m - 1)) for (let i = 0; i <= p.length; i++) out.push([...p.slice(0, i), m - 1, ...p.slice(i)]);
+  for (const p of permutations(m - 1))
+    for (let i = 0; i <= p.length; i++) out.push([...p.slice(0, i), m - 1, ...p.slice(i)]);
   return out;
 }
 

@@ -26,17 +26,39 @@ describe("cycle prefilter", () => {
   });
 
   it("cyclesFit needs at least as many source cycles of every target length", () => {
-    expect(cyclesFit(new Map([[1, 2], [3, 1]]), new Map([[1, 2]]))).toBe(true);
-    expect(cyclesFit(new Map([[1, 2], [3, 1]]), new Map([[3, 2]]))).toBe(false);
+    expect(
+      cyclesFit(
+        new Map([
+          [1, 2],
+          [3, 1],
+        ]),
+        new Map([[1, 2]]),
+      ),
+    ).toBe(true);
+    expect(
+      cyclesFit(
+        new Map([
+          [1, 2],
+          [3, 1],
+        ]),
+        new Map([[3, 2]]),
+      ),
+    ).toBe(false);
     expect(cyclesFit(new Map([[1, 2]]), new Map([[2, 1]]))).toBe(false);
   });
 
   it("discoverEmulatedTargets reports progress and stops with CANCELLED when asked", () => {
     const F = randomNetwork(seedrandom("1302"), 10, 2);
     const fractions: number[] = [];
-    discoverEmulatedTargets(F, { maxTargetNodes: 1, maxTime: 1, maxBlock: 1 }, { onProgress: (f) => fractions.push(f) });
+    discoverEmulatedTargets(
+      F,
+      { maxTargetNodes: 1, maxTime: 1, maxBlock: 1 },
+      { onProgress: (f) => fractions.push(f) },
+    );
     expect(fractions.at(-1)).toBe(1);
     expect(fractions.every((f, i) => i === 0 || f >= fractions[i - 1]!)).toBe(true);
-    expect(() => discoverEmulatedTargets(F, { maxTargetNodes: 1, maxTime: 1, maxBlock: 1 }, { shouldStop: () => true })).toThrow(/cancelled/);
+    expect(() =>
+      discoverEmulatedTargets(F, { maxTargetNodes: 1, maxTime: 1, maxBlock: 1 }, { shouldStop: () => true }),
+    ).toThrow(/cancelled/);
   });
 });

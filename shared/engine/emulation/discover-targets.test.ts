@@ -32,7 +32,8 @@ function bruteForceKeys(F: BooleanNetwork, M: number, maxTime: number, maxBlock:
           const ctx = [...Array(n).keys()].filter((u) => owner[u] === -1);
           const words: [number, number][][] = blocks.map((b) => {
             const out: [number, number][] = [];
-            for (let z = 0; z < 2 ** b.length; z++) for (let o = 0; o < 2 ** b.length; o++) if (z !== o) out.push([z, o]);
+            for (let z = 0; z < 2 ** b.length; z++)
+              for (let o = 0; o < 2 ** b.length; o++) if (z !== o) out.push([z, o]);
             return out;
           });
           const pickWords = (j: number, chosen: [number, number][]) => {
@@ -111,7 +112,9 @@ describe("discoverEmulatedTargets", () => {
         const F = randomNetwork(seedrandom(String(seed)), 6, 2);
         const bounds = { maxTargetNodes: 3, maxTime: 2, maxBlock: 2 };
         const whole = discoverEmulatedTargets(F, bounds);
-        const merged = mergeDiscoverShards([...Array(count).keys()].map((index) => discoverShard(F, bounds, { shard: { index, count } })).reverse());
+        const merged = mergeDiscoverShards(
+          [...Array(count).keys()].map((index) => discoverShard(F, bounds, { shard: { index, count } })).reverse(),
+        );
         expect(merged).toEqual(whole);
       }),
       { seed: 803, numRuns: 15 },
@@ -152,9 +155,16 @@ describe("discoverEmulatedTargets", () => {
       fc.property(fc.integer(), fc.integer({ min: 2, max: 7 }), (seed, n) => {
         const rng = seedrandom(String(seed));
         const F = randomNetwork(rng, n, 2);
-        const F2 = reorderNodes(F, [...Array(n).keys()].sort(() => rng() - 0.5), "r");
+        const F2 = reorderNodes(
+          F,
+          [...Array(n).keys()].sort(() => rng() - 0.5),
+          "r",
+        );
         const bounds = { maxTargetNodes: 3, maxTime: 2, maxBlock: 2 };
-        const keys = (net: BooleanNetwork) => discoverEmulatedTargets(net, bounds).targets.map((d) => `${d.key}@${d.times.join(",")}x${d.encodings}`).sort();
+        const keys = (net: BooleanNetwork) =>
+          discoverEmulatedTargets(net, bounds)
+            .targets.map((d) => `${d.key}@${d.times.join(",")}x${d.encodings}`)
+            .sort();
         expect(keys(F2)).toEqual(keys(F));
       }),
       { seed: 805, numRuns: 30 },
@@ -170,7 +180,8 @@ describe("discoverEmulatedTargets", () => {
         const bySat = discoverEmulatedTargets(F, { ...bounds, method: "sat" });
         const keys = (r: typeof bySat) => r.targets.map((d) => `${d.key}@${d.times.join(",")}`).sort();
         expect(keys(bySat)).toEqual(keys(byEnumeration));
-        for (const d of bySat.targets) expect(verifyCertificate(blockEmulationCertificate(F, d.target, d.witness)).valid).toBe(true);
+        for (const d of bySat.targets)
+          expect(verifyCertificate(blockEmulationCertificate(F, d.target, d.witness)).valid).toBe(true);
       }),
       { seed: 806, numRuns: 25 },
     );
@@ -181,7 +192,9 @@ describe("discoverEmulatedTargets", () => {
     const bounds = { maxTargetNodes: 3, maxTime: 2, maxBlock: 2, method: "sat" as const };
     const whole = discoverEmulatedTargets(F, bounds);
     for (const count of [2, 3, 6]) {
-      const merged = mergeDiscoverShards([...Array(count).keys()].map((index) => discoverShard(F, bounds, { shard: { index, count } })));
+      const merged = mergeDiscoverShards(
+        [...Array(count).keys()].map((index) => discoverShard(F, bounds, { shard: { index, count } })),
+      );
       expect(merged).toEqual(whole);
     }
   });

@@ -59,13 +59,22 @@ export interface DiscoverResult {
 
 /** Units: (t, base state) by enumeration; (t, target size) by SAT. */
 export function discoverUnitCount(source: BooleanNetwork, bounds: DiscoverBounds): number {
-  return discoverMethod(source, bounds) === "sat" ? bounds.maxTime * bounds.maxTargetNodes : enumerationUnitCount(source, bounds.maxTime);
+  return discoverMethod(source, bounds) === "sat"
+    ? bounds.maxTime * bounds.maxTargetNodes
+    : enumerationUnitCount(source, bounds.maxTime);
 }
 
 /** Run the discover enumeration over one shard (or all units) and return its findings in unit order. */
-export function discoverShard(source: BooleanNetwork, bounds: DiscoverBounds, control: SearchControl = {}): DiscoverShardResult {
+export function discoverShard(
+  source: BooleanNetwork,
+  bounds: DiscoverBounds,
+  control: SearchControl = {},
+): DiscoverShardResult {
   if (discoverMethod(source, bounds) === "sat") return discoverShardBySat(source, bounds, control);
-  const found = new Map<string, { succ: number[]; witness: BlockEmulationWitness; times: number[]; encodings: number; firstUnit: number }>();
+  const found = new Map<
+    string,
+    { succ: number[]; witness: BlockEmulationWitness; times: number[]; encodings: number; firstUnit: number }
+  >();
   const run = enumerateEncodings(source, bounds, control, (e) => {
     const m = e.masks.length;
     const key = canonicalTargetKey(e.succ, m);
@@ -82,19 +91,29 @@ export function discoverShard(source: BooleanNetwork, bounds: DiscoverBounds, co
 }
 
 /** Discover by satisfiability: per unit (t, m), ask for targets one by one, excluding each one's relabellings. */
-function discoverShardBySat(source: BooleanNetwork, bounds: DiscoverBounds, control: SearchControl): DiscoverShardResult {
+function discoverShardBySat(
+  source: BooleanNetwork,
+  bounds: DiscoverBounds,
+  control: SearchControl,
+): DiscoverShardResult {
   const n = source.names.length;
   const M = bounds.maxTargetNodes;
   if (!(M >= 1 && M <= 4)) throw new EngineError("BAD_BOUNDS", "discover looks for targets of 1 to 4 nodes");
-  if (!(bounds.maxTime >= 1) || !(bounds.maxBlock >= 1)) throw new EngineError("BAD_BOUNDS", "time scale and block size bounds must be at least 1");
+  if (!(bounds.maxTime >= 1) || !(bounds.maxBlock >= 1))
+    throw new EngineError("BAD_BOUNDS", "time scale and block size bounds must be at least 1");
   const allowed = new Uint8Array(n);
   for (const v of bounds.allowedNodes ?? [...Array(n).keys()]) {
     if (!(v >= 0 && v < n)) throw new EngineError("BAD_BOUNDS", `allowed node ${v} is not a source node`);
     allowed[v] = 1;
   }
   const totalUnits = bounds.maxTime * M;
-  const range = control.range ?? (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
-  const found = new Map<string, { succ: number[]; witness: BlockEmulationWitness; times: number[]; encodings: number; firstUnit: number }>();
+  const range =
+    control.range ??
+    (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
+  const found = new Map<
+    string,
+    { succ: number[]; witness: BlockEmulationWitness; times: number[]; encodings: number; firstUnit: number }
+  >();
   let queries = 0;
   const span = Math.max(1, range.end - range.start);
   for (let unit = Math.max(range.start, control.resumeFrom ?? range.start); unit < range.end; unit++) {
@@ -189,6 +208,10 @@ export function mergeDiscoverShards(shards: readonly DiscoverShardResult[]): Dis
 }
 
 /** Discover mode over all units in one run. */
-export function discoverEmulatedTargets(source: BooleanNetwork, bounds: DiscoverBounds, control: SearchControl = {}): DiscoverResult {
+export function discoverEmulatedTargets(
+  source: BooleanNetwork,
+  bounds: DiscoverBounds,
+  control: SearchControl = {},
+): DiscoverResult {
   return mergeDiscoverShards([discoverShard(source, bounds, control)]);
 }

@@ -6,7 +6,13 @@ import { ecaRule } from "../automata";
 import { blockEmulations } from "../block-emulation";
 import { cellularAutomaton } from "../generators";
 import { blockEmulationCertificate, verifyCertificate } from "../certificates";
-import { encodeTargetState, iterateValues, witnessHolds, successorsOfNetwork, type BlockEmulationWitness } from "./index";
+import {
+  encodeTargetState,
+  iterateValues,
+  witnessHolds,
+  successorsOfNetwork,
+  type BlockEmulationWitness,
+} from "./index";
 
 const k = 2;
 const words = [0, 1, 2, 3].map((w) => [w & 1, (w >> 1) & 1]); // cell i of the block = bit i (leftmost first)
@@ -15,7 +21,11 @@ const words = [0, 1, 2, 3].map((w) => [w & 1, (w >> 1) & 1]); // cell i of the b
 function ringWitness(N: number, time: number, u0: number[], u1: number[]): BlockEmulationWitness {
   return {
     time,
-    blocks: Array.from({ length: N }, (_, j) => ({ nodes: Array.from({ length: k }, (_, i) => j * k + i), zero: u0, one: u1 })),
+    blocks: Array.from({ length: N }, (_, j) => ({
+      nodes: Array.from({ length: k }, (_, i) => j * k + i),
+      zero: u0,
+      one: u1,
+    })),
     context: new Array<number>(N * k).fill(-1),
   };
 }
@@ -52,19 +62,25 @@ describe("block emulation on elementary automata", () => {
         const expected = automaton.emulations.map((e) => e.target).sort((a, b) => a - b);
         for (const N of [3, 4]) {
           const found = new Set<number>();
-          for (const a of [0, 1, 2, 3]) for (const b of [0, 1, 2, 3]) {
-            if (a === b) continue;
-            const G = networkTarget(F, N, time, words[a]!, words[b]!);
-            if (G >= 0) found.add(G);
-          }
-          expect([...found].sort((a, b) => a - b), `rule ${F}, ring of ${N * k}`).toEqual(expected);
+          for (const a of [0, 1, 2, 3])
+            for (const b of [0, 1, 2, 3]) {
+              if (a === b) continue;
+              const G = networkTarget(F, N, time, words[a]!, words[b]!);
+              if (G >= 0) found.add(G);
+            }
+          expect(
+            [...found].sort((a, b) => a - b),
+            `rule ${F}, ring of ${N * k}`,
+          ).toEqual(expected);
           // Each automaton witness is a network witness on the rings, and the certificate verifier agrees.
           for (const e of automaton.emulations) {
             const u0 = [...e.u0].map(Number);
             const u1 = [...e.u1].map(Number);
             const source = cellularAutomaton({ cells: N * k, rule: F });
             const target = cellularAutomaton({ cells: N, rule: e.target });
-            expect(verifyCertificate(blockEmulationCertificate(source, target, ringWitness(N, time, u0, u1))).valid).toBe(true);
+            expect(
+              verifyCertificate(blockEmulationCertificate(source, target, ringWitness(N, time, u0, u1))).valid,
+            ).toBe(true);
           }
           agreeing += expected.length;
         }

@@ -104,7 +104,11 @@ export class EmulationSatInstance {
         for (let v = 0; v < n; v++) {
           const regs = source.regulators[v]!;
           const table = source.tables[v]!;
-          const out = cur ? cur[v * states + x]! : targetSucc ? this.wVar[v * states + targetSucc[x]!]! : this.freeImage(v, x, ctxVar[v]!);
+          const out = cur
+            ? cur[v * states + x]!
+            : targetSucc
+              ? this.wVar[v * states + targetSucc[x]!]!
+              : this.freeImage(v, x, ctxVar[v]!);
           const inputs = Array.from(regs, (r) => prev[r * states + x]!);
           for (let row = 0; row < table.length; row++) {
             const lits: number[] = [];
@@ -148,7 +152,9 @@ export class EmulationSatInstance {
    * Discover mode: the next target (with its witness) not equal up to relabelling to any returned before, or null.
    * `relabellings` lists, for a found table, every table equivalent to it; all of them are excluded afterwards.
    */
-  nextTarget(relabellings: (succ: readonly number[]) => number[][]): { succ: number[]; witness: BlockEmulationWitness } | null {
+  nextTarget(
+    relabellings: (succ: readonly number[]) => number[][],
+  ): { succ: number[]; witness: BlockEmulationWitness } | null {
     if (this.impossible || this.p.targetSucc) return null;
     const values = this.sat.solve();
     if (!values) return null;

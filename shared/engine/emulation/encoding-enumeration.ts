@@ -57,10 +57,15 @@ export function enumerateEncodings(
   exactNodes?: number,
 ): EnumerationRun {
   const n = source.names.length;
-  if (n > MAX_ENUMERATED_NODES) throw new EngineError("TOO_LARGE", `encodings are enumerated on at most ${MAX_ENUMERATED_NODES} source nodes (got ${n})`);
+  if (n > MAX_ENUMERATED_NODES)
+    throw new EngineError(
+      "TOO_LARGE",
+      `encodings are enumerated on at most ${MAX_ENUMERATED_NODES} source nodes (got ${n})`,
+    );
   const M = bounds.maxTargetNodes;
   if (!(M >= 1 && M <= 4)) throw new EngineError("BAD_BOUNDS", "encodings are enumerated for targets of 1 to 4 nodes");
-  if (!(bounds.maxTime >= 1) || !(bounds.maxBlock >= 1)) throw new EngineError("BAD_BOUNDS", "time scale and block size bounds must be at least 1");
+  if (!(bounds.maxTime >= 1) || !(bounds.maxBlock >= 1))
+    throw new EngineError("BAD_BOUNDS", "time scale and block size bounds must be at least 1");
   const contextAllowed = bounds.contextAllowed ?? true;
   let allowedMask = 0;
   for (const v of bounds.allowedNodes ?? [...Array(n).keys()]) {
@@ -70,7 +75,9 @@ export function enumerateEncodings(
   const fullMask = n === 0 ? 0 : (2 ** n - 1) >>> 0;
   const size = 2 ** n;
   const totalUnits = bounds.maxTime * size;
-  const range = control.range ?? (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
+  const range =
+    control.range ??
+    (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
 
   // Candidate blocks grouped by smallest node, each with its highest node.
   const blocksByMin: { mask: number; high: number; size: number }[][] = Array.from({ length: n }, () => []);
@@ -148,7 +155,12 @@ export function enumerateEncodings(
           }
           // The remaining blocks (at most `last - m` of at most maxBlock nodes) must cover every uncovered bit.
           if (viable && popcount(uncovered) > (last - m) * bounds.maxBlock) viable = false;
-          if (viable && closed && (exactNodes === undefined || exactNodes === m) && (contextAllowed || absorbable(U, m))) {
+          if (
+            viable &&
+            closed &&
+            (exactNodes === undefined || exactNodes === m) &&
+            (contextAllowed || absorbable(U, m))
+          ) {
             const masks = blocks.slice(0, m).map((q) => q.mask);
             const found: FoundEncoding = {
               time: t,
@@ -181,7 +193,15 @@ function popcount(x: number): number {
   return c;
 }
 
-function encodingWitness(n: number, masks: readonly number[], union: number, s0: number, time: number, contextAllowed: boolean, maxBlock: number): BlockEmulationWitness {
+function encodingWitness(
+  n: number,
+  masks: readonly number[],
+  union: number,
+  s0: number,
+  time: number,
+  contextAllowed: boolean,
+  maxBlock: number,
+): BlockEmulationWitness {
   const nodesOf = masks.map((mask) => [...Array(n).keys()].filter((v) => (mask >>> v) & 1));
   if (!contextAllowed) {
     // Nodes outside every block join a block with room, carrying the same value in both codewords.

@@ -67,7 +67,8 @@ function bruteForceEmulates(F: BooleanNetwork, G: BooleanNetwork, t: number, max
   return assign(0);
 }
 
-const verifies = (F: BooleanNetwork, G: BooleanNetwork, w: BlockEmulationWitness) => verifyCertificate(blockEmulationCertificate(F, G, w)).valid;
+const verifies = (F: BooleanNetwork, G: BooleanNetwork, w: BlockEmulationWitness) =>
+  verifyCertificate(blockEmulationCertificate(F, G, w)).valid;
 
 describe("searchBlockEmulation", () => {
   it("searchBlockEmulation finds planted reductions and every witness it returns passes the verifier", () => {
@@ -89,17 +90,23 @@ describe("searchBlockEmulation", () => {
 
   it("searchBlockEmulation agrees with a brute-force enumeration of all encodings on small sources, by SAT and by enumeration", () => {
     fc.assert(
-      fc.property(fc.integer(), fc.integer({ min: 2, max: 4 }), fc.integer({ min: 1, max: 2 }), fc.integer({ min: 1, max: 2 }), (seed, n, m, t) => {
-        const rng = seedrandom(String(seed));
-        const F = randomNetwork(rng, n, 2);
-        const G = randomNetwork(rng, m, 2, "g");
-        const expected = [...Array(t).keys()].map((k) => k + 1).find((k) => bruteForceEmulates(F, G, k, 2)) ?? null;
-        for (const method of ["sat", "enumeration"] as const) {
-          const r = searchBlockEmulation(F, G, { maxTime: t, maxBlock: 2, method });
-          expect(r.found ? r.witness!.time : null).toBe(expected);
-          if (r.found) expect(verifies(F, G, r.witness!)).toBe(true);
-        }
-      }),
+      fc.property(
+        fc.integer(),
+        fc.integer({ min: 2, max: 4 }),
+        fc.integer({ min: 1, max: 2 }),
+        fc.integer({ min: 1, max: 2 }),
+        (seed, n, m, t) => {
+          const rng = seedrandom(String(seed));
+          const F = randomNetwork(rng, n, 2);
+          const G = randomNetwork(rng, m, 2, "g");
+          const expected = [...Array(t).keys()].map((k) => k + 1).find((k) => bruteForceEmulates(F, G, k, 2)) ?? null;
+          for (const method of ["sat", "enumeration"] as const) {
+            const r = searchBlockEmulation(F, G, { maxTime: t, maxBlock: 2, method });
+            expect(r.found ? r.witness!.time : null).toBe(expected);
+            if (r.found) expect(verifies(F, G, r.witness!)).toBe(true);
+          }
+        },
+      ),
       { seed: 702, numRuns: 60 },
     );
   });
@@ -108,7 +115,8 @@ describe("searchBlockEmulation", () => {
     fc.assert(
       fc.property(fc.integer(), fc.integer({ min: 3, max: 7 }), fc.integer({ min: 1, max: 2 }), (seed, n, m) => {
         const rng = seedrandom(String(seed));
-        const F = rng() < 0.5 ? randomNetwork(rng, n, 2) : plantEmulation(rng, randomNetwork(rng, m, 2, "g"), n, 2).source;
+        const F =
+          rng() < 0.5 ? randomNetwork(rng, n, 2) : plantEmulation(rng, randomNetwork(rng, m, 2, "g"), n, 2).source;
         const G = randomNetwork(rng, m, 2, "g");
         const F2 = reorderNodes(F, randomPermutation(rng, n), "renamed_");
         const a = searchBlockEmulation(F, G, { maxTime: 2, maxBlock: 2 });
@@ -129,7 +137,9 @@ describe("searchBlockEmulation", () => {
         const F = rng() < 0.5 ? plantEmulation(rng, G, 7, 2).source : randomNetwork(rng, 6, 2);
         const bounds = { maxTime: 2, maxBlock: 2, method: rng() < 0.5 ? ("sat" as const) : ("enumeration" as const) };
         const whole = searchBlockEmulation(F, G, bounds);
-        const parts = [...Array(count).keys()].map((index) => searchBlockEmulation(F, G, bounds, { shard: { index, count } }));
+        const parts = [...Array(count).keys()].map((index) =>
+          searchBlockEmulation(F, G, bounds, { shard: { index, count } }),
+        );
         const merged = mergeEmulationShards(parts.reverse());
         expect({ ...merged, satQueries: 0 }).toEqual({ ...whole, satQueries: 0 });
       }),
@@ -156,7 +166,9 @@ describe("searchBlockEmulation", () => {
     const rng = seedrandom("706");
     const G = randomNetwork(rng, 2, 2, "g");
     const F = randomNetwork(rng, 8, 2);
-    expect(() => searchBlockEmulation(F, G, { maxTime: 2, maxBlock: 2 }, { shouldStop: () => true })).toThrow(/cancelled/);
+    expect(() => searchBlockEmulation(F, G, { maxTime: 2, maxBlock: 2 }, { shouldStop: () => true })).toThrow(
+      /cancelled/,
+    );
   });
 
   it("searchBlockEmulation shows that a network emulates itself at t = 1 with blocks of one node (common practice)", () => {
@@ -165,8 +177,15 @@ describe("searchBlockEmulation", () => {
         const F = randomNetwork(seedrandom(String(seed)), n, 3);
         const r = searchBlockEmulation(F, F, { maxTime: 1, maxBlock: 1, contextAllowed: false });
         expect(r.found).toBe(true);
-        if (n <= 4) expect(searchBlockEmulation(F, F, { maxTime: 1, maxBlock: 1, contextAllowed: false, method: "enumeration" }).found).toBe(true);
-        const identity: BlockEmulationWitness = { time: 1, blocks: F.names.map((_, v) => ({ nodes: [v], zero: [0], one: [1] })), context: F.names.map(() => -1) };
+        if (n <= 4)
+          expect(
+            searchBlockEmulation(F, F, { maxTime: 1, maxBlock: 1, contextAllowed: false, method: "enumeration" }).found,
+          ).toBe(true);
+        const identity: BlockEmulationWitness = {
+          time: 1,
+          blocks: F.names.map((_, v) => ({ nodes: [v], zero: [0], one: [1] })),
+          context: F.names.map(() => -1),
+        };
         expect(verifies(F, F, identity)).toBe(true);
       }),
       { seed: 707, numRuns: 30 },
@@ -176,8 +195,16 @@ describe("searchBlockEmulation", () => {
   it("searchBlockEmulation finds the rotation of k nodes emulating the identity only at t = k, its period (common practice)", () => {
     for (const k of [2, 3, 4]) {
       const names = Array.from({ length: k }, (_, i) => `r${i}`);
-      const rotation = networkFromFunctions(names, names.map((_, i) => [(i + k - 1) % k]), (_node, x) => x[0]!);
-      const identity = networkFromFunctions(names, names.map((_, i) => [i]), (_node, x) => x[0]!);
+      const rotation = networkFromFunctions(
+        names,
+        names.map((_, i) => [(i + k - 1) % k]),
+        (_node, x) => x[0]!,
+      );
+      const identity = networkFromFunctions(
+        names,
+        names.map((_, i) => [i]),
+        (_node, x) => x[0]!,
+      );
       const r = searchBlockEmulation(rotation, identity, { maxTime: k, maxBlock: 1, contextAllowed: false });
       expect(r.found).toBe(true);
       expect(r.witness!.time).toBe(k);
@@ -193,7 +220,11 @@ describe("searchBlockEmulation", () => {
     const onlyB = searchBlockEmulation(F, G, { maxTime: 3, maxBlock: 2, allowedNodes: [1] });
     expect(onlyB.found).toBe(false);
     expect(onlyB.bounds).toEqual({ maxTime: 3, maxBlock: 2, contextAllowed: true, allowedNodes: [1], method: "sat" });
-    expect(searchBlockEmulation(F, G, { maxTime: 3, maxBlock: 2, allowedNodes: [1], method: "enumeration" }).found).toBe(false);
-    expect(searchBlockEmulation(F, G, { maxTime: 1, maxBlock: 2, allowedNodes: [0], method: "enumeration" }).found).toBe(true);
+    expect(
+      searchBlockEmulation(F, G, { maxTime: 3, maxBlock: 2, allowedNodes: [1], method: "enumeration" }).found,
+    ).toBe(false);
+    expect(
+      searchBlockEmulation(F, G, { maxTime: 1, maxBlock: 2, allowedNodes: [0], method: "enumeration" }).found,
+    ).toBe(true);
   });
 });

@@ -46,7 +46,10 @@ export interface EmulationSearchResult {
   readonly witness: BlockEmulationWitness | null;
   /** The unit holding the witness. */
   readonly unit: number | null;
-  readonly bounds: Required<Omit<EmulationBounds, "allowedNodes" | "method">> & { readonly allowedNodes: number[]; readonly method: "sat" | "enumeration" };
+  readonly bounds: Required<Omit<EmulationBounds, "allowedNodes" | "method">> & {
+    readonly allowedNodes: number[];
+    readonly method: "sat" | "enumeration";
+  };
   readonly range: UnitRange;
   readonly totalUnits: number;
   readonly satQueries: number;
@@ -54,7 +57,9 @@ export interface EmulationSearchResult {
 
 /** Number of units of the search (the sharding and cursor scale): t x first-block start for SAT, t x base state for enumeration. */
 export function emulationUnitCount(source: BooleanNetwork, bounds: EmulationBounds): number {
-  return (bounds.method ?? "sat") === "sat" ? bounds.maxTime * source.names.length : enumerationUnitCount(source, bounds.maxTime);
+  return (bounds.method ?? "sat") === "sat"
+    ? bounds.maxTime * source.names.length
+    : enumerationUnitCount(source, bounds.maxTime);
 }
 
 /** Search for a block emulation of `target` by `source` within `bounds` (or the shard of it named in `control`). */
@@ -68,7 +73,8 @@ export function searchBlockEmulation(
   const m = target.names.length;
   if (m < 1) throw new EngineError("BAD_TARGET", "the target network has no nodes");
   if (m > 12) throw new EngineError("TOO_LARGE", `a target of ${m} nodes is beyond the search (at most 12)`);
-  if (!(bounds.maxTime >= 1) || !(bounds.maxBlock >= 1)) throw new EngineError("BAD_BOUNDS", "time scale and block size bounds must be at least 1");
+  if (!(bounds.maxTime >= 1) || !(bounds.maxBlock >= 1))
+    throw new EngineError("BAD_BOUNDS", "time scale and block size bounds must be at least 1");
   const allowed = new Uint8Array(n);
   if (bounds.allowedNodes) {
     for (const v of bounds.allowedNodes) {
@@ -79,26 +85,49 @@ export function searchBlockEmulation(
   const contextAllowed = bounds.contextAllowed ?? true;
   const targetSucc = successorsOfNetwork(target);
   const method = bounds.method ?? "sat";
-  if (method === "enumeration" && m > 4) throw new EngineError("BAD_BOUNDS", "the enumeration handles targets of at most 4 nodes");
+  if (method === "enumeration" && m > 4)
+    throw new EngineError("BAD_BOUNDS", "the enumeration handles targets of at most 4 nodes");
   const totalUnits = emulationUnitCount(source, bounds);
-  const range = control.range ?? (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
+  const range =
+    control.range ??
+    (control.shard ? shardRange(totalUnits, control.shard.index, control.shard.count) : { start: 0, end: totalUnits });
   const result = (witness: BlockEmulationWitness | null, unit: number | null): EmulationSearchResult => ({
     found: witness !== null,
     witness,
     unit,
-    bounds: { maxTime: bounds.maxTime, maxBlock: bounds.maxBlock, contextAllowed, allowedNodes: [...allowed.keys()].filter((v) => allowed[v]), method },
+    bounds: {
+      maxTime: bounds.maxTime,
+      maxBlock: bounds.maxBlock,
+      contextAllowed,
+      allowedNodes: [...allowed.keys()].filter((v) => allowed[v]),
+      method,
+    },
     range,
     totalUnits,
     satQueries,
   });
   let satQueries = 0;
   if (method === "enumeration") {
-    const hit = enumerationSearch(source, targetSucc, m, { ...bounds, maxTargetNodes: m, contextAllowed }, { ...control, range });
+    const hit = enumerationSearch(
+      source,
+      targetSucc,
+      m,
+      { ...bounds, maxTargetNodes: m, contextAllowed },
+      { ...control, range },
+    );
     if (hit) control.onProgress?.(1, "searching block emulations");
     return result(hit?.witness ?? null, hit?.unit ?? null);
   }
   let instance: { t: number; sat: EmulationSatInstance } | null = null;
-  const problem = (t: number) => ({ source, targetSucc, targetNodes: m, time: t, maxBlock: bounds.maxBlock, allowed, contextAllowed });
+  const problem = (t: number) => ({
+    source,
+    targetSucc,
+    targetNodes: m,
+    time: t,
+    maxBlock: bounds.maxBlock,
+    allowed,
+    contextAllowed,
+  });
   // Range queries share one incremental formula per time scale; they only answer yes or no.
   const query = (t: number, lo: number, hi: number) => {
     if (control.shouldStop?.()) throw new CancelledError();

@@ -1,6 +1,19 @@
-export { stepValues, iterateValues, successorTable, powerTable, transitionTable, MAX_TABULATED_NODES } from "./network-step";
+export {
+  stepValues,
+  iterateValues,
+  successorTable,
+  powerTable,
+  transitionTable,
+  MAX_TABULATED_NODES,
+} from "./network-step";
 export { networkFromSuccessors, successorsOfNetwork } from "./network-from-successors";
-export { encodeTargetState, checkWitnessShape, witnessHolds, type BlockEmulationWitness, type EmulationBlock } from "./block-witness";
+export {
+  encodeTargetState,
+  checkWitnessShape,
+  witnessHolds,
+  type BlockEmulationWitness,
+  type EmulationBlock,
+} from "./block-witness";
 export { EmulationSatInstance, type EmulationSatProblem } from "./emulation-sat";
 export { shardRange, type UnitRange } from "./search-units";
 export {
@@ -11,7 +24,13 @@ export {
   type EmulationSearchResult,
   type SearchControl,
 } from "./given-target-search";
-export { canonicalTargetKey, relabelledTables, trivialityFlags, interactionCount, type TargetFlag } from "./canonical-target";
+export {
+  canonicalTargetKey,
+  relabelledTables,
+  trivialityFlags,
+  interactionCount,
+  type TargetFlag,
+} from "./canonical-target";
 export {
   discoverShard,
   mergeDiscoverShards,
@@ -24,4 +43,11 @@ export {
 } from "./discover-targets";
 export { randomNetwork, plantEmulation, type Rng, type PlantedEmulation } from "./planted-reductions";
 export { cycleLengthCounts, cyclesFit } from "./cycle-prefilter";
-export { enumerateEncodings, enumerationUnitCount, MAX_ENUMERATED_NODES, type EnumerationBounds, type FoundEncoding, type EnumerationRun } from "./encoding-enumeration";
+export {
+  enumerateEncodings,
+  enumerationUnitCount,
+  MAX_ENUMERATED_NODES,
+  type EnumerationBounds,
+  type FoundEncoding,
+  type EnumerationRun,
+} from "./encoding-enumeration";

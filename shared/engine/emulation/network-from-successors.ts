@@ -6,7 +6,8 @@ import { checkNetwork, type BooleanNetwork } from "../network";
 /** Build the network whose synchronous map is `succ` (length 2^m); node i keeps only the inputs it depends on. */
 export function networkFromSuccessors(names: readonly string[], succ: ArrayLike<number>): BooleanNetwork {
   const m = names.length;
-  if (succ.length !== 2 ** m) throw new EngineError("BAD_MAP", `a map on ${m} nodes needs ${2 ** m} successors, got ${succ.length}`);
+  if (succ.length !== 2 ** m)
+    throw new EngineError("BAD_MAP", `a map on ${m} nodes needs ${2 ** m} successors, got ${succ.length}`);
   const regulators: Int32Array[] = [];
   const tables: Uint8Array[] = [];
   for (let i = 0; i < m; i++) {

@@ -34,7 +34,10 @@ export function iterateValues(net: BooleanNetwork, values: Uint8Array, t: number
 export function successorTable(net: BooleanNetwork): Uint32Array {
   const n = net.names.length;
   if (n > MAX_TABULATED_NODES) {
-    throw new EngineError("TOO_LARGE", `a state space of ${n} nodes is too large to tabulate (at most ${MAX_TABULATED_NODES})`);
+    throw new EngineError(
+      "TOO_LARGE",
+      `a state space of ${n} nodes is too large to tabulate (at most ${MAX_TABULATED_NODES})`,
+    );
   }
   const size = 2 ** n;
   const succ = new Uint32Array(size);

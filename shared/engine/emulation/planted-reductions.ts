@@ -22,7 +22,9 @@ function shuffled<T>(rng: Rng, items: readonly T[]): T[] {
 /** A random network of n nodes, each with 0..maxInputs distinct regulators and a random table. */
 export function randomNetwork(rng: Rng, n: number, maxInputs: number, prefix = "x"): BooleanNetwork {
   const names = Array.from({ length: n }, (_, i) => `${prefix}${i}`);
-  const regulators = names.map(() => Int32Array.from(shuffled(rng, [...Array(n).keys()]).slice(0, pick(rng, Math.min(maxInputs, n) + 1))));
+  const regulators = names.map(() =>
+    Int32Array.from(shuffled(rng, [...Array(n).keys()]).slice(0, pick(rng, Math.min(maxInputs, n) + 1))),
+  );
   const tables = regulators.map((r) => Uint8Array.from({ length: 1 << r.length }, () => pick(rng, 2)));
   return checkNetwork({ names, regulators, tables });
 }
@@ -37,7 +39,13 @@ export interface PlantedEmulation {
  * A source of n nodes that emulates `target` at time 1 through a random encoding with blocks of 1..maxBlock nodes;
  * the remaining nodes are noise that reads context nodes and holds its context value on encoded states.
  */
-export function plantEmulation(rng: Rng, target: BooleanNetwork, n: number, maxBlock: number, noiseInputs = 2): PlantedEmulation {
+export function plantEmulation(
+  rng: Rng,
+  target: BooleanNetwork,
+  n: number,
+  maxBlock: number,
+  noiseInputs = 2,
+): PlantedEmulation {
   const m = target.names.length;
   const sizes = target.names.map(() => 1 + pick(rng, maxBlock));
   const used = sizes.reduce((a, b) => a + b, 0);

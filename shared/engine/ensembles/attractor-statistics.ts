@@ -30,13 +30,21 @@ function histogram(values: number[]): [number, number][] {
 }
 
 /** Analyse the network `family(seed)` for every seed and gather the distributions. */
-export function attractorStatistics(family: (seed: number) => BooleanNetwork, seeds: readonly number[], options: LongTaskOptions = {}): AttractorStatistics {
+export function attractorStatistics(
+  family: (seed: number) => BooleanNetwork,
+  seeds: readonly number[],
+  options: LongTaskOptions = {},
+): AttractorStatistics {
   const members: EnsembleMember[] = [];
   seeds.forEach((seed, q) => {
     if (options.shouldStop?.()) throw new CancelledError();
     options.onProgress?.(q / seeds.length, "ensemble");
     const analysis = analyseSynchronous(family(seed), { shouldStop: options.shouldStop });
-    members.push({ seed, attractorCount: analysis.attractors.length, lengths: analysis.attractors.map((a) => a.length) });
+    members.push({
+      seed,
+      attractorCount: analysis.attractors.length,
+      lengths: analysis.attractors.map((a) => a.length),
+    });
   });
   options.onProgress?.(1, "ensemble");
   const lengths = members.flatMap((m) => m.lengths);

@@ -14,7 +14,11 @@ describe("ensembles", () => {
     expect(stats.countDistribution.reduce((t, [, c]) => t + c, 0)).toBe(20);
     seeds.forEach((seed, q) => {
       const exact = analyseSynchronous(family(seed));
-      expect(stats.members[q]).toEqual({ seed, attractorCount: exact.attractors.length, lengths: exact.attractors.map((a) => a.length) });
+      expect(stats.members[q]).toEqual({
+        seed,
+        attractorCount: exact.attractors.length,
+        lengths: exact.attractors.map((a) => a.length),
+      });
     });
     const allLengths = stats.members.flatMap((m) => m.lengths);
     expect(stats.lengthDistribution.reduce((t, [, c]) => t + c, 0)).toBe(allLengths.length);
@@ -32,9 +36,17 @@ describe("ensembles", () => {
 
   it("derridaCurve of large random NK networks follows the annealed approximation of Derrida and Pomeau (1986)", () => {
     // Quenched N=1000 networks match the annealed map a' = 2p(1-p)[1-(1-a)^K] up to sampling noise.
-    for (const [k, p] of [[2, 0.5], [3, 0.5], [4, 0.3]] as const) {
+    for (const [k, p] of [
+      [2, 0.5],
+      [3, 0.5],
+      [4, 0.3],
+    ] as const) {
       const nets = [1, 2, 3, 4].map((s) => randomNK(1000, k, `${k}-${p}-${s}`, p));
-      const curve = derridaCurve(nets, { distances: [0.01, 0.05, 0.1, 0.2, 0.4, 0.7, 1], pairs: 25, rng: seedrandom(`d${k}`) });
+      const curve = derridaCurve(nets, {
+        distances: [0.01, 0.05, 0.1, 0.2, 0.4, 0.7, 1],
+        pairs: 25,
+        rng: seedrandom(`d${k}`),
+      });
       for (const point of curve) expect(Math.abs(point.after - annealedDamage(point.before, k, p))).toBeLessThan(0.02);
       // The curve's initial slope is the average sensitivity (Shmulevich and Kauffman, PRL 2004).
       const mean = nets.reduce((t, net) => t + networkSensitivity(net), 0) / nets.length;
@@ -45,7 +57,12 @@ describe("ensembles", () => {
   it("derridaCurve of a network of copy nodes keeps every distance unchanged", () => {
     // Each node copies its left neighbour on a ring: the damage is shifted, never created or destroyed.
     const n = 50;
-    const ring = networkFromFunctions(Array.from({ length: n }, (_, i) => `r${i}`), Array.from({ length: n }, (_, i) => [(i + n - 1) % n]), (_node, x) => x[0]!);
-    for (const point of derridaCurve([ring], { distances: [0, 0.1, 0.5, 1], pairs: 5, rng: seedrandom("ring") })) expect(point.after).toBeCloseTo(point.before, 12);
+    const ring = networkFromFunctions(
+      Array.from({ length: n }, (_, i) => `r${i}`),
+      Array.from({ length: n }, (_, i) => [(i + n - 1) % n]),
+      (_node, x) => x[0]!,
+    );
+    for (const point of derridaCurve([ring], { distances: [0, 0.1, 0.5, 1], pairs: 5, rng: seedrandom("ring") }))
+      expect(point.after).toBeCloseTo(point.before, 12);
   });
 });

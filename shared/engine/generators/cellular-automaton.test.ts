@@ -36,23 +36,33 @@ describe("cellularAutomaton", () => {
 
   it("cellularAutomaton matches the rule-number definition for every elementary rule on random rings", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 255 }), fc.integer({ min: 3, max: 16 }), fc.integer({ min: 0, max: 2 ** 16 - 1 }), (rule, n, bits) => {
-        const state = bits & ((1 << n) - 1);
-        const net = cellularAutomaton({ cells: n, rule });
-        expect(stateToString(step(net, state), n)).toBe(referenceStep(stateToString(state, n), BigInt(rule), 1));
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 255 }),
+        fc.integer({ min: 3, max: 16 }),
+        fc.integer({ min: 0, max: 2 ** 16 - 1 }),
+        (rule, n, bits) => {
+          const state = bits & ((1 << n) - 1);
+          const net = cellularAutomaton({ cells: n, rule });
+          expect(stateToString(step(net, state), n)).toBe(referenceStep(stateToString(state, n), BigInt(rule), 1));
+        },
+      ),
       { seed: 4401, numRuns: 400 },
     );
   });
 
   it("cellularAutomaton matches the rule-number definition for radius 2 and 3 rules", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 2, max: 3 }), fc.bigInt({ min: 0n, max: (1n << 128n) - 1n }), fc.integer({ min: 0, max: 2 ** 14 - 1 }), (r, big, bits) => {
-        const n = 14;
-        const rule = r === 2 ? big % (1n << 32n) : big;
-        const net = cellularAutomaton({ cells: n, rule, radius: r });
-        expect(stateToString(step(net, bits), n)).toBe(referenceStep(stateToString(bits, n), rule, r));
-      }),
+      fc.property(
+        fc.integer({ min: 2, max: 3 }),
+        fc.bigInt({ min: 0n, max: (1n << 128n) - 1n }),
+        fc.integer({ min: 0, max: 2 ** 14 - 1 }),
+        (r, big, bits) => {
+          const n = 14;
+          const rule = r === 2 ? big % (1n << 32n) : big;
+          const net = cellularAutomaton({ cells: n, rule, radius: r });
+          expect(stateToString(step(net, bits), n)).toBe(referenceStep(stateToString(bits, n), rule, r));
+        },
+      ),
       { seed: 4402, numRuns: 200 },
     );
   });

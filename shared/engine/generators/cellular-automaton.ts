@@ -18,17 +18,29 @@ export interface CellularAutomatonOptions {
  * regulator j is the (j+1)-th cell from the left and carries weight 2^(2r-j) in the neighbourhood number.
  */
 export function cellularAutomaton({ cells, rule, radius = 1 }: CellularAutomatonOptions): BooleanNetwork {
-  if (!Number.isInteger(radius) || radius < 0) throw new EngineError("BAD_ARGUMENT", `radius must be a non-negative integer, got ${radius}`);
+  if (!Number.isInteger(radius) || radius < 0)
+    throw new EngineError("BAD_ARGUMENT", `radius must be a non-negative integer, got ${radius}`);
   const width = 2 * radius + 1;
-  if (width > 20) throw new EngineError("BAD_ARGUMENT", `radius ${radius} gives ${width} regulators per cell; at most 20 are supported`);
+  if (width > 20)
+    throw new EngineError(
+      "BAD_ARGUMENT",
+      `radius ${radius} gives ${width} regulators per cell; at most 20 are supported`,
+    );
   if (!Number.isInteger(cells) || cells < width) {
-    throw new EngineError("BAD_ARGUMENT", `a ring of radius ${radius} needs at least ${width} cells so that neighbours are distinct, got ${cells}`);
+    throw new EngineError(
+      "BAD_ARGUMENT",
+      `a ring of radius ${radius} needs at least ${width} cells so that neighbours are distinct, got ${cells}`,
+    );
   }
-  if (typeof rule === "number" && (!Number.isSafeInteger(rule) || rule < 0)) throw new EngineError("BAD_ARGUMENT", `rule number must be a non-negative integer, got ${rule}`);
+  if (typeof rule === "number" && (!Number.isSafeInteger(rule) || rule < 0))
+    throw new EngineError("BAD_ARGUMENT", `rule number must be a non-negative integer, got ${rule}`);
   const ruleBits = BigInt(rule);
   const rows = 1 << width;
   if (ruleBits < 0n || ruleBits >= 1n << BigInt(rows)) {
-    throw new EngineError("BAD_ARGUMENT", `rule number ${rule} is out of range for radius ${radius} (0 to 2^${rows} - 1)`);
+    throw new EngineError(
+      "BAD_ARGUMENT",
+      `rule number ${rule} is out of range for radius ${radius} (0 to 2^${rows} - 1)`,
+    );
   }
   // One shared table: row bit j is the cell at offset j - r, whose weight in the neighbourhood number is 2^(2r - j).
   const table = new Uint8Array(rows);
@@ -38,6 +50,8 @@ export function cellularAutomaton({ cells, rule, radius = 1 }: CellularAutomaton
     table[row] = Number((ruleBits >> BigInt(v)) & 1n);
   }
   const names = Array.from({ length: cells }, (_, i) => `c${i}`);
-  const regulators = names.map((_, i) => Int32Array.from({ length: width }, (_, j) => (((i + j - radius) % cells) + cells) % cells));
+  const regulators = names.map((_, i) =>
+    Int32Array.from({ length: width }, (_, j) => (((i + j - radius) % cells) + cells) % cells),
+  );
   return checkNetwork({ names, regulators, tables: names.map(() => table.slice()) });
 }

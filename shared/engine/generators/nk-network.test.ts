@@ -5,7 +5,13 @@ import { nkNetwork } from "./nk-network";
 describe("nkNetwork", () => {
   it("nkNetwork gives every node exactly K distinct regulators and a table of 2^K rows", () => {
     const random = seedrandom("4501");
-    for (const [n, k] of [[1, 0], [1, 1], [5, 5], [12, 2], [30, 4]] as const) {
+    for (const [n, k] of [
+      [1, 0],
+      [1, 1],
+      [5, 5],
+      [12, 2],
+      [30, 4],
+    ] as const) {
       const net = nkNetwork({ n, k, random });
       expect(net.names).toHaveLength(n);
       for (let i = 0; i < n; i++) {
@@ -24,7 +30,7 @@ describe("nkNetwork", () => {
       let total = 0;
       for (let draw = 0; draw < 40; draw++) {
         const net = nkNetwork({ n: 25, k: 3, p, random });
-        for (const t of net.tables) for (const v of t) (ones += v), total++;
+        for (const t of net.tables) for (const v of t) ((ones += v), total++);
       }
       const sd = Math.sqrt(total * p * (1 - p));
       expect(Math.abs(ones - p * total)).toBeLessThan(5 * sd);

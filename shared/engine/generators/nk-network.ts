@@ -25,7 +25,8 @@ export function sampleDistinct(n: number, k: number, random: () => number): numb
 
 export function nkNetwork({ n, k, p = 0.5, random }: NkOptions): BooleanNetwork {
   if (!Number.isInteger(n) || n < 1) throw new EngineError("BAD_ARGUMENT", `N must be a positive integer, got ${n}`);
-  if (!Number.isInteger(k) || k < 0 || k > n) throw new EngineError("BAD_ARGUMENT", `K must be an integer from 0 to N = ${n}, got ${k}`);
+  if (!Number.isInteger(k) || k < 0 || k > n)
+    throw new EngineError("BAD_ARGUMENT", `K must be an integer from 0 to N = ${n}, got ${k}`);
   if (k > 20) throw new EngineError("BAD_ARGUMENT", `K = ${k} is more than the 20 regulators a node may have`);
   if (!(p >= 0 && p <= 1)) throw new EngineError("BAD_ARGUMENT", `p must lie in [0, 1], got ${p}`);
   const names = Array.from({ length: n }, (_, i) => `x${i}`);

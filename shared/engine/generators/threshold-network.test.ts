@@ -21,7 +21,7 @@ describe("thresholdNetwork", () => {
     for (let d = 0; d < 50; d++) {
       for (const node of thresholdNetwork({ n: 20, k: 2, random }).nodes) {
         if (node.rule.kind !== "threshold") continue;
-        for (const t of node.rule.terms) (positive += t.weight > 0 ? 1 : 0), total++;
+        for (const t of node.rule.terms) ((positive += t.weight > 0 ? 1 : 0), total++);
       }
     }
     expect(Math.abs(positive - total / 2)).toBeLessThan(5 * Math.sqrt(total / 4));

@@ -17,8 +17,10 @@ export interface ThresholdNetworkOptions {
 /** A random threshold model as rules (compile it with compileDefinition; print it with printRuleText). */
 export function thresholdNetwork({ n, k, offset = 0, tie = "keep", random }: ThresholdNetworkOptions): ModelDefinition {
   if (!Number.isInteger(n) || n < 1) throw new EngineError("BAD_ARGUMENT", `N must be a positive integer, got ${n}`);
-  if (!Number.isInteger(k) || k < 0 || k > n) throw new EngineError("BAD_ARGUMENT", `K must be an integer from 0 to N = ${n}, got ${k}`);
-  if (k + (tie === "keep" ? 1 : 0) > 20) throw new EngineError("BAD_ARGUMENT", `K = ${k} gives more than the 20 regulators a node may have`);
+  if (!Number.isInteger(k) || k < 0 || k > n)
+    throw new EngineError("BAD_ARGUMENT", `K must be an integer from 0 to N = ${n}, got ${k}`);
+  if (k + (tie === "keep" ? 1 : 0) > 20)
+    throw new EngineError("BAD_ARGUMENT", `K = ${k} gives more than the 20 regulators a node may have`);
   if (!Number.isSafeInteger(offset)) throw new EngineError("BAD_ARGUMENT", `offset must be an integer, got ${offset}`);
   const names = Array.from({ length: n }, (_, i) => `x${i}`);
   return {

@@ -33,11 +33,17 @@ export function checkNetwork(net: BooleanNetwork): BooleanNetwork {
     if (seen.has(name)) throw new EngineError("BAD_NETWORK", `node name "${name}" appears twice`);
     seen.add(name);
     const regs = net.regulators[i]!;
-    if (regs.length > 20) throw new EngineError("BAD_NETWORK", `node "${name}" has ${regs.length} regulators; at most 20 are supported`);
+    if (regs.length > 20)
+      throw new EngineError("BAD_NETWORK", `node "${name}" has ${regs.length} regulators; at most 20 are supported`);
     if (net.tables[i]!.length !== 1 << regs.length) {
-      throw new EngineError("BAD_NETWORK", `node "${name}" has ${regs.length} regulators but a table of ${net.tables[i]!.length} rows`);
+      throw new EngineError(
+        "BAD_NETWORK",
+        `node "${name}" has ${regs.length} regulators but a table of ${net.tables[i]!.length} rows`,
+      );
     }
-    for (const r of regs) if (r < 0 || r >= n) throw new EngineError("BAD_NETWORK", `node "${name}" has a regulator index ${r} out of range`);
+    for (const r of regs)
+      if (r < 0 || r >= n)
+        throw new EngineError("BAD_NETWORK", `node "${name}" has a regulator index ${r} out of range`);
   }
   return net;
 }
@@ -54,7 +60,8 @@ export function stateFromString(text: string): number {
   let state = 0;
   for (let i = text.length - 1; i >= 0; i--) {
     const c = text[i];
-    if (c !== "0" && c !== "1") throw new EngineError("BAD_STATE", `state "${text}" has a character other than 0 or 1 at position ${i + 1}`);
+    if (c !== "0" && c !== "1")
+      throw new EngineError("BAD_STATE", `state "${text}" has a character other than 0 or 1 at position ${i + 1}`);
     state = state * 2 + (c === "1" ? 1 : 0);
   }
   return state;

@@ -12,7 +12,10 @@ export interface AttractorComparison<A extends AttractorLike> {
   gained: A[];
 }
 
-export function compareAttractors<A extends AttractorLike>(before: readonly A[], after: readonly A[]): AttractorComparison<A> {
+export function compareAttractors<A extends AttractorLike>(
+  before: readonly A[],
+  after: readonly A[],
+): AttractorComparison<A> {
   const key = (a: A) => a.states.join(",");
   const afterByKey = new Map(after.map((a) => [key(a), a]));
   const kept: { before: A; after: A }[] = [];

@@ -16,20 +16,27 @@ export function perturbNetwork(net: BooleanNetwork, perturbation: Perturbation):
   const n = net.names.length;
   const held = new Map<number, 0 | 1>();
   const hold = (node: number, value: 0 | 1, what: string) => {
-    if (!Number.isInteger(node) || node < 0 || node >= n) throw new EngineError("BAD_PERTURBATION", `${what}: node index ${node} is out of range`);
+    if (!Number.isInteger(node) || node < 0 || node >= n)
+      throw new EngineError("BAD_PERTURBATION", `${what}: node index ${node} is out of range`);
     const before = held.get(node);
-    if (before !== undefined && before !== value) throw new EngineError("BAD_PERTURBATION", `node "${net.names[node]}" is held at both 0 and 1`);
+    if (before !== undefined && before !== value)
+      throw new EngineError("BAD_PERTURBATION", `node "${net.names[node]}" is held at both 0 and 1`);
     held.set(node, value);
   };
   for (const node of perturbation.knockOut ?? []) hold(node, 0, "knock-out");
   for (const node of perturbation.overExpress ?? []) hold(node, 1, "over-expression");
   const inputs = perturbation.fixedInputs;
   const entries: [number, 0 | 1][] =
-    inputs instanceof Map ? [...inputs.entries()] : Object.entries(inputs ?? {}).map(([k, v]) => [Number(k), v as 0 | 1]);
+    inputs instanceof Map
+      ? [...inputs.entries()]
+      : Object.entries(inputs ?? {}).map(([k, v]) => [Number(k), v as 0 | 1]);
   for (const [node, value] of entries) {
     const regs = net.regulators[node];
     if (regs && !Array.from(regs).every((r) => r === node)) {
-      throw new EngineError("BAD_PERTURBATION", `node "${net.names[node]}" is not an input (it has regulators other than itself)`);
+      throw new EngineError(
+        "BAD_PERTURBATION",
+        `node "${net.names[node]}" is not an input (it has regulators other than itself)`,
+      );
     }
     hold(node, value, "fixed input");
   }

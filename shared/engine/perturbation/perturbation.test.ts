@@ -10,38 +10,51 @@ import { compareAttractors, perturbNetwork } from "./index";
 describe("perturbation", () => {
   it("perturbNetwork steps like the original network with the held nodes overwritten", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 2, max: 9 }), fc.integer({ min: 1, max: 3 }), fc.integer(), fc.integer({ min: 0, max: 511 }), fc.integer({ min: 0, max: 511 }), (n, k, seed, koMask, oeMask) => {
-        const net = randomNK(n, k, seed);
-        const ko = Array.from({ length: n }, (_, i) => i).filter((i) => (koMask >> i) & 1);
-        const oe = Array.from({ length: n }, (_, i) => i).filter((i) => (oeMask >> i) & 1 && !ko.includes(i));
-        const table = successorTable(perturbNetwork(net, { knockOut: ko, overExpress: oe }));
-        for (let s = 0; s < 2 ** n; s++) {
-          let expected = slowSuccessor(net, s);
-          for (const i of ko) expected &= ~(1 << i);
-          for (const i of oe) expected |= 1 << i;
-          expect(table[s]).toBe(expected);
-        }
-      }),
+      fc.property(
+        fc.integer({ min: 2, max: 9 }),
+        fc.integer({ min: 1, max: 3 }),
+        fc.integer(),
+        fc.integer({ min: 0, max: 511 }),
+        fc.integer({ min: 0, max: 511 }),
+        (n, k, seed, koMask, oeMask) => {
+          const net = randomNK(n, k, seed);
+          const ko = Array.from({ length: n }, (_, i) => i).filter((i) => (koMask >> i) & 1);
+          const oe = Array.from({ length: n }, (_, i) => i).filter((i) => (oeMask >> i) & 1 && !ko.includes(i));
+          const table = successorTable(perturbNetwork(net, { knockOut: ko, overExpress: oe }));
+          for (let s = 0; s < 2 ** n; s++) {
+            let expected = slowSuccessor(net, s);
+            for (const i of ko) expected &= ~(1 << i);
+            for (const i of oe) expected |= 1 << i;
+            expect(table[s]).toBe(expected);
+          }
+        },
+      ),
       { seed: 51, numRuns: 60 },
     );
   });
 
   it("compareAttractors keeps the original fixed points that agree with a knock-out and loses the others", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 2, max: 9 }), fc.integer({ min: 1, max: 3 }), fc.integer(), fc.nat(), (n, k, seed, pick) => {
-        const net = randomNK(n, k, seed);
-        const node = pick % n;
-        const before = attractorsAsText(analyseSynchronous(net));
-        const after = attractorsAsText(analyseSynchronous(perturbNetwork(net, { knockOut: [node] })));
-        const cmp = compareAttractors(before, after);
-        for (const fp of before.filter((a) => a.length === 1)) {
-          const survives = fp.states[0]![node] === "0";
-          expect(cmp.kept.some((m) => m.before === fp)).toBe(survives);
-        }
-        expect(cmp.kept.length + cmp.lost.length).toBe(before.length);
-        expect(cmp.kept.length + cmp.gained.length).toBe(after.length);
-        for (const a of after) for (const s of a.states) expect(s[node]).toBe("0");
-      }),
+      fc.property(
+        fc.integer({ min: 2, max: 9 }),
+        fc.integer({ min: 1, max: 3 }),
+        fc.integer(),
+        fc.nat(),
+        (n, k, seed, pick) => {
+          const net = randomNK(n, k, seed);
+          const node = pick % n;
+          const before = attractorsAsText(analyseSynchronous(net));
+          const after = attractorsAsText(analyseSynchronous(perturbNetwork(net, { knockOut: [node] })));
+          const cmp = compareAttractors(before, after);
+          for (const fp of before.filter((a) => a.length === 1)) {
+            const survives = fp.states[0]![node] === "0";
+            expect(cmp.kept.some((m) => m.before === fp)).toBe(survives);
+          }
+          expect(cmp.kept.length + cmp.lost.length).toBe(before.length);
+          expect(cmp.kept.length + cmp.gained.length).toBe(after.length);
+          for (const a of after) for (const s of a.states) expect(s[node]).toBe("0");
+        },
+      ),
       { seed: 52, numRuns: 60 },
     );
   });

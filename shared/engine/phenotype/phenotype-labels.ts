@@ -12,7 +12,11 @@ export interface PhenotypeLabel {
 }
 
 /** Label one attractor (its states as node-ordered 0/1 text) by the given marker nodes. */
-export function phenotypeLabel(states: readonly string[], markers: readonly number[], names: readonly string[]): PhenotypeLabel {
+export function phenotypeLabel(
+  states: readonly string[],
+  markers: readonly number[],
+  names: readonly string[],
+): PhenotypeLabel {
   const pattern = markers.map((m): MarkerValue => {
     const first = states[0]![m]!;
     return states.every((s) => s[m] === first) ? (first as "0" | "1") : "~";
@@ -22,7 +26,11 @@ export function phenotypeLabel(states: readonly string[], markers: readonly numb
 }
 
 /** Group attractor indices by phenotype label, in order of first appearance. */
-export function groupByPhenotype(attractors: readonly { states: readonly string[] }[], markers: readonly number[], names: readonly string[]): { label: string; pattern: MarkerValue[]; attractors: number[] }[] {
+export function groupByPhenotype(
+  attractors: readonly { states: readonly string[] }[],
+  markers: readonly number[],
+  names: readonly string[],
+): { label: string; pattern: MarkerValue[]; attractors: number[] }[] {
   const groups = new Map<string, { label: string; pattern: MarkerValue[]; attractors: number[] }>();
   attractors.forEach((a, index) => {
     const p = phenotypeLabel(a.states, markers, names);

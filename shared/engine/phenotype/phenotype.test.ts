@@ -7,7 +7,10 @@ import { groupByPhenotype, phenotypeLabel } from "./index";
 
 describe("phenotype", () => {
   it("phenotypeLabel reads fixed values and oscillating markers of a cycle", () => {
-    expect(phenotypeLabel(["100", "110"], [0, 1, 2], ["A", "B", "C"])).toEqual({ pattern: ["1", "~", "0"], label: "A=1 B~ C=0" });
+    expect(phenotypeLabel(["100", "110"], [0, 1, 2], ["A", "B", "C"])).toEqual({
+      pattern: ["1", "~", "0"],
+      label: "A=1 B~ C=0",
+    });
   });
 
   it("phenotypeLabel gives a marker 0 or 1 exactly when it is constant on the attractor, and fixed points never oscillate", () => {
@@ -30,7 +33,11 @@ describe("phenotype", () => {
 
   it("groupByPhenotype puts every attractor in exactly one group", () => {
     const attractors = attractorsAsText(analyseSynchronous(randomNK(10, 2, 6)));
-    const groups = groupByPhenotype(attractors, [0, 3], Array.from({ length: 10 }, (_, i) => `g${i}`));
+    const groups = groupByPhenotype(
+      attractors,
+      [0, 3],
+      Array.from({ length: 10 }, (_, i) => `g${i}`),
+    );
     expect(groups.flatMap((g) => g.attractors).sort((a, b) => a - b)).toEqual(attractors.map((_, i) => i));
   });
 

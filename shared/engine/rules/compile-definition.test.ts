@@ -59,7 +59,9 @@ function synchronousAttractorBasins(net: BooleanNetwork): { state: number; basin
     for (let y = next(x); y !== x; y = next(y)) min = Math.min(min, y);
     counts.set(min, (counts.get(min) ?? 0) + 1);
   }
-  return [...counts].map(([state, basin]) => ({ state, basin, fixed: next(state) === state })).sort((a, b) => b.basin - a.basin);
+  return [...counts]
+    .map(([state, basin]) => ({ state, basin, fixed: next(state) === state }))
+    .sort((a, b) => b.basin - a.basin);
 }
 
 describe("compileDefinition", () => {
@@ -73,7 +75,9 @@ describe("compileDefinition", () => {
   });
 
   it("compileDefinition gives a threshold rule with tie keep its own node as a regulator, and tie zero not", () => {
-    const net = compileDefinition(readRuleText("A' = threshold(+1 B; tie keep)\nB' = threshold(+1 A, -1 C; offset 0; tie zero)\nC' = C\n"));
+    const net = compileDefinition(
+      readRuleText("A' = threshold(+1 B; tie keep)\nB' = threshold(+1 A, -1 C; offset 0; tie zero)\nC' = C\n"),
+    );
     expect(Array.from(net.regulators[0]!)).toEqual([0, 1]);
     expect(Array.from(net.tables[0]!)).toEqual([0, 1, 1, 1]); // sum 0 keeps A, B = 1 switches on
     expect(Array.from(net.regulators[1]!)).toEqual([0, 2]);
@@ -94,27 +98,53 @@ describe("compileDefinition", () => {
 
   it("truthTableOf agrees with one-row-at-a-time evaluation on sums of products over up to 12 inputs", () => {
     const inputs = Array.from({ length: 12 }, (_, j) => `i${j}`);
-    const literal = fc.tuple(fc.constantFrom(...inputs), fc.boolean()).map(([name, neg]): Expr => (neg ? { kind: "not", arg: { kind: "var", name } } : { kind: "var", name }));
-    const product = fc.array(literal, { minLength: 1, maxLength: 6 }).map((ls) => ls.reduce((left, right): Expr => ({ kind: "and", left, right })));
+    const literal = fc
+      .tuple(fc.constantFrom(...inputs), fc.boolean())
+      .map(([name, neg]): Expr => (neg ? { kind: "not", arg: { kind: "var", name } } : { kind: "var", name }));
+    const product = fc
+      .array(literal, { minLength: 1, maxLength: 6 })
+      .map((ls) => ls.reduce((left, right): Expr => ({ kind: "and", left, right })));
     const operand = fc.oneof(product, exprArb(inputs, 3));
-    const sum = fc.array(operand, { minLength: 1, maxLength: 12 }).map((ps) => ps.reduce((left, right): Expr => ({ kind: "or", left, right })));
+    const sum = fc
+      .array(operand, { minLength: 1, maxLength: 12 })
+      .map((ps) => ps.reduce((left, right): Expr => ({ kind: "or", left, right })));
     fc.assert(
       fc.property(sum, fc.integer({ min: 1, max: 12 }), (expr, k) => {
         const used = new Set(inputs.slice(0, k));
         const rename = (e: Expr): Expr =>
-          e.kind === "var" ? (used.has(e.name) ? e : { kind: "var", name: `i${Number(e.name.slice(1)) % k}` }) : e.kind === "not" ? { kind: "not", arg: rename(e.arg) } : e.kind === "const" ? e : { kind: e.kind, left: rename(e.left), right: rename(e.right) };
+          e.kind === "var"
+            ? used.has(e.name)
+              ? e
+              : { kind: "var", name: `i${Number(e.name.slice(1)) % k}` }
+            : e.kind === "not"
+              ? { kind: "not", arg: rename(e.arg) }
+              : e.kind === "const"
+                ? e
+                : { kind: e.kind, left: rename(e.left), right: rename(e.right) };
         const inK = rename(expr);
         const table = truthTableOf(inK, inputs.slice(0, k));
-        for (let row = 0; row < 1 << k; row++) expect(table[row]).toBe(evaluateExpr(inK, (name) => (row >> Number(name.slice(1))) & 1));
+        for (let row = 0; row < 1 << k; row++)
+          expect(table[row]).toBe(evaluateExpr(inK, (name) => (row >> Number(name.slice(1))) & 1));
       }),
       { seed: 4203, numRuns: 300 },
     );
   });
 
   it("compileDefinition rejects a rule that reads an undefined node, and duplicate or invalid names", () => {
-    expect(() => compileDefinition({ nodes: [{ name: "A", rule: { kind: "var", name: "Z" } }] })).toThrow(/node Z is used in the rule of A but has no rule/);
-    expect(() => compileDefinition({ nodes: [{ name: "A", rule: { kind: "const", value: 0 } }, { name: "A", rule: { kind: "const", value: 1 } }] })).toThrow(/two rules/);
-    expect(() => compileDefinition({ nodes: [{ name: "not", rule: { kind: "const", value: 0 } }] })).toThrow(/not a valid node name/);
+    expect(() => compileDefinition({ nodes: [{ name: "A", rule: { kind: "var", name: "Z" } }] })).toThrow(
+      /node Z is used in the rule of A but has no rule/,
+    );
+    expect(() =>
+      compileDefinition({
+        nodes: [
+          { name: "A", rule: { kind: "const", value: 0 } },
+          { name: "A", rule: { kind: "const", value: 1 } },
+        ],
+      }),
+    ).toThrow(/two rules/);
+    expect(() => compileDefinition({ nodes: [{ name: "not", rule: { kind: "const", value: 0 } }] })).toThrow(
+      /not a valid node name/,
+    );
   });
 
   it("compileDefinition of the budding-yeast threshold model has the published seven fixed points and basin sizes", () => {

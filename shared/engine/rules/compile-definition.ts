@@ -3,15 +3,30 @@
 // Threshold semantics follow Li, Long, Lu, Ouyang, Tang, "The yeast cell-cycle network is robustly designed", PNAS 2004.
 import { EngineError } from "../errors";
 import { checkNetwork, type BooleanNetwork } from "../network";
-import { chainOperands, isValidNodeName, variablesOf, type Expr, type ModelDefinition, type RuleSyntax } from "./syntax";
+import {
+  chainOperands,
+  isValidNodeName,
+  variablesOf,
+  type Expr,
+  type ModelDefinition,
+  type RuleSyntax,
+} from "./syntax";
 
 /** Regulators of one rule as node indices in model order; a threshold rule with tie "keep" also reads its own node. */
-export function ruleRegulators(rule: RuleSyntax, self: number, indexOf: ReadonlyMap<string, number>, nodeName: string): number[] {
+export function ruleRegulators(
+  rule: RuleSyntax,
+  self: number,
+  indexOf: ReadonlyMap<string, number>,
+  nodeName: string,
+): number[] {
   const used = new Set<number>();
   for (const name of variablesOf(rule)) {
     const index = indexOf.get(name);
     if (index === undefined) {
-      throw new EngineError("UNDEFINED_NODE", `node ${name} is used in the rule of ${nodeName} but has no rule; add \`${name}' = ${name}\` to make it an input`);
+      throw new EngineError(
+        "UNDEFINED_NODE",
+        `node ${name} is used in the rule of ${nodeName} but has no rule; add \`${name}' = ${name}\` to make it an input`,
+      );
     }
     used.add(index);
   }
@@ -148,11 +163,17 @@ export function checkDefinition(model: ModelDefinition): void {
     seen.add(node.name);
     const rule = node.rule;
     if (rule.kind === "threshold") {
-      if (!Number.isSafeInteger(rule.offset)) throw new EngineError("BAD_RULE", `the offset of ${node.name} must be an integer`);
+      if (!Number.isSafeInteger(rule.offset))
+        throw new EngineError("BAD_RULE", `the offset of ${node.name} must be an integer`);
       const terms = new Set<string>();
       for (const t of rule.terms) {
-        if (!Number.isSafeInteger(t.weight) || t.weight === 0) throw new EngineError("BAD_RULE", `the weight of ${t.node} in the rule of ${node.name} must be a non-zero integer`);
-        if (terms.has(t.node)) throw new EngineError("BAD_RULE", `${t.node} has two weights in the rule of ${node.name}`);
+        if (!Number.isSafeInteger(t.weight) || t.weight === 0)
+          throw new EngineError(
+            "BAD_RULE",
+            `the weight of ${t.node} in the rule of ${node.name} must be a non-zero integer`,
+          );
+        if (terms.has(t.node))
+          throw new EngineError("BAD_RULE", `${t.node} has two weights in the rule of ${node.name}`);
         terms.add(t.node);
       }
     }
@@ -168,7 +189,11 @@ export function compileDefinition(model: ModelDefinition): BooleanNetwork {
   const tables: Uint8Array[] = [];
   model.nodes.forEach((node, self) => {
     const regs = ruleRegulators(node.rule, self, indexOf, node.name);
-    if (regs.length > 20) throw new EngineError("TOO_MANY_REGULATORS", `node ${node.name} reads ${regs.length} nodes; at most 20 are supported`);
+    if (regs.length > 20)
+      throw new EngineError(
+        "TOO_MANY_REGULATORS",
+        `node ${node.name} reads ${regs.length} nodes; at most 20 are supported`,
+      );
     const inputNames = regs.map((r) => names[r]!);
     let table: Uint8Array;
     if (node.rule.kind === "threshold") {

@@ -33,19 +33,24 @@ const next = (net: BooleanNetwork, i: number, s: number) => {
 describe("minimalSop", () => {
   it("minimalSop covers exactly the ones of random tables up to 13 inputs", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 13 }), fc.integer({ min: 1, max: 2 ** 31 }), fc.double({ min: 0, max: 1, noNaN: true }), (k, seed, p) => {
-        const rng = seedrandom(String(seed));
-        const table = Uint8Array.from({ length: 1 << k }, () => (rng() < p ? 1 : 0));
-        const cubes = minimalSop(table, k);
-        for (let row = 0; row < table.length; row++) expect(coverValue(cubes, row)).toBe(table[row]);
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 13 }),
+        fc.integer({ min: 1, max: 2 ** 31 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (k, seed, p) => {
+          const rng = seedrandom(String(seed));
+          const table = Uint8Array.from({ length: 1 << k }, () => (rng() < p ? 1 : 0));
+          const cubes = minimalSop(table, k);
+          for (let row = 0; row < table.length; row++) expect(coverValue(cubes, row)).toBe(table[row]);
+        },
+      ),
       { seed: 4301, numRuns: 120 },
     );
   });
 
   it("minimalSop finds the textbook minimum of the 3-input majority function (three two-literal terms)", () => {
     // common practice: majority(a, b, c) = ab + ac + bc is its unique minimal sum of products
-    const table = Uint8Array.from({ length: 8 }, (_, r) => (((r & 1) + ((r >> 1) & 1) + ((r >> 2) & 1)) >= 2 ? 1 : 0));
+    const table = Uint8Array.from({ length: 8 }, (_, r) => ((r & 1) + ((r >> 1) & 1) + ((r >> 2) & 1) >= 2 ? 1 : 0));
     expect(printExpr(tableToExpr(table, ["a", "b", "c"]))).toBe("a & b | a & c | b & c");
   });
 

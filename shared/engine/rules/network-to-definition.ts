@@ -27,7 +27,10 @@ export function networkToDefinition(net: BooleanNetwork): ModelDefinition {
   return {
     nodes: net.names.map((name, i) => ({
       name,
-      rule: tableToExpr(net.tables[i]!, Array.from(net.regulators[i]!, (r) => net.names[r]!)),
+      rule: tableToExpr(
+        net.tables[i]!,
+        Array.from(net.regulators[i]!, (r) => net.names[r]!),
+      ),
     })),
   };
 }

@@ -29,19 +29,37 @@ describe("parseRuleText", () => {
   it("readRuleText binds not tighter than and, and tighter than xor, and xor tighter than or", () => {
     expect(rhs("A | B & C")).toEqual({ kind: "or", left: v("A"), right: { kind: "and", left: v("B"), right: v("C") } });
     expect(rhs("A ^ B | C")).toEqual({ kind: "or", left: { kind: "xor", left: v("A"), right: v("B") }, right: v("C") });
-    expect(rhs("A & B ^ C")).toEqual({ kind: "xor", left: { kind: "and", left: v("A"), right: v("B") }, right: v("C") });
+    expect(rhs("A & B ^ C")).toEqual({
+      kind: "xor",
+      left: { kind: "and", left: v("A"), right: v("B") },
+      right: v("C"),
+    });
     expect(rhs("!A & B")).toEqual({ kind: "and", left: { kind: "not", arg: v("A") }, right: v("B") });
     expect(rhs("A xor b or C".replace("b", "B"))).toEqual(rhs("(A ^ B) | C"));
   });
 
   it("readRuleText groups equal operators from the left and accepts the words in any case", () => {
-    expect(rhs("A & B & C")).toEqual({ kind: "and", left: { kind: "and", left: v("A"), right: v("B") }, right: v("C") });
-    expect(rhs("A Or NOT b".replace("b", "B"))).toEqual({ kind: "or", left: v("A"), right: { kind: "not", arg: v("B") } });
-    expect(rhs("1 & (0 | A)")).toEqual({ kind: "and", left: { kind: "const", value: 1 }, right: { kind: "or", left: { kind: "const", value: 0 }, right: v("A") } });
+    expect(rhs("A & B & C")).toEqual({
+      kind: "and",
+      left: { kind: "and", left: v("A"), right: v("B") },
+      right: v("C"),
+    });
+    expect(rhs("A Or NOT b".replace("b", "B"))).toEqual({
+      kind: "or",
+      left: v("A"),
+      right: { kind: "not", arg: v("B") },
+    });
+    expect(rhs("1 & (0 | A)")).toEqual({
+      kind: "and",
+      left: { kind: "const", value: 1 },
+      right: { kind: "or", left: { kind: "const", value: 0 }, right: v("A") },
+    });
   });
 
   it("readRuleText reads threshold rules with signed integer weights, offset and tie behaviour", () => {
-    const def = readRuleText("Cdh1' = threshold(+1 Cdc14, -1 Clb2, -2 Clb5; offset -1; tie zero)\nCdc14' = Cdc14\nClb2' = Clb2\nClb5' = Clb5\nS' = THRESHOLD(1 Cdc14)\n");
+    const def = readRuleText(
+      "Cdh1' = threshold(+1 Cdc14, -1 Clb2, -2 Clb5; offset -1; tie zero)\nCdc14' = Cdc14\nClb2' = Clb2\nClb5' = Clb5\nS' = THRESHOLD(1 Cdc14)\n",
+    );
     expect(def.nodes[0]!.rule).toEqual({
       kind: "threshold",
       terms: [
@@ -52,7 +70,12 @@ describe("parseRuleText", () => {
       offset: -1,
       tie: "zero",
     });
-    expect(def.nodes[4]!.rule).toEqual({ kind: "threshold", terms: [{ weight: 1, node: "Cdc14" }], offset: 0, tie: "keep" });
+    expect(def.nodes[4]!.rule).toEqual({
+      kind: "threshold",
+      terms: [{ weight: 1, node: "Cdc14" }],
+      offset: 0,
+      tie: "keep",
+    });
   });
 
   it("parseRuleText reports every faulty line with its line, column and reason", () => {
@@ -90,13 +113,20 @@ describe("parseRuleText", () => {
   });
 
   it("parseRuleText refuses nesting deeper than 500 levels instead of exhausting the stack", () => {
-    expect(parseRuleText(`A' = ${"(".repeat(100_000)}A${")".repeat(100_000)}`).errors[0]!.reason).toBe("the expression is nested more than 500 levels deep");
-    expect(parseRuleText(`A' = ${"!".repeat(100_000)}A`).errors[0]!.reason).toBe("the expression is nested more than 500 levels deep");
+    expect(parseRuleText(`A' = ${"(".repeat(100_000)}A${")".repeat(100_000)}`).errors[0]!.reason).toBe(
+      "the expression is nested more than 500 levels deep",
+    );
+    expect(parseRuleText(`A' = ${"!".repeat(100_000)}A`).errors[0]!.reason).toBe(
+      "the expression is nested more than 500 levels deep",
+    );
   });
 
   it("readRuleText, printRuleText and compileDefinition handle a chain of 100000 terms", () => {
     const names = Array.from({ length: 16 }, (_, i) => `g${i}`);
-    const terms = Array.from({ length: 100_000 }, (_, t) => `${t % 3 ? "!" : ""}${names[t % 16]} & ${names[(t * 7 + 3) % 16]}`);
+    const terms = Array.from(
+      { length: 100_000 },
+      (_, t) => `${t % 3 ? "!" : ""}${names[t % 16]} & ${names[(t * 7 + 3) % 16]}`,
+    );
     const text = `${names.map((n) => `${n}' = ${n}`).join("\n")}\nX' = ${terms.join(" | ")}\n`;
     const model = readRuleText(text);
     expect(printRuleText(model)).toBe(text);
@@ -104,18 +134,31 @@ describe("parseRuleText", () => {
   });
 
   it("readRuleText throws the first error and counts the others", () => {
-    expect(() => readRuleText("A' = \nB' = ")).toThrow(/missing expression after A' = \(and 1 more error\) \(line 1, column 6\)/);
+    expect(() => readRuleText("A' = \nB' = ")).toThrow(
+      /missing expression after A' = \(and 1 more error\) \(line 1, column 6\)/,
+    );
   });
 
   it("parseRuleText keeps source positions on the parsed rules for the editor", () => {
     const { rules } = parseRuleText("\n  A' = !B\nB' = A");
-    expect(rules[0]).toMatchObject({ name: "A", line: 2, column: 3, rule: { kind: "not", pos: { line: 2, column: 8 }, arg: { pos: { line: 2, column: 9 } } } });
+    expect(rules[0]).toMatchObject({
+      name: "A",
+      line: 2,
+      column: 3,
+      rule: { kind: "not", pos: { line: 2, column: 8 }, arg: { pos: { line: 2, column: 9 } } },
+    });
   });
 
   it("readRuleText reads the example of docs/rule-text.md", () => {
     const doc = readFileSync(new URL("../../../docs/rule-text.md", import.meta.url), "utf8");
     const example = /```\n([\s\S]*?)```/.exec(doc)![1]!;
-    expect(readRuleText(example).nodes.map((n) => n.name)).toEqual(["Signal", "Kinase", "Phosphatase", "Stress", "Arrest"]);
+    expect(readRuleText(example).nodes.map((n) => n.name)).toEqual([
+      "Signal",
+      "Kinase",
+      "Phosphatase",
+      "Stress",
+      "Arrest",
+    ]);
   });
 
   it("parseRuleText(printRuleText(m)) gives back m for random models", () => {

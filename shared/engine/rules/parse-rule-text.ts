@@ -100,7 +100,11 @@ class LineParser {
     this.expect("equals", `after ${target.text}'`);
     const first = this.peek();
     let rule: RuleSyntax;
-    if (first.kind === "name" && first.text.toLowerCase() === "threshold" && this.tokens[this.i + 1]?.kind === "lparen") {
+    if (
+      first.kind === "name" &&
+      first.text.toLowerCase() === "threshold" &&
+      this.tokens[this.i + 1]?.kind === "lparen"
+    ) {
       rule = this.parseThreshold();
     } else {
       if (first.kind === "end") throw new LineError(first.column, `missing expression after ${target.text}' =`);
@@ -108,14 +112,16 @@ class LineParser {
     }
     const rest = this.peek();
     if (rest.kind !== "end") {
-      const reason = rest.kind === "rparen" ? `unmatched ")"` : `unexpected ${describe(rest)} after a complete expression`;
+      const reason =
+        rest.kind === "rparen" ? `unmatched ")"` : `unexpected ${describe(rest)} after a complete expression`;
       throw new LineError(rest.column, reason);
     }
     return { name: target.text, line: this.line, column: target.column, rule };
   }
 
   private checkName(t: Token): void {
-    if (RESERVED_WORDS.has(t.text.toLowerCase())) throw new LineError(t.column, `"${t.text}" is a reserved word and cannot name a node`);
+    if (RESERVED_WORDS.has(t.text.toLowerCase()))
+      throw new LineError(t.column, `"${t.text}" is a reserved word and cannot name a node`);
   }
 
   private parseBinary(op: BinaryOp, operand: () => Expr): Expr {
@@ -137,7 +143,8 @@ class LineParser {
   private parseUnary = (): Expr => {
     const t = this.peek();
     // Nesting is bounded so that hostile input cannot exhaust the call stack.
-    if (++this.depth > MAX_NESTING) throw new LineError(t.column, `the expression is nested more than ${MAX_NESTING} levels deep`);
+    if (++this.depth > MAX_NESTING)
+      throw new LineError(t.column, `the expression is nested more than ${MAX_NESTING} levels deep`);
     try {
       if (t.kind === "not") {
         this.next();
@@ -158,12 +165,14 @@ class LineParser {
         }
         return { kind: "var", name: t.text, pos: this.pos(t) };
       case "number":
-        if (t.text !== "0" && t.text !== "1") throw new LineError(t.column, `constant ${t.text} is not Boolean; use 0 or 1`);
+        if (t.text !== "0" && t.text !== "1")
+          throw new LineError(t.column, `constant ${t.text} is not Boolean; use 0 or 1`);
         return { kind: "const", value: t.text === "1" ? 1 : 0, pos: this.pos(t) };
       case "lparen": {
         const inner = this.parseOr();
         const close = this.peek();
-        if (close.kind !== "rparen") throw new LineError(close.column, `missing ")" to close "(" at column ${t.column}`);
+        if (close.kind !== "rparen")
+          throw new LineError(close.column, `missing ")" to close "(" at column ${t.column}`);
         this.next();
         return inner;
       }
@@ -195,13 +204,15 @@ class LineParser {
     if (this.peek().kind !== "semicolon" && this.peek().kind !== "rparen") {
       for (;;) {
         const start = this.peek();
-        if (start.kind === "name") throw new LineError(start.column, `write a weight before ${start.text}, e.g. +1 ${start.text}`);
+        if (start.kind === "name")
+          throw new LineError(start.column, `write a weight before ${start.text}, e.g. +1 ${start.text}`);
         const weight = this.parseSignedInteger("as a weight");
         const node = this.expect("name", "after the weight");
         this.checkName(node);
         if (weight === 0) throw new LineError(start.column, `weight 0 has no effect; remove the term for ${node.text}`);
         const earlier = seen.get(node.text);
-        if (earlier !== undefined) throw new LineError(node.column, `${node.text} already has a weight (column ${earlier})`);
+        if (earlier !== undefined)
+          throw new LineError(node.column, `${node.text} already has a weight (column ${earlier})`);
         seen.set(node.text, node.column);
         terms.push({ weight, node: node.text, pos: this.pos(node) });
         if (this.peek().kind !== "comma") break;
@@ -221,7 +232,8 @@ class LineParser {
         if (tie !== undefined) throw new LineError(key.column, `tie is given twice`);
         const value = this.expect("name", "after tie (keep or zero)");
         const v = value.text.toLowerCase();
-        if (v !== "keep" && v !== "zero") throw new LineError(value.column, `tie must be keep or zero, found "${value.text}"`);
+        if (v !== "keep" && v !== "zero")
+          throw new LineError(value.column, `tie must be keep or zero, found "${value.text}"`);
         tie = v;
       } else {
         throw new LineError(key.column, `unknown threshold option "${key.text}"; use offset or tie`);
@@ -229,7 +241,10 @@ class LineParser {
     }
     const close = this.peek();
     if (close.kind !== "rparen") {
-      const reason = close.kind === "end" ? `missing ")" to close threshold(` : `expected "," or ";" or ")" in threshold(...), found ${describe(close)}`;
+      const reason =
+        close.kind === "end"
+          ? `missing ")" to close threshold(`
+          : `expected "," or ";" or ")" in threshold(...), found ${describe(close)}`;
       throw new LineError(close.column, reason);
     }
     this.next();
@@ -267,7 +282,8 @@ export function parseRuleText(text: string): RuleTextResult {
     const name = m[2]!;
     const earlier = firstTarget.get(name);
     if (earlier === undefined) firstTarget.set(name, index + 1);
-    else errors.push(new ParseError(`duplicate rule for ${name} (first on line ${earlier})`, index + 1, m[1]!.length + 1));
+    else
+      errors.push(new ParseError(`duplicate rule for ${name} (first on line ${earlier})`, index + 1, m[1]!.length + 1));
   });
   const reported = new Set<string>();
   for (const r of rules) {
@@ -275,13 +291,19 @@ export function parseRuleText(text: string): RuleTextResult {
       if (firstTarget.has(use.name) || reported.has(use.name)) continue;
       reported.add(use.name);
       errors.push(
-        new ParseError(`node ${use.name} is used on line ${use.pos.line} but has no rule; add \`${use.name}' = ${use.name}\` to make it an input`, use.pos.line, use.pos.column),
+        new ParseError(
+          `node ${use.name} is used on line ${use.pos.line} but has no rule; add \`${use.name}' = ${use.name}\` to make it an input`,
+          use.pos.line,
+          use.pos.column,
+        ),
       );
     }
   }
-  if (errors.length === 0 && rules.length === 0) errors.push(new ParseError("the text has no rules; write one line per node, e.g. A' = !B", 1, 1));
+  if (errors.length === 0 && rules.length === 0)
+    errors.push(new ParseError("the text has no rules; write one line per node, e.g. A' = !B", 1, 1));
   errors.sort((a, b) => a.line - b.line || a.column - b.column);
-  const definition = errors.length === 0 ? { nodes: rules.map((r) => ({ name: r.name, rule: stripPositions(r.rule) })) } : null;
+  const definition =
+    errors.length === 0 ? { nodes: rules.map((r) => ({ name: r.name, rule: stripPositions(r.rule) })) } : null;
   return { definition, errors, rules };
 }
 

@@ -44,7 +44,10 @@ export function printRule(rule: RuleSyntax): string {
 export function printRuleText(model: ModelDefinition): string {
   for (const node of model.nodes) {
     if (!isValidNodeName(node.name)) {
-      throw new EngineError("BAD_NAME", `node name "${node.name}" cannot be written as rule text (use letters, digits and _, not starting with a digit, not a reserved word)`);
+      throw new EngineError(
+        "BAD_NAME",
+        `node name "${node.name}" cannot be written as rule text (use letters, digits and _, not starting with a digit, not a reserved word)`,
+      );
     }
   }
   return model.nodes.map((n) => `${n.name}' = ${printRule(n.rule)}\n`).join("");

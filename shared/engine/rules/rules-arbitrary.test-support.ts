@@ -16,7 +16,9 @@ export function exprArb(names: readonly string[], depth = 4): fc.Arbitrary<Expr>
     { weight: 1, arbitrary: sub.map((arg): Expr => ({ kind: "not", arg })) },
     {
       weight: 3,
-      arbitrary: fc.tuple(fc.constantFrom("and", "or", "xor") as fc.Arbitrary<"and" | "or" | "xor">, sub, sub).map(([kind, left, right]): Expr => ({ kind, left, right })),
+      arbitrary: fc
+        .tuple(fc.constantFrom("and", "or", "xor") as fc.Arbitrary<"and" | "or" | "xor">, sub, sub)
+        .map(([kind, left, right]): Expr => ({ kind, left, right })),
     },
   );
 }
@@ -25,11 +27,19 @@ export function ruleArb(names: readonly string[]): fc.Arbitrary<RuleSyntax> {
   const threshold = fc
     .tuple(
       fc.shuffledSubarray([...names], { minLength: 0, maxLength: names.length }),
-      fc.array(fc.integer({ min: -3, max: 3 }).filter((w) => w !== 0), { minLength: names.length, maxLength: names.length }),
+      fc.array(
+        fc.integer({ min: -3, max: 3 }).filter((w) => w !== 0),
+        { minLength: names.length, maxLength: names.length },
+      ),
       fc.integer({ min: -2, max: 2 }),
       fc.constantFrom<"keep" | "zero">("keep", "zero"),
     )
-    .map(([nodes, weights, offset, tie]): RuleSyntax => ({ kind: "threshold", terms: nodes.map((node, i) => ({ weight: weights[i]!, node })), offset, tie }));
+    .map(([nodes, weights, offset, tie]): RuleSyntax => ({
+      kind: "threshold",
+      terms: nodes.map((node, i) => ({ weight: weights[i]!, node })),
+      offset,
+      tie,
+    }));
   return fc.oneof({ weight: 4, arbitrary: exprArb(names) }, { weight: 1, arbitrary: threshold });
 }
 
@@ -37,5 +47,9 @@ export function ruleArb(names: readonly string[]): fc.Arbitrary<RuleSyntax> {
 export function modelArb(maxNodes = 6): fc.Arbitrary<ModelDefinition> {
   return fc
     .shuffledSubarray(NAME_POOL, { minLength: 1, maxLength: maxNodes })
-    .chain((names) => fc.tuple(...names.map(() => ruleArb(names))).map((rules) => ({ nodes: names.map((name, i) => ({ name, rule: rules[i]! })) })));
+    .chain((names) =>
+      fc
+        .tuple(...names.map(() => ruleArb(names)))
+        .map((rules) => ({ nodes: names.map((name, i) => ({ name, rule: rules[i]! })) })),
+    );
 }

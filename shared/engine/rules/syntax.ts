@@ -96,7 +96,12 @@ export function variablesOf(rule: RuleSyntax): string[] {
 /** A copy of a rule without source positions, so parsed and built definitions compare equal. */
 export function stripPositions(rule: RuleSyntax): RuleSyntax {
   if (rule.kind === "threshold") {
-    return { kind: "threshold", terms: rule.terms.map((t) => ({ weight: t.weight, node: t.node })), offset: rule.offset, tie: rule.tie };
+    return {
+      kind: "threshold",
+      terms: rule.terms.map((t) => ({ weight: t.weight, node: t.node })),
+      offset: rule.offset,
+      tie: rule.tie,
+    };
   }
   return stripExpr(rule);
 }

@@ -69,7 +69,11 @@ export function tokenizeLine(line: string): TokenizeResult {
     if (isDigit(c)) {
       while (i < line.length && isDigit(line[i]!)) i++;
       if (i < line.length && isNameStart(line[i]!)) {
-        return { ok: false, column: start + 1, reason: `a name cannot start with a digit ("${line.slice(start).match(/^[A-Za-z0-9_]+/)![0]}")` };
+        return {
+          ok: false,
+          column: start + 1,
+          reason: `a name cannot start with a digit ("${line.slice(start).match(/^[A-Za-z0-9_]+/)![0]}")`,
+        };
       }
       tokens.push({ kind: "number", text: line.slice(start, i), column: start + 1 });
       continue;

@@ -9,16 +9,26 @@ import { satCycles, satFixedPoints, tableFormula } from "./index";
 describe("sat", () => {
   it("tableFormula is true exactly on the rows where the truth table is 1", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 4 }).chain((k) => fc.tuple(fc.constant(k), fc.array(fc.integer({ min: 0, max: 1 }), { minLength: 1 << k, maxLength: 1 << k }))), ([k, rows]) => {
-        const names = Array.from({ length: k }, (_, j) => `v${j}`);
-        const formula = tableFormula(Uint8Array.from(rows), names);
-        const solver = new Logic.Solver();
-        solver.require(Logic.equiv("out", formula));
-        for (let r = 0; r < 1 << k; r++) {
-          const row = Logic.and(names.map((name, j) => ((r >> j) & 1 ? name : Logic.not(name))));
-          expect(solver.solveAssuming(row)!.evaluate("out")).toBe(rows[r] === 1);
-        }
-      }),
+      fc.property(
+        fc
+          .integer({ min: 0, max: 4 })
+          .chain((k) =>
+            fc.tuple(
+              fc.constant(k),
+              fc.array(fc.integer({ min: 0, max: 1 }), { minLength: 1 << k, maxLength: 1 << k }),
+            ),
+          ),
+        ([k, rows]) => {
+          const names = Array.from({ length: k }, (_, j) => `v${j}`);
+          const formula = tableFormula(Uint8Array.from(rows), names);
+          const solver = new Logic.Solver();
+          solver.require(Logic.equiv("out", formula));
+          for (let r = 0; r < 1 << k; r++) {
+            const row = Logic.and(names.map((name, j) => ((r >> j) & 1 ? name : Logic.not(name))));
+            expect(solver.solveAssuming(row)!.evaluate("out")).toBe(rows[r] === 1);
+          }
+        },
+      ),
       { seed: 41, numRuns: 30 },
     );
   });

@@ -49,7 +49,8 @@ export function satCycles(net: BooleanNetwork, maxLength: number, options: SatOp
     const solver = new Logic.Solver();
     for (let t = 0; t < L; t++) {
       const inputs = (i: number) => Array.from(net.regulators[i]!, (r) => v(t, r));
-      for (let i = 0; i < n; i++) solver.require(Logic.equiv(v((t + 1) % L, i), tableFormula(net.tables[i]!, inputs(i))));
+      for (let i = 0; i < n; i++)
+        solver.require(Logic.equiv(v((t + 1) % L, i), tableFormula(net.tables[i]!, inputs(i))));
     }
     // A period d < L divides L / p for some prime p of L, so x_0 != x_{L/p} for each such p leaves exact length L.
     for (const p of primeFactors(L)) {
@@ -68,7 +69,8 @@ export function satCycles(net: BooleanNetwork, maxLength: number, options: SatOp
         for (let i = 0; i < n; i++) s += map[v(t, i)] ? "1" : "0";
         states.push(s);
       }
-      for (const s of states) solver.require(Logic.or(Array.from({ length: n }, (_, i) => (s[i] === "1" ? Logic.not(v(0, i)) : v(0, i)))));
+      for (const s of states)
+        solver.require(Logic.or(Array.from({ length: n }, (_, i) => (s[i] === "1" ? Logic.not(v(0, i)) : v(0, i)))));
       cycles.push({ length: L, states: rotateToSmallest(states, (a, b) => a < b) });
     }
   }
@@ -83,5 +85,7 @@ export function satFixedPoints(net: BooleanNetwork, options: SatOptions = {}): {
 }
 
 function sortCycles(cycles: SatCycle[]): SatCycle[] {
-  return cycles.sort((a, b) => a.length - b.length || (a.states[0]! < b.states[0]! ? -1 : a.states[0]! > b.states[0]! ? 1 : 0));
+  return cycles.sort(
+    (a, b) => a.length - b.length || (a.states[0]! < b.states[0]! ? -1 : a.states[0]! > b.states[0]! ? 1 : 0),
+  );
 }

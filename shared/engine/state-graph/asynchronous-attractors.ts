@@ -26,7 +26,11 @@ export interface AsynchronousAnalysis {
 
 export function asynchronousAttractors(net: BooleanNetwork, options: LongTaskOptions = {}): AsynchronousAnalysis {
   const n = net.names.length;
-  if (n > MAX_ASYNC_NODES) throw new EngineError("TOO_LARGE", `exact asynchronous analysis supports at most ${MAX_ASYNC_NODES} nodes; this network has ${n}`);
+  if (n > MAX_ASYNC_NODES)
+    throw new EngineError(
+      "TOO_LARGE",
+      `exact asynchronous analysis supports at most ${MAX_ASYNC_NODES} nodes; this network has ${n}`,
+    );
   const { onProgress, shouldStop } = options;
   // The synchronous image tells, for each state, which nodes disagree with their function: those are the flips.
   const image = successorTable(net, { shouldStop });

@@ -8,14 +8,26 @@ export const FAURE_NAMES = ["CycD", "Rb", "E2F", "CycE", "CycA", "p27", "Cdc20",
 type V = Record<string, boolean>;
 const RULES: [string[], (v: V) => boolean][] = [
   [["CycD"], (v) => v.CycD!],
-  [["CycD", "CycE", "CycA", "CycB", "p27"], (v) => (!v.CycD && !v.CycE && !v.CycA && !v.CycB) || (v.p27! && !v.CycD && !v.CycB)],
+  [
+    ["CycD", "CycE", "CycA", "CycB", "p27"],
+    (v) => (!v.CycD && !v.CycE && !v.CycA && !v.CycB) || (v.p27! && !v.CycD && !v.CycB),
+  ],
   [["Rb", "CycA", "CycB", "p27"], (v) => (!v.Rb && !v.CycA && !v.CycB) || (v.p27! && !v.Rb && !v.CycB)],
   [["E2F", "Rb"], (v) => v.E2F! && !v.Rb],
-  [["E2F", "Rb", "Cdc20", "Cdh1", "UbcH10", "CycA"], (v) => (v.E2F! || v.CycA!) && !v.Rb && !v.Cdc20 && !(v.Cdh1 && v.UbcH10)],
-  [["CycD", "CycE", "CycA", "CycB", "p27"], (v) => (!v.CycD && !v.CycE && !v.CycA && !v.CycB) || (v.p27! && !(v.CycE && v.CycA) && !v.CycB && !v.CycD)],
+  [
+    ["E2F", "Rb", "Cdc20", "Cdh1", "UbcH10", "CycA"],
+    (v) => (v.E2F! || v.CycA!) && !v.Rb && !v.Cdc20 && !(v.Cdh1 && v.UbcH10),
+  ],
+  [
+    ["CycD", "CycE", "CycA", "CycB", "p27"],
+    (v) => (!v.CycD && !v.CycE && !v.CycA && !v.CycB) || (v.p27! && !(v.CycE && v.CycA) && !v.CycB && !v.CycD),
+  ],
   [["CycB"], (v) => v.CycB!],
   [["CycA", "CycB", "Cdc20", "p27"], (v) => (!v.CycA && !v.CycB) || v.Cdc20! || (v.p27! && !v.CycB)],
-  [["Cdh1", "UbcH10", "Cdc20", "CycA", "CycB"], (v) => !v.Cdh1 || (v.Cdh1! && v.UbcH10! && (v.Cdc20! || v.CycA! || v.CycB!))],
+  [
+    ["Cdh1", "UbcH10", "Cdc20", "CycA", "CycB"],
+    (v) => !v.Cdh1 || (v.Cdh1! && v.UbcH10! && (v.Cdc20! || v.CycA! || v.CycB!)),
+  ],
   [["Cdc20", "Cdh1"], (v) => !v.Cdc20 && !v.Cdh1],
 ];
 

@@ -4,7 +4,13 @@ import seedrandom from "seedrandom";
 import { networkFromFunctions } from "../network";
 import { CancelledError } from "../errors";
 import { randomNK, slowSuccessor, text } from "../update/random-networks.test-support";
-import { analyseSynchronous, asynchronousAttractors, attractorsAsText, forEachBasinState, sampleAttractors } from "./index";
+import {
+  analyseSynchronous,
+  asynchronousAttractors,
+  attractorsAsText,
+  forEachBasinState,
+  sampleAttractors,
+} from "./index";
 import { yeastCellCycle } from "./yeast-cell-cycle.test-support";
 import { faureCellCycle } from "./faure-cell-cycle.test-support";
 
@@ -64,7 +70,11 @@ function referenceAsynchronous(net: ReturnType<typeof randomNK>): string[][] {
   return [...groups.values()].sort((a, b) => b.length - a.length || (a[0]! < b[0]! ? -1 : 1));
 }
 
-const smallNetwork = fc.record({ n: fc.integer({ min: 1, max: 9 }), k: fc.integer({ min: 0, max: 4 }), seed: fc.integer() });
+const smallNetwork = fc.record({
+  n: fc.integer({ min: 1, max: 9 }),
+  k: fc.integer({ min: 0, max: 4 }),
+  seed: fc.integer(),
+});
 
 describe("state-graph", () => {
   it("analyseSynchronous finds the same attractors, basins, order and per-state transients as path-following reference", () => {
@@ -73,9 +83,12 @@ describe("state-graph", () => {
         const net = randomNK(n, k, seed);
         const fast = analyseSynchronous(net);
         const ref = referenceSynchronous(net);
-        expect(attractorsAsText(fast)).toEqual(ref.sorted.map((a) => ({ length: a.states.length, basin: a.basin, states: a.states })));
+        expect(attractorsAsText(fast)).toEqual(
+          ref.sorted.map((a) => ({ length: a.states.length, basin: a.basin, states: a.states })),
+        );
         expect(Array.from(fast.transient)).toEqual(ref.transient);
-        for (let s = 0; s < 2 ** n; s++) expect(text(fast.attractors[fast.attractorOf[s]!]!.states[0]!, n)).toBe(ref.attractorKey[s]);
+        for (let s = 0; s < 2 ** n; s++)
+          expect(text(fast.attractors[fast.attractorOf[s]!]!.states[0]!, n)).toBe(ref.attractorKey[s]);
         expect(fast.maxTransient).toBe(Math.max(...ref.transient));
         expect(fast.meanTransient).toBeCloseTo(ref.transient.reduce((a, b) => a + b, 0) / 2 ** n, 10);
       }),
@@ -134,11 +147,14 @@ describe("state-graph", () => {
 
   it("asynchronousAttractors equals the terminal components found by breadth-first reachability", () => {
     fc.assert(
-      fc.property(fc.record({ n: fc.integer({ min: 1, max: 8 }), k: fc.integer({ min: 0, max: 3 }), seed: fc.integer() }), ({ n, k, seed }) => {
-        const net = randomNK(n, k, seed);
-        const fast = asynchronousAttractors(net).attractors.map((a) => Array.from(a.states, (s) => text(s, n)));
-        expect(fast).toEqual(referenceAsynchronous(net));
-      }),
+      fc.property(
+        fc.record({ n: fc.integer({ min: 1, max: 8 }), k: fc.integer({ min: 0, max: 3 }), seed: fc.integer() }),
+        ({ n, k, seed }) => {
+          const net = randomNK(n, k, seed);
+          const fast = asynchronousAttractors(net).attractors.map((a) => Array.from(a.states, (s) => text(s, n)));
+          expect(fast).toEqual(referenceAsynchronous(net));
+        },
+      ),
       { seed: 33, numRuns: 100 },
     );
   });
@@ -150,7 +166,8 @@ describe("state-graph", () => {
     for (const fp of sync.attractors.filter((a) => a.length === 1)) {
       expect(asyncAttractors.some((a) => a.size === 1 && a.states[0] === fp.states[0])).toBe(true);
     }
-    for (const a of asyncAttractors.filter((x) => x.size === 1)) expect(slowSuccessor(net, a.states[0]!)).toBe(a.states[0]);
+    for (const a of asyncAttractors.filter((x) => x.size === 1))
+      expect(slowSuccessor(net, a.states[0]!)).toBe(a.states[0]);
   });
 
   it("asynchronousAttractors of the yeast cell-cycle model are its seven fixed points", () => {
@@ -167,7 +184,10 @@ describe("state-graph", () => {
     // asynchronous update. All three values from memory; the rules are transcribed from a fixture written from memory.
     const net = faureCellCycle();
     const sync = attractorsAsText(analyseSynchronous(net));
-    expect(sync.map((a) => [a.length, a.basin])).toEqual([[1, 512], [7, 512]]);
+    expect(sync.map((a) => [a.length, a.basin])).toEqual([
+      [1, 512],
+      [7, 512],
+    ]);
     expect(sync[0]!.states).toEqual(["0100010100"]);
     const asyncAttractors = asynchronousAttractors(net).attractors;
     expect(asyncAttractors.map((a) => a.size)).toEqual([112, 1]);

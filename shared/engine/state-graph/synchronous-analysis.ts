@@ -107,7 +107,10 @@ export function analyseSynchronous(net: BooleanNetwork, options: LongTaskOptions
     }
     return { id: i + 1, attractor: { length: states.length, basin: basin[i + 1]!, states } };
   });
-  found.sort((p, q) => q.attractor.basin - p.attractor.basin || compareStateIndices(p.attractor.states[0]!, q.attractor.states[0]!, n));
+  found.sort(
+    (p, q) =>
+      q.attractor.basin - p.attractor.basin || compareStateIndices(p.attractor.states[0]!, q.attractor.states[0]!, n),
+  );
   const remap = new Int32Array(cycleEntry.length + 1);
   found.forEach((f, index) => (remap[f.id] = index));
   for (let s = 0; s < N; s++) label[s] = remap[label[s]!]!;
@@ -133,7 +136,11 @@ export function forEachBasinState(analysis: SynchronousAnalysis, index: number, 
 /** The attractors with their states written as node-ordered 0/1 text. */
 export function attractorsAsText(analysis: SynchronousAnalysis): { length: number; basin: number; states: string[] }[] {
   const n = analysis.nodeCount;
-  return analysis.attractors.map((a) => ({ length: a.length, basin: a.basin, states: Array.from(a.states, (s) => stateText(s, n)) }));
+  return analysis.attractors.map((a) => ({
+    length: a.length,
+    basin: a.basin,
+    states: Array.from(a.states, (s) => stateText(s, n)),
+  }));
 }
 
 function stateText(state: number, n: number): string {

@@ -4,20 +4,49 @@
 // self-degrading nodes (Cln3, Cln1,2, Swi5, Cdc20&Cdc14, Mcm1/SFF), which fall to 0; all weights are +1 or -1.
 import { networkFromFunctions, type BooleanNetwork } from "../network";
 
-export const YEAST_NAMES = ["Cln3", "MBF", "SBF", "Cln12", "Cdh1", "Swi5", "Cdc20_14", "Clb56", "Sic1", "Clb12", "Mcm1_SFF"];
+export const YEAST_NAMES = [
+  "Cln3",
+  "MBF",
+  "SBF",
+  "Cln12",
+  "Cdh1",
+  "Swi5",
+  "Cdc20_14",
+  "Clb56",
+  "Sic1",
+  "Clb12",
+  "Mcm1_SFF",
+];
 
 const EDGES: [string, string, number][] = [
-  ["Cln3", "MBF", 1], ["Cln3", "SBF", 1],
+  ["Cln3", "MBF", 1],
+  ["Cln3", "SBF", 1],
   ["SBF", "Cln12", 1],
   ["MBF", "Clb56", 1],
-  ["Cln12", "Sic1", -1], ["Cln12", "Cdh1", -1],
-  ["Clb56", "Sic1", -1], ["Clb56", "Cdh1", -1], ["Clb56", "Mcm1_SFF", 1], ["Clb56", "Clb12", 1],
-  ["Clb12", "Mcm1_SFF", 1], ["Clb12", "Cdc20_14", 1], ["Clb12", "Sic1", -1], ["Clb12", "Cdh1", -1],
-  ["Clb12", "SBF", -1], ["Clb12", "MBF", -1], ["Clb12", "Swi5", -1],
-  ["Mcm1_SFF", "Clb12", 1], ["Mcm1_SFF", "Cdc20_14", 1], ["Mcm1_SFF", "Swi5", 1],
-  ["Cdc20_14", "Swi5", 1], ["Cdc20_14", "Sic1", 1], ["Cdc20_14", "Cdh1", 1], ["Cdc20_14", "Clb56", -1], ["Cdc20_14", "Clb12", -1],
+  ["Cln12", "Sic1", -1],
+  ["Cln12", "Cdh1", -1],
+  ["Clb56", "Sic1", -1],
+  ["Clb56", "Cdh1", -1],
+  ["Clb56", "Mcm1_SFF", 1],
+  ["Clb56", "Clb12", 1],
+  ["Clb12", "Mcm1_SFF", 1],
+  ["Clb12", "Cdc20_14", 1],
+  ["Clb12", "Sic1", -1],
+  ["Clb12", "Cdh1", -1],
+  ["Clb12", "SBF", -1],
+  ["Clb12", "MBF", -1],
+  ["Clb12", "Swi5", -1],
+  ["Mcm1_SFF", "Clb12", 1],
+  ["Mcm1_SFF", "Cdc20_14", 1],
+  ["Mcm1_SFF", "Swi5", 1],
+  ["Cdc20_14", "Swi5", 1],
+  ["Cdc20_14", "Sic1", 1],
+  ["Cdc20_14", "Cdh1", 1],
+  ["Cdc20_14", "Clb56", -1],
+  ["Cdc20_14", "Clb12", -1],
   ["Swi5", "Sic1", 1],
-  ["Sic1", "Clb56", -1], ["Sic1", "Clb12", -1],
+  ["Sic1", "Clb56", -1],
+  ["Sic1", "Clb12", -1],
   ["Cdh1", "Clb12", -1],
 ];
 

@@ -27,7 +27,8 @@ export function canalizingInputs(net: BooleanNetwork): CanalizingInput[] {
           if (seen === -1) seen = table[row]!;
           else if (table[row] !== seen) constant = false;
         }
-        if (constant && seen !== -1) found.push({ node, position: j, regulator: regs[j]!, inputValue: a, output: seen as 0 | 1 });
+        if (constant && seen !== -1)
+          found.push({ node, position: j, regulator: regs[j]!, inputValue: a, output: seen as 0 | 1 });
       }
     }
   });

@@ -60,7 +60,7 @@ export function feedbackCircuits(net: BooleanNetwork, maxLength: number, maxCirc
   for (let start = 0; start < n && circuits.length < maxCircuits; start++) {
     if (maxLength >= n) {
       // Johnson: a vertex stays blocked while every path from it back to the start is known to meet the path.
-      for (let v = start; v < n; v++) (blocked[v] = 0), blockedBy[v]!.clear();
+      for (let v = start; v < n; v++) ((blocked[v] = 0), blockedBy[v]!.clear());
       const circuit = (v: number): boolean => {
         let closed = false;
         path.push(v);
@@ -86,7 +86,7 @@ export function feedbackCircuits(net: BooleanNetwork, maxLength: number, maxCirc
     const queue = [start];
     for (let h = 0; h < queue.length; h++) {
       const v = queue[h]!;
-      for (const u of into[v]!) if (u > start && distance[u] === -1) (distance[u] = distance[v]! + 1), queue.push(u);
+      for (const u of into[v]!) if (u > start && distance[u] === -1) ((distance[u] = distance[v]! + 1), queue.push(u));
     }
     const extend = (v: number): void => {
       for (const w of out[v]!) {

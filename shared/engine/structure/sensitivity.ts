@@ -8,7 +8,8 @@ import type { BooleanNetwork } from "../network";
 export function tableSensitivity(table: Uint8Array): number {
   const k = Math.log2(table.length);
   let flips = 0;
-  for (let row = 0; row < table.length; row++) for (let j = 0; j < k; j++) if (table[row] !== table[row ^ (1 << j)]) flips++;
+  for (let row = 0; row < table.length; row++)
+    for (let j = 0; j < k; j++) if (table[row] !== table[row ^ (1 << j)]) flips++;
   return flips / table.length;
 }
 

@@ -11,7 +11,11 @@ export function nodeValue(net: BooleanNetwork, node: number, state: Uint8Array):
 }
 
 /** Synchronous successor of `state`, written into `out` (which must not be `state`). Returns `out`. */
-export function synchronousStep(net: BooleanNetwork, state: Uint8Array, out: Uint8Array = new Uint8Array(state.length)): Uint8Array {
+export function synchronousStep(
+  net: BooleanNetwork,
+  state: Uint8Array,
+  out: Uint8Array = new Uint8Array(state.length),
+): Uint8Array {
   for (let i = 0; i < state.length; i++) out[i] = nodeValue(net, i, state);
   return out;
 }

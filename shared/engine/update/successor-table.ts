@@ -54,7 +54,11 @@ function compileBlockEvaluator(net: BooleanNetwork): BlockEvaluator {
  */
 export function successorTable(net: BooleanNetwork, options: LongTaskOptions = {}): Uint32Array {
   const n = net.names.length;
-  if (n > MAX_TABLE_NODES) throw new EngineError("TOO_LARGE", `exact state-space analysis supports at most ${MAX_TABLE_NODES} nodes; this network has ${n}`);
+  if (n > MAX_TABLE_NODES)
+    throw new EngineError(
+      "TOO_LARGE",
+      `exact state-space analysis supports at most ${MAX_TABLE_NODES} nodes; this network has ${n}`,
+    );
   const stateCount = 2 ** n;
   const out = new Uint32Array(stateCount);
   const { highRegs, words } = compileBlockEvaluator(net);

@@ -20,10 +20,12 @@ export interface TrajectoryOptions {
 /** States visited from `initial` (included as the first row), one byte per node each. */
 export function trajectory(net: BooleanNetwork, initial: Uint8Array, options: TrajectoryOptions): Uint8Array[] {
   const n = net.names.length;
-  if (initial.length !== n) throw new EngineError("BAD_STATE", `the initial state has ${initial.length} values but the network has ${n} nodes`);
+  if (initial.length !== n)
+    throw new EngineError("BAD_STATE", `the initial state has ${initial.length} values but the network has ${n} nodes`);
   const rows: Uint8Array[] = [Uint8Array.from(initial)];
   const { scheme, steps, rng } = options;
-  if (scheme !== "synchronous" && !rng) throw new EngineError("NEED_SEED", `the ${scheme} scheme needs a seeded random generator`);
+  if (scheme !== "synchronous" && !rng)
+    throw new EngineError("NEED_SEED", `the ${scheme} scheme needs a seeded random generator`);
   const seen = new Set<string>();
   if (options.stopAtRepeat) seen.add(initial.join(""));
   const order = Int32Array.from({ length: n }, (_, i) => i);

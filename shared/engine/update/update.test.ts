@@ -36,19 +36,25 @@ describe("update", () => {
   it("synchronousStep on bytes matches the successor table on the same state", () => {
     const net = randomNK(9, 3, 77);
     const table = successorTable(net);
-    for (let s = 0; s < 512; s++) expect(bytesToString(synchronousStep(net, bytesFromString(text(s, 9))))).toBe(text(table[s]!, 9));
+    for (let s = 0; s < 512; s++)
+      expect(bytesToString(synchronousStep(net, bytesFromString(text(s, 9))))).toBe(text(table[s]!, 9));
   });
 
   it("trajectory with the synchronous scheme follows the successor table and stops at the first repeat", () => {
     // A 3-node ring shifting values one place per step: 100 -> 010 -> 001 -> 100.
     const ring = networkFromFunctions(["a", "b", "c"], [[2], [0], [1]], (_n, x) => x[0]!);
-    const rows = trajectory(ring, bytesFromString("100"), { scheme: "synchronous", steps: 10, stopAtRepeat: true }).map(bytesToString);
+    const rows = trajectory(ring, bytesFromString("100"), { scheme: "synchronous", steps: 10, stopAtRepeat: true }).map(
+      bytesToString,
+    );
     expect(rows).toEqual(["100", "010", "001", "100"]);
   });
 
   it("trajectory with the general asynchronous scheme changes at most one node per step and is reproducible per seed", () => {
     const net = randomNK(12, 2, 3);
-    const run = (seed: string) => trajectory(net, new Uint8Array(12), { scheme: "general-asynchronous", steps: 200, rng: seedrandom(seed) }).map(bytesToString);
+    const run = (seed: string) =>
+      trajectory(net, new Uint8Array(12), { scheme: "general-asynchronous", steps: 200, rng: seedrandom(seed) }).map(
+        bytesToString,
+      );
     const a = run("x");
     expect(run("x")).toEqual(a);
     for (let t = 1; t < a.length; t++) {
@@ -81,6 +87,8 @@ describe("update", () => {
   });
 
   it("trajectory with an asynchronous scheme and no generator is refused", () => {
-    expect(() => trajectory(randomNK(3, 1, 1), new Uint8Array(3), { scheme: "random-order", steps: 1 })).toThrow(/seeded/);
+    expect(() => trajectory(randomNK(3, 1, 1), new Uint8Array(3), { scheme: "random-order", steps: 1 })).toThrow(
+      /seeded/,
+    );
   });
 });

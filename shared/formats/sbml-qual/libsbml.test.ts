@@ -16,10 +16,14 @@ import { writeSbmlQual } from "./write-sbml-qual";
 
 const PYTHON = "/usr/bin/python3";
 const fixtureDir = fileURLToPath(new URL("../../../tests/fixtures/sbml/", import.meta.url));
-const probe = spawnSync(PYTHON, ["-c", "import libsbml; print(libsbml.getLibSBMLDottedVersion())"], { encoding: "utf8" });
+const probe = spawnSync(PYTHON, ["-c", "import libsbml; print(libsbml.getLibSBMLDottedVersion())"], {
+  encoding: "utf8",
+});
 const hasLibSbml = probe.status === 0;
 if (!hasLibSbml) {
-  console.warn(`SKIPPED libSBML checks: ${PYTHON} cannot import libsbml (install Debian's python3-sbml5). ${probe.stderr ?? ""}`);
+  console.warn(
+    `SKIPPED libSBML checks: ${PYTHON} cannot import libsbml (install Debian's python3-sbml5). ${probe.stderr ?? ""}`,
+  );
 }
 
 interface FileReport {
@@ -42,7 +46,10 @@ function checkWithLibSbml(models: { name: string; text: string }[]): FileReport[
     writeFileSync(path, m.text);
     return path;
   });
-  const out = execFileSync(PYTHON, [join(fixtureDir, "check-with-libsbml.py"), ...paths], { encoding: "utf8", maxBuffer: 64 * 1024 * 1024 });
+  const out = execFileSync(PYTHON, [join(fixtureDir, "check-with-libsbml.py"), ...paths], {
+    encoding: "utf8",
+    maxBuffer: 64 * 1024 * 1024,
+  });
   return (JSON.parse(out) as { files: FileReport[] }).files;
 }
 
@@ -57,8 +64,12 @@ describe.skipIf(!hasLibSbml)("writeSbmlQual checked by libSBML", () => {
       // names that collide with the ids the writer would pick for the model, compartment and transitions
       { name: "clash", model: readRuleText("model' = cell\ncell' = !tr_cell\ntr_cell' = 1\n") },
     ];
-    fc.sample(modelArb(7), { seed: 4903, numRuns: 40 }).forEach((model, i) => models.push({ name: `random-${i}`, model }));
-    const reports = checkWithLibSbml(models.map((m) => ({ name: m.name, text: writeSbmlQual(m.model, { modelId: m.name }) })));
+    fc.sample(modelArb(7), { seed: 4903, numRuns: 40 }).forEach((model, i) =>
+      models.push({ name: `random-${i}`, model }),
+    );
+    const reports = checkWithLibSbml(
+      models.map((m) => ({ name: m.name, text: writeSbmlQual(m.model, { modelId: m.name }) })),
+    );
     reports.forEach((r, i) => {
       const model = models[i]!.model;
       expect(r.errors, r.file).toEqual([]);
@@ -75,6 +86,8 @@ describe.skipIf(!hasLibSbml)("writeSbmlQual checked by libSBML", () => {
     const fresh = readSbmlQual(readFileSync(join(outDir, "faure-2006-cell-cycle.libsbml.sbml"), "utf8"));
     const committed = readSbmlQual(readFileSync(join(fixtureDir, "faure-2006-cell-cycle.libsbml.sbml"), "utf8"));
     expect(compileDefinition(fresh.definition)).toEqual(compileDefinition(committed.definition));
-    expect(() => readSbmlQual(readFileSync(join(outDir, "multivalued.libsbml.sbml"), "utf8"))).toThrow(/species Kinase has maxLevel 2/);
+    expect(() => readSbmlQual(readFileSync(join(outDir, "multivalued.libsbml.sbml"), "utf8"))).toThrow(
+      /species Kinase has maxLevel 2/,
+    );
   });
 });

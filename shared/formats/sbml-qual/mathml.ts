@@ -58,7 +58,8 @@ function relation(r: (a: number, b: number) => boolean, x: Operand, y: Operand):
   const ys = y.expr ? [0, 1] : [y.value];
   const t = (a: number, b: number) => (r(xs[a]!, ys[b]!) ? 1 : 0);
   // One variable operand (or none): the result is a constant, the operand, or its negation.
-  const unary = (e: Expr | null, v0: number, v1: number): Expr => (v0 === v1 || !e ? (v0 ? TRUE : FALSE) : v1 ? e : not(e));
+  const unary = (e: Expr | null, v0: number, v1: number): Expr =>
+    v0 === v1 || !e ? (v0 ? TRUE : FALSE) : v1 ? e : not(e);
   if (!y.expr) return unary(x.expr, t(0, 0), t(xs.length - 1, 0));
   if (!x.expr) return unary(y.expr, t(0, 0), t(0, 1));
   const [a, b] = [x.expr, y.expr];
@@ -80,14 +81,18 @@ function relation(r: (a: number, b: number) => boolean, x: Operand, y: Operand):
 /** Read the content of a <math> element as a Boolean rule expression. */
 export function mathToExpr(math: XmlElement, ctx: MathContext): Expr {
   const body = math.children.filter((c) => c.name !== "annotation" && c.name !== "annotation-xml");
-  if (body.length !== 1) throw new EngineError("SBML_MATH", `${ctx.where}: <math> must hold exactly one expression, found ${body.length}`);
+  if (body.length !== 1)
+    throw new EngineError("SBML_MATH", `${ctx.where}: <math> must hold exactly one expression, found ${body.length}`);
   return asBool(read(body[0]!, ctx), ctx);
 }
 
 function asBool(v: Value, ctx: MathContext): Expr {
   if (v.kind !== "number") return v.expr;
   if (v.value === 0 || v.value === 1) return v.value ? TRUE : FALSE;
-  throw new EngineError("SBML_MATH", `${ctx.where}: the number ${v.value} is used where a true/false value is expected`);
+  throw new EngineError(
+    "SBML_MATH",
+    `${ctx.where}: the number ${v.value} is used where a true/false value is expected`,
+  );
 }
 
 function asOperand(v: Value): Operand {
@@ -105,7 +110,10 @@ function read(e: XmlElement, ctx: MathContext): Value {
       const threshold = ctx.inputThreshold(id);
       if (threshold !== undefined) return { kind: "number", value: threshold };
       if (ctx.isSpecies(id)) return { kind: "level", expr: { kind: "var", name: id } };
-      throw new EngineError("SBML_MATH", `${ctx.where}: <ci>${id}</ci> names neither a qualitative species nor an input`);
+      throw new EngineError(
+        "SBML_MATH",
+        `${ctx.where}: <ci>${id}</ci> names neither a qualitative species nor an input`,
+      );
     }
     case "cn": {
       const type = e.attrs["type"] ?? "real";
@@ -113,7 +121,8 @@ function read(e: XmlElement, ctx: MathContext): Value {
         throw new EngineError("SBML_MATH", `${ctx.where}: <cn type="${type}"> is not supported; write plain numbers`);
       }
       const value = Number(e.text);
-      if (e.text === "" || !Number.isFinite(value)) throw new EngineError("SBML_MATH", `${ctx.where}: <cn>${e.text}</cn> is not a number`);
+      if (e.text === "" || !Number.isFinite(value))
+        throw new EngineError("SBML_MATH", `${ctx.where}: <cn>${e.text}</cn> is not a number`);
       return { kind: "number", value };
     }
     case "apply":
@@ -124,7 +133,10 @@ function read(e: XmlElement, ctx: MathContext): Value {
       return read(first, ctx);
     }
     default:
-      throw new EngineError("SBML_MATH", `${ctx.where}: MathML <${e.name}> is not part of the Boolean subset Emulant reads`);
+      throw new EngineError(
+        "SBML_MATH",
+        `${ctx.where}: MathML <${e.name}> is not part of the Boolean subset Emulant reads`,
+      );
   }
 }
 
@@ -134,7 +146,11 @@ function readApply(e: XmlElement, ctx: MathContext): Value {
   const args = argElements.map((a) => read(a, ctx));
   const bools = () => args.map((a) => asBool(a, ctx));
   const arity = (n: number) => {
-    if (args.length !== n) throw new EngineError("SBML_MATH", `${ctx.where}: <${op.name}> takes ${n} argument${n === 1 ? "" : "s"}, found ${args.length}`);
+    if (args.length !== n)
+      throw new EngineError(
+        "SBML_MATH",
+        `${ctx.where}: <${op.name}> takes ${n} argument${n === 1 ? "" : "s"}, found ${args.length}`,
+      );
   };
   switch (op.name) {
     case "and":
@@ -153,11 +169,20 @@ function readApply(e: XmlElement, ctx: MathContext): Value {
     }
     default: {
       const r = RELATIONS[op.name];
-      if (!r) throw new EngineError("SBML_MATH", `${ctx.where}: MathML <${op.name}> is not part of the Boolean subset Emulant reads`);
-      if (args.length < 2) throw new EngineError("SBML_MATH", `${ctx.where}: <${op.name}> needs at least 2 arguments, found ${args.length}`);
+      if (!r)
+        throw new EngineError(
+          "SBML_MATH",
+          `${ctx.where}: MathML <${op.name}> is not part of the Boolean subset Emulant reads`,
+        );
+      if (args.length < 2)
+        throw new EngineError(
+          "SBML_MATH",
+          `${ctx.where}: <${op.name}> needs at least 2 arguments, found ${args.length}`,
+        );
       // A chain a < b < c means every adjacent pair holds (MathML 2.0, section 4.4.4).
       let result: Expr = TRUE;
-      for (let i = 0; i + 1 < args.length; i++) result = and(result, relation(r, asOperand(args[i]!), asOperand(args[i + 1]!)));
+      for (let i = 0; i + 1 < args.length; i++)
+        result = and(result, relation(r, asOperand(args[i]!), asOperand(args[i + 1]!)));
       return { kind: "bool", expr: result };
     }
   }
@@ -172,7 +197,13 @@ export function exprToMathMl(e: Expr, indent: string): string {
         lines.push(`${depth}<${x.value ? "true" : "false"}/>`);
         return;
       case "var":
-        lines.push(`${depth}<apply>`, `${depth}  <eq/>`, `${depth}  <ci> ${x.name} </ci>`, `${depth}  <cn type="integer"> 1 </cn>`, `${depth}</apply>`);
+        lines.push(
+          `${depth}<apply>`,
+          `${depth}  <eq/>`,
+          `${depth}  <ci> ${x.name} </ci>`,
+          `${depth}  <cn type="integer"> 1 </cn>`,
+          `${depth}</apply>`,
+        );
         return;
       case "not":
         lines.push(`${depth}<apply>`, `${depth}  <not/>`);

@@ -8,7 +8,8 @@ import { modelArb } from "../../engine/rules/rules-arbitrary.test-support";
 import { readSbmlQual } from "./read-sbml-qual";
 import { writeSbmlQual } from "./write-sbml-qual";
 
-const fixture = (name: string) => readFileSync(new URL(`../../../tests/fixtures/sbml/${name}`, import.meta.url), "utf8");
+const fixture = (name: string) =>
+  readFileSync(new URL(`../../../tests/fixtures/sbml/${name}`, import.meta.url), "utf8");
 
 function nextState(net: BooleanNetwork, s: number): number {
   let t = 0;
@@ -86,7 +87,8 @@ const wrap = (species: string, transitions: string) => `<?xml version="1.0" enco
     </layout:layout></layout:listOfLayouts>
   </model>
 </sbml>`;
-const sp = (id: string, extra = "") => `<qual:qualitativeSpecies qual:id="${id}" qual:compartment="c" qual:constant="false" qual:maxLevel="1" ${extra}/>`;
+const sp = (id: string, extra = "") =>
+  `<qual:qualitativeSpecies qual:id="${id}" qual:compartment="c" qual:constant="false" qual:maxLevel="1" ${extra}/>`;
 const tr = (id: string, out: string, terms: string, defaultLevel = 0, inputs = "") => `<qual:transition qual:id="${id}">
   <qual:listOfInputs>${inputs}</qual:listOfInputs>
   <qual:listOfOutputs><qual:output qual:qualitativeSpecies="${out}" qual:transitionEffect="assignmentLevel"/></qual:listOfOutputs>
@@ -126,7 +128,9 @@ describe("readSbmlQual", () => {
   });
 
   it("readSbmlQual refuses a multi-valued species and names it", () => {
-    expect(() => readSbmlQual(fixture("multivalued.libsbml.sbml"))).toThrow(/species Kinase has maxLevel 2; Emulant reads Boolean models only \(maxLevel 1\), so multi-valued species must be made Boolean first \(line 9\)$/);
+    expect(() => readSbmlQual(fixture("multivalued.libsbml.sbml"))).toThrow(
+      /species Kinase has maxLevel 2; Emulant reads Boolean models only \(maxLevel 1\), so multi-valued species must be made Boolean first \(line 9\)$/,
+    );
   });
 
   it("readSbmlQual reads every supported MathML operator and ignores the layout package", () => {
@@ -138,22 +142,39 @@ describe("readSbmlQual", () => {
         tr("t2", "R2", term(1, rel("neq", ci("A"), ci("B")))),
         tr("t3", "R3", term(1, rel("gt", ci("A"), ci("B")))),
         tr("t4", "R4", term(1, rel("leq", ci("A"), cn(0)))),
-        tr("t5", "R5", term(1, `<apply><xor/>${rel("geq", ci("A"), cn(1))}${rel("lt", ci("B"), cn(1))}<true/></apply>`)),
+        tr(
+          "t5",
+          "R5",
+          term(1, `<apply><xor/>${rel("geq", ci("A"), cn(1))}${rel("lt", ci("B"), cn(1))}<true/></apply>`),
+        ),
         tr("t6", "R6", term(1, `<apply><or/><false/>${rel("eq", cn(1), ci("A"))}</apply>`)),
         // first matching term wins: on when A, else off when B, else the default 1
         tr("t7", "R7", term(1, rel("eq", ci("A"), cn(1))) + term(0, rel("eq", ci("B"), cn(1))), 1),
-        tr("t8", "R8", term(1, rel("geq", ci("A"), ci("thA"))), 0, `<qual:input qual:id="thA" qual:qualitativeSpecies="A" qual:transitionEffect="none" qual:thresholdLevel="1"/>`),
+        tr(
+          "t8",
+          "R8",
+          term(1, rel("geq", ci("A"), ci("thA"))),
+          0,
+          `<qual:input qual:id="thA" qual:qualitativeSpecies="A" qual:transitionEffect="none" qual:thresholdLevel="1"/>`,
+        ),
       ].join(""),
     );
     const net = compileDefinition(readSbmlQual(text).definition);
     const expected = compileDefinition(
-      readRuleText("A' = A\nB' = B\nR1' = !A | B\nR2' = A ^ B\nR3' = A & !B\nR4' = !A\nR5' = !(A ^ !B)\nR6' = A\nR7' = A | !B\nR8' = A\n"),
+      readRuleText(
+        "A' = A\nB' = B\nR1' = !A | B\nR2' = A ^ B\nR3' = A & !B\nR4' = !A\nR5' = !(A ^ !B)\nR6' = A\nR7' = A | !B\nR8' = A\n",
+      ),
     );
     sameDynamics(expected, net);
   });
 
   it("readSbmlQual keeps constant species and species without a transition at their value, and reads names and initial levels", () => {
-    const text = wrap(sp("A", 'qual:initialLevel="1" qual:name="Antigen &amp; co"') + sp("K").replace('constant="false"', 'constant="true"') + sp("B"), tr("tK", "K", term(1, "<true/>")) + tr("tB", "B", term(1, rel("eq", ci("A"), cn(0)))));
+    const text = wrap(
+      sp("A", 'qual:initialLevel="1" qual:name="Antigen &amp; co"') +
+        sp("K").replace('constant="false"', 'constant="true"') +
+        sp("B"),
+      tr("tK", "K", term(1, "<true/>")) + tr("tB", "B", term(1, rel("eq", ci("A"), cn(0)))),
+    );
     const model = readSbmlQual(text);
     expect(printRuleText(model.definition)).toBe("A' = A\nK' = K\nB' = !A\n");
     expect(model.warnings).toEqual(["species K is constant, so tK is not used"]);
@@ -162,7 +183,7 @@ describe("readSbmlQual", () => {
   });
 
   it("readSbmlQual reports XML syntax errors with line and column, and refuses DTDs", () => {
-    const broken = "<?xml version=\"1.0\"?>\n<sbml level=\"3\">\n  <model>\n</sbml>";
+    const broken = '<?xml version="1.0"?>\n<sbml level="3">\n  <model>\n</sbml>';
     try {
       readSbmlQual(broken);
       expect.unreachable();
@@ -171,20 +192,26 @@ describe("readSbmlQual", () => {
       expect((e as ParseError).line).toBe(4);
       expect((e as ParseError).reason).toMatch(/XML syntax error: Expected closing tag 'model'/);
     }
-    expect(() => readSbmlQual('<?xml version="1.0"?>\n<!DOCTYPE sbml [<!ENTITY x "y">]>\n<sbml/>')).toThrow(/DOCTYPE declarations are not accepted in model files \(line 2, column 1\)/);
+    expect(() => readSbmlQual('<?xml version="1.0"?>\n<!DOCTYPE sbml [<!ENTITY x "y">]>\n<sbml/>')).toThrow(
+      /DOCTYPE declarations are not accepted in model files \(line 2, column 1\)/,
+    );
   });
 
   it("readSbmlQual names the transition when its math is outside the Boolean subset or names an unknown id", () => {
     const species = sp("A") + sp("B");
-    expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, `<apply><plus/>${ci("A")}${cn(1)}</apply>`))))).toThrow(
-      /transition tB: MathML <plus> is not part of the Boolean subset Emulant reads \(line 11\)$/,
+    expect(() =>
+      readSbmlQual(wrap(species, tr("tB", "B", term(1, `<apply><plus/>${ci("A")}${cn(1)}</apply>`)))),
+    ).toThrow(/transition tB: MathML <plus> is not part of the Boolean subset Emulant reads \(line 11\)$/);
+    expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, rel("eq", ci("Z"), cn(1))))))).toThrow(
+      /transition tB: <ci>Z<\/ci> names neither/,
     );
-    expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, rel("eq", ci("Z"), cn(1))))))).toThrow(/transition tB: <ci>Z<\/ci> names neither/);
-    expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, ci("A"))) + tr("tB2", "B", term(1, "<true/>"))))).toThrow(
-      /species B is the output of two transitions \(tB and tB2\)/,
-    );
+    expect(() =>
+      readSbmlQual(wrap(species, tr("tB", "B", term(1, ci("A"))) + tr("tB2", "B", term(1, "<true/>")))),
+    ).toThrow(/species B is the output of two transitions \(tB and tB2\)/);
     expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(3, "<true/>"))))).toThrow(EngineError);
-    expect(() => readSbmlQual('<?xml version="1.0"?><sbml level="2" version="4"><model/></sbml>')).toThrow(/needs SBML Level 3/);
+    expect(() => readSbmlQual('<?xml version="1.0"?><sbml level="2" version="4"><model/></sbml>')).toThrow(
+      /needs SBML Level 3/,
+    );
   });
 
   it("readSbmlQual refuses files above the size limit before parsing", () => {

@@ -40,7 +40,8 @@ interface SpeciesInfo {
 /** Read an SBML-qual document. Throws ParseError for XML syntax, EngineError (code SBML_ERROR / SBML_MATH) otherwise. */
 export function readSbmlQual(text: string): SbmlQualModel {
   const root = parseXml(text);
-  if (root.name !== "sbml") throw new ParseError(`the root element is <${root.name}>, not <sbml>`, root.line, root.column);
+  if (root.name !== "sbml")
+    throw new ParseError(`the root element is <${root.name}>, not <sbml>`, root.line, root.column);
   if (root.attrs["level"] !== undefined && root.attrs["level"] !== "3") {
     fail(`SBML-qual needs SBML Level 3; this file is Level ${root.attrs["level"]}`);
   }
@@ -57,10 +58,13 @@ export function readSbmlQual(text: string): SbmlQualModel {
   for (const el of speciesElements) {
     const id = el.attrs["id"] ?? fail(`a qualitative species has no id${whereIs(el)}`);
     if (byId.has(id)) fail(`species ${id} is declared twice${whereIs(el)}`);
-    if (!isValidNodeName(id)) fail(`species id ${id} cannot be a node name (it is a reserved word: and, or, not, xor, threshold)`);
+    if (!isValidNodeName(id))
+      fail(`species id ${id} cannot be a node name (it is a reserved word: and, or, not, xor, threshold)`);
     const maxLevel = level(el.attrs["maxLevel"], `maxLevel of species ${id}`);
     if (maxLevel !== undefined && maxLevel > 1) {
-      fail(`species ${id} has maxLevel ${maxLevel}; Emulant reads Boolean models only (maxLevel 1), so multi-valued species must be made Boolean first${whereIs(el)}`);
+      fail(
+        `species ${id} has maxLevel ${maxLevel}; Emulant reads Boolean models only (maxLevel 1), so multi-valued species must be made Boolean first${whereIs(el)}`,
+      );
     }
     if (maxLevel === undefined) warnings.push(`species ${id} has no maxLevel; read as Boolean`);
     const initial = level(el.attrs["initialLevel"], `initialLevel of species ${id}`);
@@ -84,7 +88,8 @@ export function readSbmlQual(text: string): SbmlQualModel {
     const thresholds = new Map<string, number>();
     const inputList = childNamed(tr, "listOfInputs");
     for (const input of inputList ? childrenNamed(inputList, "input") : []) {
-      const sp = input.attrs["qualitativeSpecies"] ?? fail(`${where}: an input has no qualitativeSpecies${whereIs(input)}`);
+      const sp =
+        input.attrs["qualitativeSpecies"] ?? fail(`${where}: an input has no qualitativeSpecies${whereIs(input)}`);
       if (!byId.has(sp)) fail(`${where}: input species ${sp} is not declared`);
       const theta = level(input.attrs["thresholdLevel"], `${where}: thresholdLevel of input ${sp}`);
       if (input.attrs["id"] !== undefined) thresholds.set(input.attrs["id"], theta ?? 0);
@@ -94,8 +99,13 @@ export function readSbmlQual(text: string): SbmlQualModel {
     if (outputs.length === 0) fail(`${where} has no output${whereIs(tr)}`);
     const termList = childNamed(tr, "listOfFunctionTerms") ?? fail(`${where} has no listOfFunctionTerms`);
     const resultLevel = (el: XmlElement, what: string): 0 | 1 => {
-      const v = level(el.attrs["resultLevel"], `${where}: resultLevel of the ${what}`) ?? fail(`${where}: the ${what} has no resultLevel`);
-      if (v > 1) fail(`${where}: the ${what} has resultLevel ${v}; Emulant reads Boolean models only (levels 0 and 1)${whereIs(el)}`);
+      const v =
+        level(el.attrs["resultLevel"], `${where}: resultLevel of the ${what}`) ??
+        fail(`${where}: the ${what} has no resultLevel`);
+      if (v > 1)
+        fail(
+          `${where}: the ${what} has resultLevel ${v}; Emulant reads Boolean models only (levels 0 and 1)${whereIs(el)}`,
+        );
       return v as 0 | 1;
     };
     const defaultTerm = childNamed(termList, "defaultTerm") ?? fail(`${where} has no defaultTerm`);
@@ -106,7 +116,8 @@ export function readSbmlQual(text: string): SbmlQualModel {
       try {
         condition = mathToExpr(math, ctx);
       } catch (e) {
-        if (e instanceof EngineError && e.code === "SBML_MATH") throw new EngineError("SBML_MATH", `${e.message}${whereIs(ft)}`);
+        if (e instanceof EngineError && e.code === "SBML_MATH")
+          throw new EngineError("SBML_MATH", `${e.message}${whereIs(ft)}`);
         throw e;
       }
       return { level: resultLevel(ft, `function term ${i + 1}`), condition };
@@ -118,12 +129,17 @@ export function readSbmlQual(text: string): SbmlQualModel {
       expr = t.level ? or(t.condition, expr) : and(not(t.condition), expr);
     }
     for (const out of outputs) {
-      const sp = out.attrs["qualitativeSpecies"] ?? fail(`${where}: an output has no qualitativeSpecies${whereIs(out)}`);
+      const sp =
+        out.attrs["qualitativeSpecies"] ?? fail(`${where}: an output has no qualitativeSpecies${whereIs(out)}`);
       if (!byId.has(sp)) fail(`${where}: output species ${sp} is not declared`);
       const effect = out.attrs["transitionEffect"];
-      if (effect !== undefined && effect !== "assignmentLevel") fail(`${where}: output ${sp} has transitionEffect ${effect}; only assignmentLevel is supported`);
+      if (effect !== undefined && effect !== "assignmentLevel")
+        fail(`${where}: output ${sp} has transitionEffect ${effect}; only assignmentLevel is supported`);
       const earlier = rules.get(sp);
-      if (earlier) fail(`species ${sp} is the output of two transitions (${earlier.transition} and ${trId}); a node needs exactly one rule${whereIs(tr)}`);
+      if (earlier)
+        fail(
+          `species ${sp} is the output of two transitions (${earlier.transition} and ${trId}); a node needs exactly one rule${whereIs(tr)}`,
+        );
       rules.set(sp, { expr, transition: trId });
     }
   });
@@ -137,5 +153,12 @@ export function readSbmlQual(text: string): SbmlQualModel {
     // A species no transition sets keeps its value: it is an input of the model.
     return { name: s.id, rule: rule ? rule.expr : { kind: "var", name: s.id } };
   });
-  return { definition: { nodes }, modelId: model.attrs["id"] ?? null, modelName: model.attrs["name"] ?? null, speciesNames, initialLevels, warnings };
+  return {
+    definition: { nodes },
+    modelId: model.attrs["id"] ?? null,
+    modelName: model.attrs["name"] ?? null,
+    speciesNames,
+    initialLevels,
+    warnings,
+  };
 }

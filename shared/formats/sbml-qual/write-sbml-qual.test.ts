@@ -12,7 +12,9 @@ describe("writeSbmlQual", () => {
   const transitions = childrenNamed(childNamed(model, "listOfTransitions")!, "transition");
 
   it("writeSbmlQual declares SBML Level 3 Version 1 with the qual package required", () => {
-    expect(text).toMatch(/<sbml xmlns="http:\/\/www.sbml.org\/sbml\/level3\/version1\/core" level="3" version="1" xmlns:qual="http:\/\/www.sbml.org\/sbml\/level3\/version1\/qual\/version1" qual:required="true">/);
+    expect(text).toMatch(
+      /<sbml xmlns="http:\/\/www.sbml.org\/sbml\/level3\/version1\/core" level="3" version="1" xmlns:qual="http:\/\/www.sbml.org\/sbml\/level3\/version1\/qual\/version1" qual:required="true">/,
+    );
     expect(model.attrs).toEqual({ id: "m_3_genes", name: "A & B" });
   });
 
@@ -23,9 +25,20 @@ describe("writeSbmlQual", () => {
   });
 
   it("writeSbmlQual signs each input by its effect on the rule: positive, negative or dual", () => {
-    const signs = (t: number) => childrenNamed(childNamed(transitions[t]!, "listOfInputs")!, "input").map((i) => [i.attrs["qualitativeSpecies"], i.attrs["sign"]]);
+    const signs = (t: number) =>
+      childrenNamed(childNamed(transitions[t]!, "listOfInputs")!, "input").map((i) => [
+        i.attrs["qualitativeSpecies"],
+        i.attrs["sign"],
+      ]);
     // X' = In & !Y | X ^ In: raising In can switch X off (when X = 1, Y = 1), and on (X = 0, Y = 0): dual
-    expect(signs(1)).toEqual([["In", "dual"], ["X", "dual"], ["Y", "negative"]]);
-    expect(signs(2)).toEqual([["In", "positive"], ["X", "negative"]]);
+    expect(signs(1)).toEqual([
+      ["In", "dual"],
+      ["X", "dual"],
+      ["Y", "negative"],
+    ]);
+    expect(signs(2)).toEqual([
+      ["In", "positive"],
+      ["X", "negative"],
+    ]);
   });
 });

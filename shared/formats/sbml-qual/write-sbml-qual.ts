@@ -11,7 +11,8 @@ export interface WriteSbmlOptions {
   readonly modelName?: string;
 }
 
-const escapeAttr = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+const escapeAttr = (s: string) =>
+  s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 
 function toSId(raw: string): string {
   const s = raw.replace(/[^A-Za-z0-9_]/g, "_");
@@ -57,7 +58,9 @@ export function writeSbmlQual(model: ModelDefinition, options: WriteSbmlOptions 
     `    <qual:listOfQualitativeSpecies>`,
   ];
   for (const name of net.names) {
-    out.push(`      <qual:qualitativeSpecies qual:id="${name}" qual:compartment="${compartment}" qual:constant="false" qual:maxLevel="1"/>`);
+    out.push(
+      `      <qual:qualitativeSpecies qual:id="${name}" qual:compartment="${compartment}" qual:constant="false" qual:maxLevel="1"/>`,
+    );
   }
   out.push(`    </qual:listOfQualitativeSpecies>`);
   const transitions: string[] = [];

@@ -3,7 +3,9 @@ import { parseXml } from "./xml-tree";
 
 describe("parseXml", () => {
   it("parseXml keeps child order, drops namespace prefixes and records where each element starts", () => {
-    const root = parseXml('<?xml version="1.0"?>\n<m:root xmlns:m="urn:x">\n  <b/><a k="1"/>\n  <b>text</b>\n</m:root>');
+    const root = parseXml(
+      '<?xml version="1.0"?>\n<m:root xmlns:m="urn:x">\n  <b/><a k="1"/>\n  <b>text</b>\n</m:root>',
+    );
     expect(root.name).toBe("root");
     expect(root.children.map((c) => [c.name, c.line, c.column])).toEqual([
       ["b", 3, 3],
@@ -21,6 +23,8 @@ describe("parseXml", () => {
   });
 
   it("parseXml refuses a document type declaration, wherever it is", () => {
-    expect(() => parseXml('<?xml version="1.0"?>\n\n  <!doctype r SYSTEM "file:///etc/passwd"><r/>')).toThrow(/DOCTYPE declarations are not accepted in model files \(line 3, column 3\)/);
+    expect(() => parseXml('<?xml version="1.0"?>\n\n  <!doctype r SYSTEM "file:///etc/passwd"><r/>')).toThrow(
+      /DOCTYPE declarations are not accepted in model files \(line 3, column 3\)/,
+    );
   });
 });

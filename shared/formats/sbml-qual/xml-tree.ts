@@ -51,7 +51,8 @@ function positionOf(starts: number[], offset: number): { line: number; column: n
 
 /** Parse XML text into an element tree and return its root element. Throws ParseError. */
 export function parseXml(text: string): XmlElement {
-  if (text.length > MAX_XML_CHARS) throw new ParseError(`the file is larger than ${MAX_XML_CHARS / 1024 / 1024} MiB`, 1, 1, "FILE_TOO_LARGE");
+  if (text.length > MAX_XML_CHARS)
+    throw new ParseError(`the file is larger than ${MAX_XML_CHARS / 1024 / 1024} MiB`, 1, 1, "FILE_TOO_LARGE");
   const starts = lineStarts(text);
   const doctype = text.search(/<!DOCTYPE/i);
   if (doctype >= 0) {
@@ -79,7 +80,8 @@ export function parseXml(text: string): XmlElement {
     if (!name || name.startsWith("?")) return null;
     const rawChildren = (node[name] as OrderedNode[]) ?? [];
     const attrs: Record<string, string> = {};
-    for (const [k, v] of Object.entries((node[":@"] as Record<string, string>) ?? {})) attrs[k] = decodeEntities(String(v));
+    for (const [k, v] of Object.entries((node[":@"] as Record<string, string>) ?? {}))
+      attrs[k] = decodeEntities(String(v));
     const children: XmlElement[] = [];
     let text = "";
     for (const child of rawChildren) {

@@ -7,7 +7,9 @@ import { parseTruthTableCsv, readTruthTableCsv, writeTruthTableCsv } from "./tru
 
 describe("truth-table CSV", () => {
   it("readTruthTableCsv reads tables in any row order with comments and blank lines", () => {
-    const net = readTruthTableCsv("# toy\r\n# node: A\r\nB, A'\r\n1,0\r\n 0 ,1\r\n\r\n# NODE: B\r\n# written by hand\r\nB'\r\n1\r\n");
+    const net = readTruthTableCsv(
+      "# toy\r\n# node: A\r\nB, A'\r\n1,0\r\n 0 ,1\r\n\r\n# NODE: B\r\n# written by hand\r\nB'\r\n1\r\n",
+    );
     expect(net.names).toEqual(["A", "B"]);
     expect(Array.from(net.regulators[0]!)).toEqual([1]);
     expect(Array.from(net.tables[0]!)).toEqual([1, 0]);
@@ -24,10 +26,15 @@ describe("truth-table CSV", () => {
 
   it("readTruthTableCsv(writeTruthTableCsv(net)) gives back random NK networks exactly", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 9 }), fc.integer({ min: 0, max: 4 }), fc.integer({ min: 1, max: 2 ** 31 }), (n, k, seed) => {
-        const net = nkNetwork({ n, k: Math.min(k, n), p: 0.5, random: seedrandom(String(seed)) });
-        expect(readTruthTableCsv(writeTruthTableCsv(net))).toEqual(net);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 9 }),
+        fc.integer({ min: 0, max: 4 }),
+        fc.integer({ min: 1, max: 2 ** 31 }),
+        (n, k, seed) => {
+          const net = nkNetwork({ n, k: Math.min(k, n), p: 0.5, random: seedrandom(String(seed)) });
+          expect(readTruthTableCsv(writeTruthTableCsv(net))).toEqual(net);
+        },
+      ),
       { seed: 4701, numRuns: 150 },
     );
   });
@@ -40,7 +47,20 @@ describe("truth-table CSV", () => {
   });
 
   it("parseTruthTableCsv reports every error with its line and column", () => {
-    const text = ["A,B", "# node: A", "B,A'", "0,1", "1,2", "0,1", "# node: C", "C,X'", "# node: B", "Z,B'", "1,1", "0,0"].join("\n");
+    const text = [
+      "A,B",
+      "# node: A",
+      "B,A'",
+      "0,1",
+      "1,2",
+      "0,1",
+      "# node: C",
+      "C,X'",
+      "# node: B",
+      "Z,B'",
+      "1,1",
+      "0,0",
+    ].join("\n");
     expect(parseTruthTableCsv(text).errors.map((e) => [e.line, e.column, e.reason])).toEqual([
       [1, 1, "a table must start with a line `# node: NAME`"],
       [3, 1, "the table of A has 1 missing row(s), e.g. B=1"],
@@ -52,8 +72,12 @@ describe("truth-table CSV", () => {
   });
 
   it("parseTruthTableCsv rejects a second table for a node, short rows and an empty text", () => {
-    expect(parseTruthTableCsv("# node: A\nA'\n1\n# node: A\nA'\n0\n").errors[0]!.reason).toBe("node A has a second table (first on line 1)");
-    expect(parseTruthTableCsv("# node: A\nA,A'\n1\n").errors.map((e) => e.reason)).toContain("expected 2 cells (1 regulators and A'), found 1");
+    expect(parseTruthTableCsv("# node: A\nA'\n1\n# node: A\nA'\n0\n").errors[0]!.reason).toBe(
+      "node A has a second table (first on line 1)",
+    );
+    expect(parseTruthTableCsv("# node: A\nA,A'\n1\n").errors.map((e) => e.reason)).toContain(
+      "expected 2 cells (1 regulators and A'), found 1",
+    );
     expect(parseTruthTableCsv("\n").errors[0]!.reason).toMatch(/no tables/);
   });
 });

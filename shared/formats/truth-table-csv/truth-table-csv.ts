@@ -58,10 +58,26 @@ export function parseTruthTableCsv(text: string): TruthTableCsvResult {
     if (nodeMatch) {
       const name = nodeMatch[1]!.trim();
       const column = line.indexOf(name) + 1;
-      current = { name, line: lineNo, column, regulators: null, headerLine: 0, table: null, filled: null, rowLines: [], broken: false };
+      current = {
+        name,
+        line: lineNo,
+        column,
+        regulators: null,
+        headerLine: 0,
+        table: null,
+        filled: null,
+        rowLines: [],
+        broken: false,
+      };
       tables.push(current);
       if (!isValidNodeName(name)) {
-        errors.push(new ParseError(`"${name}" is not a valid node name (letters, digits and _, not starting with a digit)`, lineNo, column));
+        errors.push(
+          new ParseError(
+            `"${name}" is not a valid node name (letters, digits and _, not starting with a digit)`,
+            lineNo,
+            column,
+          ),
+        );
         current.broken = true;
       }
       return;
@@ -77,7 +93,13 @@ export function parseTruthTableCsv(text: string): TruthTableCsvResult {
     if (!t.regulators) {
       const out = cells[cells.length - 1]!;
       if (out.text !== `${t.name}'`) {
-        errors.push(new ParseError(`the last header cell must be ${t.name}' (the node's next value), found "${out.text}"`, lineNo, out.column));
+        errors.push(
+          new ParseError(
+            `the last header cell must be ${t.name}' (the node's next value), found "${out.text}"`,
+            lineNo,
+            out.column,
+          ),
+        );
         t.broken = true;
         return;
       }
@@ -97,7 +119,9 @@ export function parseTruthTableCsv(text: string): TruthTableCsvResult {
         seen.add(r.text);
       }
       if (regs.length > 20) {
-        errors.push(new ParseError(`node ${t.name} has ${regs.length} regulators; at most 20 are supported`, lineNo, 1));
+        errors.push(
+          new ParseError(`node ${t.name} has ${regs.length} regulators; at most 20 are supported`, lineNo, 1),
+        );
         t.broken = true;
         return;
       }
@@ -110,7 +134,9 @@ export function parseTruthTableCsv(text: string): TruthTableCsvResult {
     }
     const k = t.regulators.length;
     if (cells.length !== k + 1) {
-      errors.push(new ParseError(`expected ${k + 1} cells (${k} regulators and ${t.name}'), found ${cells.length}`, lineNo, 1));
+      errors.push(
+        new ParseError(`expected ${k + 1} cells (${k} regulators and ${t.name}'), found ${cells.length}`, lineNo, 1),
+      );
       return;
     }
     let row = 0;
@@ -123,7 +149,9 @@ export function parseTruthTableCsv(text: string): TruthTableCsvResult {
       if (j < k && c.text === "1") row |= 1 << j;
     }
     if (t.filled![row]) {
-      errors.push(new ParseError(`this combination of regulator values was already given on line ${t.rowLines[row]}`, lineNo, 1));
+      errors.push(
+        new ParseError(`this combination of regulator values was already given on line ${t.rowLines[row]}`, lineNo, 1),
+      );
       return;
     }
     t.filled![row] = 1;
@@ -134,7 +162,10 @@ export function parseTruthTableCsv(text: string): TruthTableCsvResult {
   const indexOf = new Map<string, number>();
   tables.forEach((t, i) => {
     const first = indexOf.get(t.name);
-    if (first !== undefined) errors.push(new ParseError(`node ${t.name} has a second table (first on line ${tables[first]!.line})`, t.line, t.column));
+    if (first !== undefined)
+      errors.push(
+        new ParseError(`node ${t.name} has a second table (first on line ${tables[first]!.line})`, t.line, t.column),
+      );
     else indexOf.set(t.name, i);
   });
   for (const t of tables) {
@@ -146,13 +177,27 @@ export function parseTruthTableCsv(text: string): TruthTableCsvResult {
     const missing = t.filled!.indexOf(0);
     if (missing >= 0) {
       const values = t.regulators.map((r, j) => `${r.text}=${(missing >> j) & 1}`).join(", ");
-      errors.push(new ParseError(`the table of ${t.name} has ${t.filled!.filter((f) => !f).length} missing row(s), e.g. ${values}`, t.headerLine, 1));
+      errors.push(
+        new ParseError(
+          `the table of ${t.name} has ${t.filled!.filter((f) => !f).length} missing row(s), e.g. ${values}`,
+          t.headerLine,
+          1,
+        ),
+      );
     }
     for (const r of t.regulators) {
-      if (!indexOf.has(r.text)) errors.push(new ParseError(`regulator ${r.text} has no table; add a table for ${r.text} (e.g. ${r.text}' = ${r.text})`, t.headerLine, r.column));
+      if (!indexOf.has(r.text))
+        errors.push(
+          new ParseError(
+            `regulator ${r.text} has no table; add a table for ${r.text} (e.g. ${r.text}' = ${r.text})`,
+            t.headerLine,
+            r.column,
+          ),
+        );
     }
   }
-  if (errors.length === 0 && tables.length === 0) errors.push(new ParseError("the text has no tables; start each with `# node: NAME`", 1, 1));
+  if (errors.length === 0 && tables.length === 0)
+    errors.push(new ParseError("the text has no tables; start each with `# node: NAME`", 1, 1));
   errors.sort((a, b) => a.line - b.line || a.column - b.column);
   if (errors.length > 0) return { network: null, errors };
   const network = checkNetwork({
@@ -176,9 +221,12 @@ export function readTruthTableCsv(text: string): BooleanNetwork {
 /** Write one table per node; rows count up in binary with the first regulator column as the most significant digit. */
 export function writeTruthTableCsv(net: BooleanNetwork): string {
   for (const name of net.names) {
-    if (!isValidNodeName(name)) throw new EngineError("BAD_NAME", `node name "${name}" cannot be written to truth-table CSV`);
+    if (!isValidNodeName(name))
+      throw new EngineError("BAD_NAME", `node name "${name}" cannot be written to truth-table CSV`);
   }
-  const out: string[] = ["# Emulant truth tables: one table per node; columns are regulators, the last is the next value"];
+  const out: string[] = [
+    "# Emulant truth tables: one table per node; columns are regulators, the last is the next value",
+  ];
   net.names.forEach((name, i) => {
     const regs = Array.from(net.regulators[i]!, (r) => net.names[r]!);
     const k = regs.length;

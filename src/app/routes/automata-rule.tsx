@@ -10,14 +10,22 @@ export function AutomataRuleRoute() {
   const valid = text !== undefined && /^\d{1,3}$/.test(text) && rule <= 255;
   return (
     <section className="space-y-4">
-      <nav className="text-sm"><Link to={`/automata?maxBlock=${params.maxBlock}`} className="text-brand-700 underline">← Hierarchy</Link></nav>
+      <nav className="text-sm">
+        <Link to={`/automata?maxBlock=${params.maxBlock}`} className="text-brand-700 underline">
+          ← Hierarchy
+        </Link>
+      </nav>
       {valid ? (
         <>
-          <h1 className="text-2xl font-semibold" data-testid="rule-title">Rule {rule}</h1>
+          <h1 className="text-2xl font-semibold" data-testid="rule-title">
+            Rule {rule}
+          </h1>
           <RuleExplorer key={rule} rule={rule} params={params} />
         </>
       ) : (
-        <p className="text-sm text-red-700" role="alert">"{text}" is not an elementary rule: rule numbers run from 0 to 255.</p>
+        <p className="text-sm text-red-700" role="alert">
+          "{text}" is not an elementary rule: rule numbers run from 0 to 255.
+        </p>
       )}
     </section>
   );

@@ -33,7 +33,13 @@ function MailboxContent({ to, setTo }: { to: string; setTo: (v: string) => void 
           />
         </label>
       </div>
-      {isPending ? <p className="text-sm text-slate-500">Loading…</p> : error ? <Alert>{error.message}</Alert> : <MailboxList messages={messages} />}
+      {isPending ? (
+        <p className="text-sm text-slate-500">Loading…</p>
+      ) : error ? (
+        <Alert>{error.message}</Alert>
+      ) : (
+        <MailboxList messages={messages} />
+      )}
     </section>
   );
 }

@@ -30,9 +30,28 @@ function Section({ title, children, testId }: { title: string; children: React.R
   );
 }
 
-function Attractors({ projectId, modelId, revision, revisionId, canStartRun, nodes, markers, setMarkers, selected, setSelected }: {
-  projectId: string; modelId: string; revision: number; revisionId: string; canStartRun: boolean; nodes: readonly string[];
-  markers: string[]; setMarkers(m: string[]): void; selected: number | null; setSelected(i: number | null): void;
+function Attractors({
+  projectId,
+  modelId,
+  revision,
+  revisionId,
+  canStartRun,
+  nodes,
+  markers,
+  setMarkers,
+  selected,
+  setSelected,
+}: {
+  projectId: string;
+  modelId: string;
+  revision: number;
+  revisionId: string;
+  canStartRun: boolean;
+  nodes: readonly string[];
+  markers: string[];
+  setMarkers(m: string[]): void;
+  selected: number | null;
+  setSelected(i: number | null): void;
 }) {
   const result = useAttractors(projectId, modelId, revision, markers);
   const error = result.error as { code?: string; message: string } | null;
@@ -48,7 +67,9 @@ function Attractors({ projectId, modelId, revision, revisionId, canStartRun, nod
               type="button"
               data-testid={`marker-${n}`}
               aria-pressed={on}
-              onClick={() => setMarkers(on ? markers.filter((m) => m !== n) : nodes.filter((x) => x === n || markers.includes(x)))}
+              onClick={() =>
+                setMarkers(on ? markers.filter((m) => m !== n) : nodes.filter((x) => x === n || markers.includes(x)))
+              }
               className={`rounded-full border px-2 py-0.5 font-mono ${on ? "border-brand-700 bg-brand-700 text-white" : "border-slate-300 text-slate-600 hover:border-brand-600"}`}
             >
               {n}
@@ -56,9 +77,20 @@ function Attractors({ projectId, modelId, revision, revisionId, canStartRun, nod
           );
         })}
       </div>
-      {result.isPending && <p className="text-sm text-slate-500" data-testid="attractors-loading">Computing attractors…</p>}
+      {result.isPending && (
+        <p className="text-sm text-slate-500" data-testid="attractors-loading">
+          Computing attractors…
+        </p>
+      )}
       {error?.code === "NEEDS_RUN" && (
-        <AttractorRunPanel projectId={projectId} modelId={modelId} revision={revision} revisionId={revisionId} nodeCount={nodes.length} canStart={canStartRun} />
+        <AttractorRunPanel
+          projectId={projectId}
+          modelId={modelId}
+          revision={revision}
+          revisionId={revisionId}
+          nodeCount={nodes.length}
+          canStart={canStartRun}
+        />
       )}
       {error && error.code !== "NEEDS_RUN" && <Alert>{error.message}</Alert>}
       {result.data && (
@@ -74,7 +106,17 @@ function Attractors({ projectId, modelId, revision, revisionId, canStartRun, nod
   );
 }
 
-function EditRules({ projectId, modelId, baseText, latest }: { projectId: string; modelId: string; baseText: string; latest: number }) {
+function EditRules({
+  projectId,
+  modelId,
+  baseText,
+  latest,
+}: {
+  projectId: string;
+  modelId: string;
+  baseText: string;
+  latest: number;
+}) {
   const save = useCreateRevision(projectId, modelId);
   const [, setSearch] = useSearchParams();
   const [text, setText] = useState(baseText);
@@ -103,7 +145,12 @@ function EditRules({ projectId, modelId, baseText, latest }: { projectId: string
       <div className="flex flex-wrap items-end gap-3">
         <label className="flex flex-1 flex-col gap-1 text-sm">
           <span className="text-slate-700">What changed (optional)</span>
-          <input value={message} maxLength={500} onChange={(e) => setMessage(e.target.value)} className="rounded-md border border-slate-300 px-2 py-1" />
+          <input
+            value={message}
+            maxLength={500}
+            onChange={(e) => setMessage(e.target.value)}
+            className="rounded-md border border-slate-300 px-2 py-1"
+          />
         </label>
         <Button type="submit" data-testid="save-revision" disabled={save.isPending || text === baseText}>
           {save.isPending ? "Saving…" : `Save as revision ${latest + 1}`}
@@ -134,7 +181,7 @@ export function ModelDetailRoute() {
   if (detail.error) return <Alert>{detail.error.message}</Alert>;
   const { model, revision: rev } = detail.data;
   const nodes = rev.network.nodes;
-  const selectedState = selected !== null ? attractorsForState.data?.attractors[selected]?.states[0] ?? null : null;
+  const selectedState = selected !== null ? (attractorsForState.data?.attractors[selected]?.states[0] ?? null) : null;
   const suggestedInitial = attractorsForState.data?.attractors[0]?.states[0] ?? "0".repeat(nodes.length);
   const baseName = `${model.name}-r${rev.revision}`;
 
@@ -152,7 +199,11 @@ export function ModelDetailRoute() {
             <span data-testid="revision-label" data-revision={rev.revision}>
               Revision {rev.revision}
             </span>
-            {rev.revision !== model.latestRevision && <span className="ml-1 rounded bg-amber-100 px-1.5 text-amber-800">older revision (latest is {model.latestRevision})</span>}
+            {rev.revision !== model.latestRevision && (
+              <span className="ml-1 rounded bg-amber-100 px-1.5 text-amber-800">
+                older revision (latest is {model.latestRevision})
+              </span>
+            )}
             {" · "}
             <span data-testid="node-count">{rev.nodeCount} nodes</span>, {rev.network.edgeCount} edges
             {rev.network.inputs.length > 0 && `, inputs ${rev.network.inputs.join(", ")}`}
@@ -160,7 +211,12 @@ export function ModelDetailRoute() {
           </p>
           {model.description && <p className="mt-1 max-w-3xl text-sm text-slate-700">{model.description}</p>}
         </div>
-        <Downloads projectId={projectId} modelId={modelId} revision={rev.revision} originalName={rev.file?.fileName ?? null} />
+        <Downloads
+          projectId={projectId}
+          modelId={modelId}
+          revision={rev.revision}
+          originalName={rev.file?.fileName ?? null}
+        />
       </div>
 
       <Section title="Wiring diagram" testId="wiring-section">
@@ -171,20 +227,53 @@ export function ModelDetailRoute() {
         ) : (
           <p className="text-sm text-slate-500">Laying out…</p>
         )}
-        {selectedState && <p className="text-xs text-slate-600">Nodes are painted with the first state of attractor #{(selected ?? 0) + 1}; click the row again to clear.</p>}
+        {selectedState && (
+          <p className="text-xs text-slate-600">
+            Nodes are painted with the first state of attractor #{(selected ?? 0) + 1}; click the row again to clear.
+          </p>
+        )}
       </Section>
 
       <Section title="Attractors under synchronous update" testId="attractors-section">
-        <Attractors projectId={projectId} modelId={modelId} revision={rev.revision} revisionId={rev.id} canStartRun={can(project.role, project.siteRole, "run:start")} nodes={nodes} markers={markers} setMarkers={setMarkers} selected={selected} setSelected={setSelected} />
+        <Attractors
+          projectId={projectId}
+          modelId={modelId}
+          revision={rev.revision}
+          revisionId={rev.id}
+          canStartRun={can(project.role, project.siteRole, "run:start")}
+          nodes={nodes}
+          markers={markers}
+          setMarkers={setMarkers}
+          selected={selected}
+          setSelected={setSelected}
+        />
       </Section>
 
       <div className="grid gap-4 lg:grid-cols-2">
         <Section title="Trajectory" testId="trajectory-section">
-          <TrajectoryPanel key={`${rev.revision}-${suggestedInitial}`} projectId={projectId} modelId={modelId} revision={rev.revision} nodes={nodes} suggestedInitial={suggestedInitial} />
+          <TrajectoryPanel
+            key={`${rev.revision}-${suggestedInitial}`}
+            projectId={projectId}
+            modelId={modelId}
+            revision={rev.revision}
+            nodes={nodes}
+            suggestedInitial={suggestedInitial}
+          />
         </Section>
         <Section title="Perturbations" testId="perturbation-section">
-          <p className="text-xs text-slate-600">Knock-outs fix a node to 0, over-expression to 1, input conditions fix an input; the stored model is not changed.</p>
-          <PerturbationPanel key={rev.revision} projectId={projectId} modelId={modelId} revision={rev.revision} nodes={nodes} inputs={rev.network.inputs} markers={markers} />
+          <p className="text-xs text-slate-600">
+            Knock-outs fix a node to 0, over-expression to 1, input conditions fix an input; the stored model is not
+            changed.
+          </p>
+          <PerturbationPanel
+            key={rev.revision}
+            projectId={projectId}
+            modelId={modelId}
+            revision={rev.revision}
+            nodes={nodes}
+            inputs={rev.network.inputs}
+            markers={markers}
+          />
         </Section>
       </div>
 
@@ -208,7 +297,9 @@ export function ModelDetailRoute() {
                 r{r.revision}
               </button>
               <span className="text-slate-600">{r.nodeCount} nodes</span>
-              <span className="text-slate-600">{r.source === "edit" ? "edited" : r.file ? `imported from ${r.file.fileName}` : r.source}</span>
+              <span className="text-slate-600">
+                {r.source === "edit" ? "edited" : r.file ? `imported from ${r.file.fileName}` : r.source}
+              </span>
               {r.message && <span className="italic text-slate-700">“{r.message}”</span>}
               <span className="ml-auto text-xs text-slate-500">
                 {r.createdBy?.displayName ?? "—"}, {new Date(r.createdAt).toLocaleString()}

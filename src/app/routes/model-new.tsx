@@ -37,7 +37,13 @@ function WriteForm({ projectId, onCreated }: { projectId: string; onCreated(d: M
     >
       <label className="flex max-w-md flex-col gap-1 text-sm">
         <span className="text-slate-700">Name</span>
-        <input required data-testid="model-name" value={name} onChange={(e) => setName(e.target.value)} className="rounded-md border border-slate-300 px-2 py-1" />
+        <input
+          required
+          data-testid="model-name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          className="rounded-md border border-slate-300 px-2 py-1"
+        />
       </label>
       <RuleEditor projectId={projectId} value={text} onChange={setText} serverErrors={serverErrors} />
       {create.error && serverErrors.length === 0 && submittedText === text && <Alert>{create.error.message}</Alert>}

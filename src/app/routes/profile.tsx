@@ -11,7 +11,8 @@ export function ProfileRoute() {
       <div>
         <h1 className="text-2xl font-semibold">Your profile</h1>
         <p className="text-sm text-slate-600">
-          {profile.email} · {profile.siteRole === "admin" ? "site admin" : "member"} since {new Date(profile.createdAt).toLocaleDateString()}
+          {profile.email} · {profile.siteRole === "admin" ? "site admin" : "member"} since{" "}
+          {new Date(profile.createdAt).toLocaleDateString()}
         </p>
       </div>
       <div className="rounded-lg border border-slate-200 bg-white p-5">

@@ -11,7 +11,10 @@ export function ProjectHierarchyRoute() {
     <section className="space-y-3">
       <div>
         <h2 className="text-lg font-semibold text-slate-900">Model hierarchy</h2>
-        <p className="text-sm text-slate-600">An arrow from a model to each model it emulates or coarse-grains onto, from approved reductions only. Click a model to open it.</p>
+        <p className="text-sm text-slate-600">
+          An arrow from a model to each model it emulates or coarse-grains onto, from approved reductions only. Click a
+          model to open it.
+        </p>
       </div>
       {hierarchy.error && <Alert>{hierarchy.error.message}</Alert>}
       {hierarchy.data && <ModelHierarchyGraph projectId={projectId} graph={hierarchy.data} />}

@@ -20,7 +20,10 @@ export const projectTabs: TabLink[] = [
   { to: "audit", label: "Audit log" },
 ];
 
-export interface ProjectOutlet { project: ProjectDetail; user: SessionUser }
+export interface ProjectOutlet {
+  project: ProjectDetail;
+  user: SessionUser;
+}
 
 export function useProjectOutlet(): ProjectOutlet {
   return useOutletContext<ProjectOutlet>();
@@ -34,8 +37,14 @@ export function ProjectLayoutRoute() {
   if (error) {
     return (
       <div className="space-y-3">
-        <Alert>{error instanceof ApiError && error.status === 404 ? "There is no such project, or you are not a member of it." : error.message}</Alert>
-        <Link to="/projects" className="text-sm font-medium text-brand-700 hover:underline">Back to your projects</Link>
+        <Alert>
+          {error instanceof ApiError && error.status === 404
+            ? "There is no such project, or you are not a member of it."
+            : error.message}
+        </Alert>
+        <Link to="/projects" className="text-sm font-medium text-brand-700 hover:underline">
+          Back to your projects
+        </Link>
       </div>
     );
   }
@@ -43,13 +52,26 @@ export function ProjectLayoutRoute() {
   return (
     <section className="space-y-5">
       <div className="flex flex-wrap items-baseline gap-3">
-        <h1 className="text-2xl font-semibold" data-testid="project-name">{project.name}</h1>
-        <span className="rounded-full bg-brand-50 px-2.5 py-0.5 text-xs font-medium capitalize text-brand-800" data-testid="project-role">
+        <h1 className="text-2xl font-semibold" data-testid="project-name">
+          {project.name}
+        </h1>
+        <span
+          className="rounded-full bg-brand-50 px-2.5 py-0.5 text-xs font-medium capitalize text-brand-800"
+          data-testid="project-role"
+        >
           {project.role ?? "site admin"}
         </span>
-        {project.archived && <span className="rounded-full bg-amber-100 px-2.5 py-0.5 text-xs font-medium text-amber-800">archived</span>}
+        {project.archived && (
+          <span className="rounded-full bg-amber-100 px-2.5 py-0.5 text-xs font-medium text-amber-800">archived</span>
+        )}
       </div>
-      <TabBar tabs={projectTabs.map((t) => ({ ...t, to: t.to ? `/projects/${project.id}/${t.to}` : `/projects/${project.id}` }))} label="Project sections" />
+      <TabBar
+        tabs={projectTabs.map((t) => ({
+          ...t,
+          to: t.to ? `/projects/${project.id}/${t.to}` : `/projects/${project.id}`,
+        }))}
+        label="Project sections"
+      />
       <Outlet context={outlet} />
     </section>
   );

@@ -13,7 +13,13 @@ export function ProjectListRoute() {
       <div className="rounded-lg border border-slate-200 bg-white p-5">
         <CreateProjectForm onCreated={(id) => navigate(`/projects/${id}`)} />
       </div>
-      {isPending ? <p className="text-sm text-slate-500">Loading projects…</p> : error ? <Alert>{error.message}</Alert> : <ProjectsTable projects={projects} />}
+      {isPending ? (
+        <p className="text-sm text-slate-500">Loading projects…</p>
+      ) : error ? (
+        <Alert>{error.message}</Alert>
+      ) : (
+        <ProjectsTable projects={projects} />
+      )}
     </section>
   );
 }

@@ -16,10 +16,16 @@ export function ProjectModelsRoute() {
       <div className="flex flex-wrap items-center justify-between gap-2">
         <div>
           <h2 className="text-lg font-semibold text-slate-900">Models</h2>
-          <p className="text-sm text-slate-600">Boolean regulatory networks of this project; every edit is kept as a revision.</p>
+          <p className="text-sm text-slate-600">
+            Boolean regulatory networks of this project; every edit is kept as a revision.
+          </p>
         </div>
         {canWrite && (
-          <Link to={`/projects/${projectId}/models/new`} data-testid="new-model" className="rounded-md bg-brand-700 px-4 py-2 text-sm font-medium text-white hover:bg-brand-800">
+          <Link
+            to={`/projects/${projectId}/models/new`}
+            data-testid="new-model"
+            className="rounded-md bg-brand-700 px-4 py-2 text-sm font-medium text-white hover:bg-brand-800"
+          >
             New model
           </Link>
         )}

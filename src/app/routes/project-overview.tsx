@@ -11,7 +11,11 @@ import { useProjectOutlet } from "./project-layout";
 
 function Stat({ to, value, label, testId }: { to: string; value: ReactNode; label: string; testId: string }) {
   return (
-    <Link to={to} data-testid={testId} className="rounded-lg border border-slate-200 bg-white p-4 hover:border-brand-600">
+    <Link
+      to={to}
+      data-testid={testId}
+      className="rounded-lg border border-slate-200 bg-white p-4 hover:border-brand-600"
+    >
       <p className="text-2xl font-semibold text-slate-900">{value}</p>
       <p className="text-sm text-slate-600">{label}</p>
     </Link>
@@ -30,14 +34,20 @@ export function ProjectOverviewRoute() {
     <div className="space-y-6">
       <div className="grid gap-3 sm:grid-cols-3">
         <Stat to={`${base}/models`} value={models.data?.length ?? "…"} label="models" testId="stat-models" />
-        <Stat to={`${base}/reductions`} value={proposed.data?.length ?? "…"} label="reductions waiting for review" testId="stat-proposed" />
+        <Stat
+          to={`${base}/reductions`}
+          value={proposed.data?.length ?? "…"}
+          label="reductions waiting for review"
+          testId="stat-proposed"
+        />
         <Stat to={`${base}/runs`} value={running.data?.length ?? "…"} label="runs in progress" testId="stat-running" />
       </div>
       <div className="rounded-lg border border-slate-200 bg-white p-5">
         <h2 className="mb-2 text-lg font-semibold">About</h2>
         <p className="text-sm text-slate-700">{project.description || "No description yet."}</p>
         <p className="mt-3 text-xs text-slate-500">
-          Created {new Date(project.createdAt).toLocaleDateString()} · last change {new Date(project.updatedAt).toLocaleString()}
+          Created {new Date(project.createdAt).toLocaleDateString()} · last change{" "}
+          {new Date(project.updatedAt).toLocaleString()}
         </p>
       </div>
       {canManage && <ProjectSettings project={project} onDeleted={() => navigate("/projects", { replace: true })} />}

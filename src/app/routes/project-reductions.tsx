@@ -32,7 +32,10 @@ export function ProjectReductionsRoute() {
     <section className="space-y-5">
       <div>
         <h2 className="text-lg font-semibold text-slate-900">Reductions</h2>
-        <p className="text-sm text-slate-600">Smaller networks this project's models emulate, embed or coarse-grain onto, each with a certificate anyone can re-check.</p>
+        <p className="text-sm text-slate-600">
+          Smaller networks this project's models emulate, embed or coarse-grain onto, each with a certificate anyone can
+          re-check.
+        </p>
       </div>
       <NotionsHelp />
       {canSearch && models.data && models.data.length > 0 && (
@@ -46,13 +49,20 @@ export function ProjectReductionsRoute() {
       {search.data && (
         <p className="rounded-md bg-brand-50 px-3 py-2 text-sm text-brand-800" data-testid="search-started">
           {search.data.reused ? "This search was run before; its stored result is reused." : "Search started."}{" "}
-          <Link to={`/projects/${projectId}/runs/${search.data.id}`} className="font-medium underline">Follow the run</Link>
+          <Link to={`/projects/${projectId}/runs/${search.data.id}`} className="font-medium underline">
+            Follow the run
+          </Link>
         </p>
       )}
       <div className="flex flex-wrap gap-2" role="group" aria-label="Filter by review state">
         {stateFilters.map((f) => (
-          <button key={f.label} type="button" onClick={() => setState(f.value)} aria-pressed={state === f.value}
-            className={`rounded-full px-3 py-1 text-xs font-medium ${state === f.value ? "bg-slate-800 text-white" : "bg-slate-100 text-slate-700 hover:bg-slate-200"}`}>
+          <button
+            key={f.label}
+            type="button"
+            onClick={() => setState(f.value)}
+            aria-pressed={state === f.value}
+            className={`rounded-full px-3 py-1 text-xs font-medium ${state === f.value ? "bg-slate-800 text-white" : "bg-slate-100 text-slate-700 hover:bg-slate-200"}`}
+          >
             {f.label}
           </button>
         ))}

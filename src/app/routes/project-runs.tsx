@@ -20,9 +20,13 @@ export function ProjectRunsRoute() {
     <section className="space-y-4">
       <div>
         <h2 className="text-lg font-semibold text-slate-900">Runs</h2>
-        <p className="text-sm text-slate-600">Analyses run in the background on the worker pool; a result is stored once and reused for the same request.</p>
+        <p className="text-sm text-slate-600">
+          Analyses run in the background on the worker pool; a result is stored once and reused for the same request.
+        </p>
       </div>
-      {mayStart && <StartRunForm projectId={projectId} onStarted={(runId) => navigate(`/projects/${projectId}/runs/${runId}`)} />}
+      {mayStart && (
+        <StartRunForm projectId={projectId} onStarted={(runId) => navigate(`/projects/${projectId}/runs/${runId}`)} />
+      )}
       <RunFilters
         value={filter}
         onChange={(next) => {

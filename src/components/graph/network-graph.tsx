@@ -7,24 +7,62 @@ import Graph from "graphology";
 import forceAtlas2 from "graphology-layout-forceatlas2";
 import { useEffect, useMemo } from "react";
 
-export interface GraphNode { id: string; label: string; color: string; size?: number; borderLabel?: string }
-export interface GraphEdge { source: string; target: string; color: string; label?: string; size?: number }
+export interface GraphNode {
+  id: string;
+  label: string;
+  color: string;
+  size?: number;
+  borderLabel?: string;
+}
+export interface GraphEdge {
+  source: string;
+  target: string;
+  color: string;
+  label?: string;
+  size?: number;
+}
 
-interface NodeAttrs { x: number; y: number; size: number; label: string; color: string }
-interface EdgeAttrs { size: number; color: string; label?: string; type: string }
+interface NodeAttrs {
+  x: number;
+  y: number;
+  size: number;
+  label: string;
+  color: string;
+}
+interface EdgeAttrs {
+  size: number;
+  color: string;
+  label?: string;
+  type: string;
+}
 
 export function buildGraph(nodes: GraphNode[], edges: GraphEdge[]): Graph<NodeAttrs, EdgeAttrs> {
   const graph = new Graph<NodeAttrs, EdgeAttrs>({ type: "directed", multi: false, allowSelfLoops: false });
   nodes.forEach((n, i) => {
     const angle = (2 * Math.PI * i) / Math.max(1, nodes.length);
-    graph.addNode(n.id, { x: Math.cos(angle) * 10, y: Math.sin(angle) * 10, size: n.size ?? 9, label: n.label, color: n.color });
+    graph.addNode(n.id, {
+      x: Math.cos(angle) * 10,
+      y: Math.sin(angle) * 10,
+      size: n.size ?? 9,
+      label: n.label,
+      color: n.color,
+    });
   });
   for (const e of edges) {
-    if (e.source === e.target || !graph.hasNode(e.source) || !graph.hasNode(e.target) || graph.hasEdge(e.source, e.target)) continue;
+    if (
+      e.source === e.target ||
+      !graph.hasNode(e.source) ||
+      !graph.hasNode(e.target) ||
+      graph.hasEdge(e.source, e.target)
+    )
+      continue;
     graph.addDirectedEdge(e.source, e.target, { size: e.size ?? 2, color: e.color, label: e.label, type: "arrow" });
   }
   if (graph.order > 2 && graph.size > 0) {
-    forceAtlas2.assign(graph, { iterations: 200, settings: { ...forceAtlas2.inferSettings(graph), adjustSizes: true } });
+    forceAtlas2.assign(graph, {
+      iterations: 200,
+      settings: { ...forceAtlas2.inferSettings(graph), adjustSizes: true },
+    });
   }
   return graph;
 }
@@ -50,7 +88,11 @@ export interface NetworkGraphProps {
 export function NetworkGraph({ nodes, edges, height = 360, onNodeClick, testId }: NetworkGraphProps) {
   const graph = useMemo(() => buildGraph(nodes, edges), [nodes, edges]);
   return (
-    <div data-testid={testId} className="overflow-hidden rounded-lg border border-slate-200 bg-white" style={{ height }}>
+    <div
+      data-testid={testId}
+      className="overflow-hidden rounded-lg border border-slate-200 bg-white"
+      style={{ height }}
+    >
       <SigmaContainer
         style={{ height: "100%", width: "100%" }}
         settings={{

@@ -3,9 +3,16 @@ import { useState, type ReactNode } from "react";
 import { NavLink, Outlet } from "react-router-dom";
 import { HealthBadge } from "./health-badge";
 
-export interface NavItem { to: string; label: string }
+export interface NavItem {
+  to: string;
+  label: string;
+}
 
-const navItems: NavItem[] = [{ to: "/", label: "Overview" }, { to: "/automata", label: "Automata" }, { to: "/projects", label: "Projects" }];
+const navItems: NavItem[] = [
+  { to: "/", label: "Overview" },
+  { to: "/automata", label: "Automata" },
+  { to: "/projects", label: "Projects" },
+];
 
 function navClass({ isActive }: { isActive: boolean }) {
   return `rounded-md px-3 py-2 text-sm font-medium ${isActive ? "bg-brand-700 text-white" : "text-slate-200 hover:bg-brand-800 hover:text-white"}`;
@@ -17,7 +24,11 @@ export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: Reac
     <div className="flex min-h-screen flex-col">
       <header className="bg-slate-900 text-white shadow">
         <div className="mx-auto flex max-w-7xl items-center gap-4 px-4 py-3">
-          <NavLink to="/" className="flex items-center gap-2 text-lg font-semibold tracking-tight" data-testid="product-name">
+          <NavLink
+            to="/"
+            className="flex items-center gap-2 text-lg font-semibold tracking-tight"
+            data-testid="product-name"
+          >
             <img src="/favicon.svg" alt="" className="h-7 w-7" />
             Emulant
           </NavLink>
@@ -30,14 +41,26 @@ export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: Reac
           >
             ☰
           </button>
-          <nav aria-label="Main" className={`${isMenuOpen ? "flex" : "hidden"} absolute left-0 right-0 top-14 z-20 flex-col gap-1 bg-slate-900 p-3 md:static md:flex md:flex-row md:p-0`}>
+          <nav
+            aria-label="Main"
+            className={`${isMenuOpen ? "flex" : "hidden"} absolute left-0 right-0 top-14 z-20 flex-col gap-1 bg-slate-900 p-3 md:static md:flex md:flex-row md:p-0`}
+          >
             {navItems.map((item) => (
-              <NavLink key={item.to} to={item.to} end={item.to === "/"} className={navClass} onClick={() => setMenuOpen(false)}>
+              <NavLink
+                key={item.to}
+                to={item.to}
+                end={item.to === "/"}
+                className={navClass}
+                onClick={() => setMenuOpen(false)}
+              >
                 {item.label}
               </NavLink>
             ))}
           </nav>
-          <div className="flex items-center gap-2 md:ml-auto">{notificationSlot}{accountSlot}</div>
+          <div className="flex items-center gap-2 md:ml-auto">
+            {notificationSlot}
+            {accountSlot}
+          </div>
         </div>
       </header>
       <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
@@ -45,7 +68,10 @@ export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: Reac
       </main>
       <footer className="border-t border-slate-200 bg-white">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-2 px-4 py-3 text-xs text-slate-500">
-          <span>Reductions are statements about models, not about cells. Models are research aids, not clinical or safety advice.</span>
+          <span>
+            Reductions are statements about models, not about cells. Models are research aids, not clinical or safety
+            advice.
+          </span>
           <HealthBadge />
         </div>
       </footer>

@@ -14,7 +14,14 @@ export interface StateRasterProps {
   testId?: string;
 }
 
-export function StateRaster({ nodes, states, columnColours, rowLabels, markedRows, testId = "trajectory-raster" }: StateRasterProps) {
+export function StateRaster({
+  nodes,
+  states,
+  columnColours,
+  rowLabels,
+  markedRows,
+  testId = "trajectory-raster",
+}: StateRasterProps) {
   const canvas = useRef<HTMLCanvasElement>(null);
   const cell = Math.max(6, Math.min(22, Math.floor(640 / Math.max(1, nodes.length))));
   const header = 70;
@@ -50,7 +57,7 @@ export function StateRaster({ nodes, states, columnColours, rowLabels, markedRow
         ctx.fillText(rowLabels?.[t] ?? String(t), gutter - 4, header + t * cell + cell / 2);
       }
       for (let j = 0; j < nodes.length; j++) {
-        ctx.fillStyle = s[j] === "1" ? columnColours?.[j] ?? "#0d9488" : "#f1f5f9";
+        ctx.fillStyle = s[j] === "1" ? (columnColours?.[j] ?? "#0d9488") : "#f1f5f9";
         ctx.fillRect(gutter + j * cell, header + t * cell, cell - 1, cell - 1);
       }
       if (markedRows?.has(t)) {
@@ -61,5 +68,13 @@ export function StateRaster({ nodes, states, columnColours, rowLabels, markedRow
     });
   }, [nodes, states, cell, width, height, columnColours, rowLabels, markedRows]);
 
-  return <canvas ref={canvas} data-testid={testId} data-steps={states.length} style={{ width, height }} className="max-w-full rounded border border-slate-200" />;
+  return (
+    <canvas
+      ref={canvas}
+      data-testid={testId}
+      data-steps={states.length}
+      style={{ width, height }}
+      className="max-w-full rounded border border-slate-200"
+    />
+  );
 }

@@ -10,7 +10,10 @@ const variants: Record<Variant, string> = {
   ghost: "text-slate-700 hover:bg-slate-100 disabled:text-slate-400",
 };
 
-export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> { variant?: Variant; size?: "sm" | "md" }
+export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
+  variant?: Variant;
+  size?: "sm" | "md";
+}
 
 export function Button({ variant = "primary", size = "md", className = "", type = "button", ...rest }: ButtonProps) {
   const sizing = size === "sm" ? "px-2.5 py-1 text-xs" : "px-4 py-2 text-sm";

@@ -1,7 +1,17 @@
 // A modal built on the native <dialog> element, which already traps focus and closes on Escape.
 import { useEffect, useRef, type ReactNode } from "react";
 
-export function Dialog({ open, title, onClose, children }: { open: boolean; title: string; onClose: () => void; children: ReactNode }) {
+export function Dialog({
+  open,
+  title,
+  onClose,
+  children,
+}: {
+  open: boolean;
+  title: string;
+  onClose: () => void;
+  children: ReactNode;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const dialog = ref.current;
@@ -18,7 +28,9 @@ export function Dialog({ open, title, onClose, children }: { open: boolean; titl
     >
       {open && (
         <div className="space-y-4 p-6">
-          <h2 id="dialog-title" className="text-lg font-semibold text-slate-900">{title}</h2>
+          <h2 id="dialog-title" className="text-lg font-semibold text-slate-900">
+            {title}
+          </h2>
           {children}
         </div>
       )}

@@ -1,5 +1,13 @@
 // A horizontal bar for a fraction in [0, 1], with the percentage for screen readers and an optional caption.
-export function ProgressBar({ fraction, label, tone = "brand" }: { fraction: number; label: string; tone?: "brand" | "muted" | "danger" }) {
+export function ProgressBar({
+  fraction,
+  label,
+  tone = "brand",
+}: {
+  fraction: number;
+  label: string;
+  tone?: "brand" | "muted" | "danger";
+}) {
   const clamped = Math.min(1, Math.max(0, Number.isFinite(fraction) ? fraction : 0));
   const percent = Math.round(clamped * 1000) / 10;
   const fill = tone === "danger" ? "bg-red-600" : tone === "muted" ? "bg-slate-400" : "bg-brand-600";

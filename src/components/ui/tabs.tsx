@@ -1,7 +1,11 @@
 // A row of tab links under a page title; the active tab follows the URL.
 import { NavLink } from "react-router-dom";
 
-export interface TabLink { to: string; label: string; end?: boolean }
+export interface TabLink {
+  to: string;
+  label: string;
+  end?: boolean;
+}
 
 export function TabBar({ tabs, label }: { tabs: readonly TabLink[]; label: string }) {
   return (

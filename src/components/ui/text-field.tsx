@@ -1,9 +1,16 @@
 // A labelled input with its error message tied to it for screen readers.
 import { forwardRef, useId, type InputHTMLAttributes } from "react";
 
-export interface TextFieldProps extends InputHTMLAttributes<HTMLInputElement> { label: string; error?: string; hint?: string }
+export interface TextFieldProps extends InputHTMLAttributes<HTMLInputElement> {
+  label: string;
+  error?: string;
+  hint?: string;
+}
 
-export const TextField = forwardRef<HTMLInputElement, TextFieldProps>(function TextField({ label, error, hint, id, className = "", ...rest }, ref) {
+export const TextField = forwardRef<HTMLInputElement, TextFieldProps>(function TextField(
+  { label, error, hint, id, className = "", ...rest },
+  ref,
+) {
   const autoId = useId();
   const inputId = id ?? autoId;
   const messageId = `${inputId}-message`;
@@ -21,9 +28,13 @@ export const TextField = forwardRef<HTMLInputElement, TextFieldProps>(function T
         {...rest}
       />
       {error ? (
-        <p id={messageId} role="alert" className="text-xs text-red-700">{error}</p>
+        <p id={messageId} role="alert" className="text-xs text-red-700">
+          {error}
+        </p>
       ) : hint ? (
-        <p id={messageId} className="text-xs text-slate-500">{hint}</p>
+        <p id={messageId} className="text-xs text-slate-500">
+          {hint}
+        </p>
       ) : null}
     </div>
   );

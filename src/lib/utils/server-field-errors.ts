@@ -2,9 +2,16 @@
 // server's reason where they typed; returns the message for anything that belongs to no field.
 import { ApiError } from "../api-client";
 
-interface FieldIssue { field: string; message: string }
+interface FieldIssue {
+  field: string;
+  message: string;
+}
 
-export function serverFieldErrors<F extends string>(err: unknown, fields: readonly F[], setError: (field: F, e: { message: string }) => void): string | null {
+export function serverFieldErrors<F extends string>(
+  err: unknown,
+  fields: readonly F[],
+  setError: (field: F, e: { message: string }) => void,
+): string | null {
   if (!(err instanceof ApiError)) return err instanceof Error ? err.message : "Something went wrong";
   const issues = Array.isArray(err.details) ? (err.details as FieldIssue[]) : [];
   let placed = false;

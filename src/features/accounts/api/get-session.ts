@@ -6,7 +6,8 @@ import { accountKeys } from "./keys";
 
 export const getSession = () => apiRequest("/auth/session", Session);
 
-export const sessionQuery = () => queryOptions({ queryKey: accountKeys.session(), queryFn: getSession, staleTime: 60_000 });
+export const sessionQuery = () =>
+  queryOptions({ queryKey: accountKeys.session(), queryFn: getSession, staleTime: 60_000 });
 
 export function useSession() {
   return useQuery(sessionQuery());

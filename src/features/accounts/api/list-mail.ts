@@ -5,9 +5,11 @@ import { MailMessage } from "@shared/schemas/accounts";
 import { apiRequest } from "@/lib/api-client";
 import { accountKeys } from "./keys";
 
-export const listMail = (to: string) => apiRequest(`/mailbox${to ? `?to=${encodeURIComponent(to)}` : ""}`, z.array(MailMessage));
+export const listMail = (to: string) =>
+  apiRequest(`/mailbox${to ? `?to=${encodeURIComponent(to)}` : ""}`, z.array(MailMessage));
 
-export const mailQuery = (to: string) => queryOptions({ queryKey: accountKeys.mailbox(to), queryFn: () => listMail(to), refetchInterval: 5_000 });
+export const mailQuery = (to: string) =>
+  queryOptions({ queryKey: accountKeys.mailbox(to), queryFn: () => listMail(to), refetchInterval: 5_000 });
 
 export function useMail(to: string) {
   return useQuery(mailQuery(to));

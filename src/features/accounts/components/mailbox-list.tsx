@@ -22,7 +22,11 @@ function Linkified({ text }: { text: string }) {
 export function MailboxList({ messages }: { messages: readonly MailMessage[] }) {
   const [openId, setOpenId] = useState<string | null>(messages[0]?.id ?? null);
   if (messages.length === 0) {
-    return <p className="rounded-md border border-dashed border-slate-300 bg-white p-6 text-center text-sm text-slate-600">No mail has been sent yet.</p>;
+    return (
+      <p className="rounded-md border border-dashed border-slate-300 bg-white p-6 text-center text-sm text-slate-600">
+        No mail has been sent yet.
+      </p>
+    );
   }
   return (
     <ul className="divide-y divide-slate-200 rounded-lg border border-slate-200 bg-white" data-testid="mailbox">
@@ -36,7 +40,9 @@ export function MailboxList({ messages }: { messages: readonly MailMessage[] }) 
           >
             <span className="font-medium text-slate-900">{m.subject || "(no subject)"}</span>
             <span className="text-sm text-slate-600">to {m.to.join(", ")}</span>
-            <time className="ml-auto text-xs text-slate-500" dateTime={m.receivedAt}>{new Date(m.receivedAt).toLocaleString()}</time>
+            <time className="ml-auto text-xs text-slate-500" dateTime={m.receivedAt}>
+              {new Date(m.receivedAt).toLocaleString()}
+            </time>
           </button>
           {openId === m.id && (
             <div className="border-t border-slate-100 bg-slate-50 px-4 py-3">

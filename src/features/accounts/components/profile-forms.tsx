@@ -13,7 +13,10 @@ import { useUpdateProfile } from "../api/update-profile";
 export function DisplayNameForm({ profile }: { profile: Profile }) {
   const update = useUpdateProfile();
   const [message, setMessage] = useState<{ tone: "error" | "success"; text: string } | null>(null);
-  const form = useForm({ resolver: zodResolver(UpdateProfileBody), defaultValues: { displayName: profile.displayName } });
+  const form = useForm({
+    resolver: zodResolver(UpdateProfileBody),
+    defaultValues: { displayName: profile.displayName },
+  });
   const submit = form.handleSubmit(async (values) => {
     setMessage(null);
     try {
@@ -26,9 +29,16 @@ export function DisplayNameForm({ profile }: { profile: Profile }) {
   });
   return (
     <form onSubmit={submit} noValidate className="space-y-4" aria-label="Your name">
-      <TextField label="Display name" maxLength={120} error={form.formState.errors.displayName?.message} {...form.register("displayName")} />
+      <TextField
+        label="Display name"
+        maxLength={120}
+        error={form.formState.errors.displayName?.message}
+        {...form.register("displayName")}
+      />
       {message && <Alert tone={message.tone}>{message.text}</Alert>}
-      <Button type="submit" disabled={form.formState.isSubmitting}>Save name</Button>
+      <Button type="submit" disabled={form.formState.isSubmitting}>
+        Save name
+      </Button>
     </form>
   );
 }
@@ -36,7 +46,10 @@ export function DisplayNameForm({ profile }: { profile: Profile }) {
 export function PasswordForm() {
   const change = useChangePassword();
   const [message, setMessage] = useState<{ tone: "error" | "success"; text: string } | null>(null);
-  const form = useForm({ resolver: zodResolver(ChangePasswordBody), defaultValues: { currentPassword: "", newPassword: "" } });
+  const form = useForm({
+    resolver: zodResolver(ChangePasswordBody),
+    defaultValues: { currentPassword: "", newPassword: "" },
+  });
   const submit = form.handleSubmit(async (values) => {
     setMessage(null);
     try {
@@ -51,7 +64,13 @@ export function PasswordForm() {
   const { errors } = form.formState;
   return (
     <form onSubmit={submit} noValidate className="space-y-4" aria-label="Change password">
-      <TextField label="Current password" type="password" autoComplete="current-password" error={errors.currentPassword?.message} {...form.register("currentPassword")} />
+      <TextField
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.currentPassword?.message}
+        {...form.register("currentPassword")}
+      />
       <TextField
         label="New password"
         type="password"
@@ -61,7 +80,9 @@ export function PasswordForm() {
         {...form.register("newPassword")}
       />
       {message && <Alert tone={message.tone}>{message.text}</Alert>}
-      <Button type="submit" disabled={form.formState.isSubmitting}>Change password</Button>
+      <Button type="submit" disabled={form.formState.isSubmitting}>
+        Change password
+      </Button>
     </form>
   );
 }

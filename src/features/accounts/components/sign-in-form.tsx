@@ -25,8 +25,20 @@ export function SignInForm({ onSignedIn, defaultEmail = "" }: { onSignedIn: () =
   });
   return (
     <form onSubmit={submit} noValidate className="space-y-4" aria-label="Sign in">
-      <TextField label="E-mail address" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
-      <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...form.register("password")} />
+      <TextField
+        label="E-mail address"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register("email")}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.password?.message}
+        {...form.register("password")}
+      />
       {formError && <Alert>{formError}</Alert>}
       <Button type="submit" disabled={isSubmitting} className="w-full">
         {isSubmitting ? "Signing in…" : "Sign in"}

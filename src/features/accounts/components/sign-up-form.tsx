@@ -12,7 +12,10 @@ import { useSignUp } from "../api/sign-up";
 export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   const signUp = useSignUp();
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm({ resolver: zodResolver(SignUpBody), defaultValues: { email: "", displayName: "", password: "" } });
+  const form = useForm({
+    resolver: zodResolver(SignUpBody),
+    defaultValues: { email: "", displayName: "", password: "" },
+  });
   const { errors, isSubmitting } = form.formState;
   const submit = form.handleSubmit(async (values) => {
     setFormError(null);
@@ -25,8 +28,20 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   });
   return (
     <form onSubmit={submit} noValidate className="space-y-4" aria-label="Create an account">
-      <TextField label="Your name" autoComplete="name" maxLength={120} error={errors.displayName?.message} {...form.register("displayName")} />
-      <TextField label="E-mail address" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        maxLength={120}
+        error={errors.displayName?.message}
+        {...form.register("displayName")}
+      />
+      <TextField
+        label="E-mail address"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register("email")}
+      />
       <TextField
         label="Password"
         type="password"

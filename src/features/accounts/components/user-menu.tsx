@@ -27,7 +27,11 @@ export function UserMenu() {
   if (!session) return null;
   if (!session.user) {
     return (
-      <Link to="/sign-in" className="rounded-md bg-white px-3 py-1.5 text-sm font-medium text-slate-900 hover:bg-slate-100" data-testid="sign-in-link">
+      <Link
+        to="/sign-in"
+        className="rounded-md bg-white px-3 py-1.5 text-sm font-medium text-slate-900 hover:bg-slate-100"
+        data-testid="sign-in-link"
+      >
         Sign in
       </Link>
     );
@@ -49,16 +53,30 @@ export function UserMenu() {
           className="flex items-center gap-2 rounded-md px-3 py-1.5 text-sm font-medium text-white hover:bg-slate-800"
           data-testid="user-menu"
         >
-          <span className="flex h-7 w-7 items-center justify-center rounded-full bg-brand-700 text-xs font-semibold uppercase" aria-hidden>
+          <span
+            className="flex h-7 w-7 items-center justify-center rounded-full bg-brand-700 text-xs font-semibold uppercase"
+            aria-hidden
+          >
             {user.displayName.slice(0, 1)}
           </span>
           <span className="max-w-48 truncate">{user.displayName}</span>
           <span aria-hidden>▾</span>
         </button>
         {isOpen && (
-          <div role="menu" className="absolute right-0 z-30 mt-2 w-56 rounded-md bg-white py-1 text-sm text-slate-800 shadow-lg ring-1 ring-slate-200">
-            <p className="truncate px-4 py-2 text-xs text-slate-500">{user.email}{user.siteRole === "admin" ? " · site admin" : ""}</p>
-            <Link role="menuitem" to="/profile" className="block px-4 py-2 hover:bg-slate-100" onClick={() => setOpen(false)}>
+          <div
+            role="menu"
+            className="absolute right-0 z-30 mt-2 w-56 rounded-md bg-white py-1 text-sm text-slate-800 shadow-lg ring-1 ring-slate-200"
+          >
+            <p className="truncate px-4 py-2 text-xs text-slate-500">
+              {user.email}
+              {user.siteRole === "admin" ? " · site admin" : ""}
+            </p>
+            <Link
+              role="menuitem"
+              to="/profile"
+              className="block px-4 py-2 hover:bg-slate-100"
+              onClick={() => setOpen(false)}
+            >
               Profile
             </Link>
             <button

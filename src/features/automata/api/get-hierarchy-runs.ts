@@ -4,7 +4,8 @@ import { isRunFinished, RunList } from "@shared/schemas/runs";
 import { apiRequest } from "@/lib/api-client";
 import { automataKeys } from "./keys";
 
-export const getHierarchyRuns = (projectId: string) => apiRequest(`/projects/${projectId}/runs?kind=eca-hierarchy&limit=50`, RunList);
+export const getHierarchyRuns = (projectId: string) =>
+  apiRequest(`/projects/${projectId}/runs?kind=eca-hierarchy&limit=50`, RunList);
 
 export const hierarchyRunsQuery = (projectId: string) =>
   queryOptions({

@@ -3,10 +3,15 @@ import { RuleEmulations, type HierarchyParameters } from "@shared/schemas/automa
 import { apiRequest } from "@/lib/api-client";
 import { automataKeys, parameterQuery } from "./keys";
 
-export const getRuleEmulations = (rule: number, p: HierarchyParameters) => apiRequest(`/automata/rules/${rule}?${parameterQuery(p)}`, RuleEmulations);
+export const getRuleEmulations = (rule: number, p: HierarchyParameters) =>
+  apiRequest(`/automata/rules/${rule}?${parameterQuery(p)}`, RuleEmulations);
 
 export const ruleEmulationsQuery = (rule: number, p: HierarchyParameters) =>
-  queryOptions({ queryKey: automataKeys.rule(rule, p), queryFn: () => getRuleEmulations(rule, p), staleTime: Infinity });
+  queryOptions({
+    queryKey: automataKeys.rule(rule, p),
+    queryFn: () => getRuleEmulations(rule, p),
+    staleTime: Infinity,
+  });
 
 export function useRuleEmulations(rule: number, p: HierarchyParameters) {
   return useQuery(ruleEmulationsQuery(rule, p));

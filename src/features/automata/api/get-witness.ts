@@ -7,7 +7,11 @@ export const getWitness = (source: number, target: number, p: HierarchyParameter
   apiRequest(`/automata/witness?source=${source}&target=${target}&${parameterQuery(p)}`, WitnessReport);
 
 export const witnessQuery = (source: number, target: number, p: HierarchyParameters) =>
-  queryOptions({ queryKey: automataKeys.witness(source, target, p), queryFn: () => getWitness(source, target, p), staleTime: Infinity });
+  queryOptions({
+    queryKey: automataKeys.witness(source, target, p),
+    queryFn: () => getWitness(source, target, p),
+    staleTime: Infinity,
+  });
 
 export function useWitness(source: number, target: number | null, p: HierarchyParameters) {
   return useQuery({ ...witnessQuery(source, target ?? -1, p), enabled: target !== null });

@@ -5,8 +5,10 @@ export const automataKeys = {
   all: ["automata"] as const,
   hierarchies: () => [...automataKeys.all, "hierarchies"] as const,
   hierarchy: (p: HierarchyParameters) => [...automataKeys.all, "hierarchy", p.maxBlock, p.timeMode, p.radius] as const,
-  rule: (rule: number, p: HierarchyParameters) => [...automataKeys.all, "rule", rule, p.maxBlock, p.timeMode, p.radius] as const,
-  witness: (source: number, target: number, p: HierarchyParameters) => [...automataKeys.all, "witness", source, target, p.maxBlock, p.timeMode, p.radius] as const,
+  rule: (rule: number, p: HierarchyParameters) =>
+    [...automataKeys.all, "rule", rule, p.maxBlock, p.timeMode, p.radius] as const,
+  witness: (source: number, target: number, p: HierarchyParameters) =>
+    [...automataKeys.all, "witness", source, target, p.maxBlock, p.timeMode, p.radius] as const,
 };
 
 export function parameterQuery(p: HierarchyParameters): string {

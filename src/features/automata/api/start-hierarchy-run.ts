@@ -5,8 +5,14 @@ import type { HierarchyRunParameters } from "@shared/schemas/automata";
 import { apiRequest } from "@/lib/api-client";
 
 export const startHierarchyRun = (projectId: string, params: HierarchyRunParameters) =>
-  apiRequest(`/projects/${projectId}/runs`, StartRunResponse, { method: "POST", body: { kind: "eca-hierarchy", modelRevisionId: null, params } });
+  apiRequest(`/projects/${projectId}/runs`, StartRunResponse, {
+    method: "POST",
+    body: { kind: "eca-hierarchy", modelRevisionId: null, params },
+  });
 
 export function useStartHierarchyRun() {
-  return useMutation({ mutationFn: ({ projectId, params }: { projectId: string; params: HierarchyRunParameters }) => startHierarchyRun(projectId, params) });
+  return useMutation({
+    mutationFn: ({ projectId, params }: { projectId: string; params: HierarchyRunParameters }) =>
+      startHierarchyRun(projectId, params),
+  });
 }

@@ -37,7 +37,11 @@ export function EmulationList({ title, pairs, side, selected, onSelect, emptyTex
                 >
                   {other} <span className={isSelected ? "text-brand-100" : "text-slate-500"}>k={p.minBlock}</span>
                 </button>
-                <Link to={`/automata/rules/${other}`} className="rounded-r-md border border-l-0 border-slate-300 bg-slate-50 px-1.5 py-1 text-xs text-slate-600 hover:bg-slate-100" aria-label={`Open rule ${other}`}>
+                <Link
+                  to={`/automata/rules/${other}`}
+                  className="rounded-r-md border border-l-0 border-slate-300 bg-slate-50 px-1.5 py-1 text-xs text-slate-600 hover:bg-slate-100"
+                  aria-label={`Open rule ${other}`}
+                >
                   ↗
                 </Link>
               </li>

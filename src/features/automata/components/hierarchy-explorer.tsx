@@ -17,7 +17,8 @@ export interface HierarchyExplorerProps {
 function parseSearch(text: string): { rule: number | null; error: string | null } {
   const t = text.trim();
   if (t === "") return { rule: null, error: null };
-  if (!/^\d{1,3}$/.test(t) || Number(t) > 255) return { rule: null, error: "A rule number is a whole number from 0 to 255" };
+  if (!/^\d{1,3}$/.test(t) || Number(t) > 255)
+    return { rule: null, error: "A rule number is a whole number from 0 to 255" };
   return { rule: Number(t), error: null };
 }
 
@@ -37,34 +38,65 @@ function Legend({ largest }: { largest: number }) {
 
 function Loaded({ hierarchy }: { hierarchy: Hierarchy }) {
   const navigate = useNavigate();
-  const [filters, setFilters] = useState<HierarchyFilterValues>({ minBlock: 2, maxBlock: hierarchy.maxBlock, bySymmetryClass: true, search: "" });
+  const [filters, setFilters] = useState<HierarchyFilterValues>({
+    minBlock: 2,
+    maxBlock: hierarchy.maxBlock,
+    bySymmetryClass: true,
+    search: "",
+  });
   const { rule: searchRule, error: searchError } = parseSearch(filters.search);
   const model = useMemo(
-    () => buildHierarchyGraph(hierarchy.pairs, hierarchy.symmetryClasses, { minBlock: filters.minBlock, maxBlock: Math.min(filters.maxBlock, hierarchy.maxBlock), bySymmetryClass: filters.bySymmetryClass }),
+    () =>
+      buildHierarchyGraph(hierarchy.pairs, hierarchy.symmetryClasses, {
+        minBlock: filters.minBlock,
+        maxBlock: Math.min(filters.maxBlock, hierarchy.maxBlock),
+        bySymmetryClass: filters.bySymmetryClass,
+      }),
     [hierarchy, filters.minBlock, filters.maxBlock, filters.bySymmetryClass],
   );
   const notDrawn = searchRule !== null && !model.nodes.some((n) => n.rules.includes(searchRule));
   return (
     <div className="space-y-3">
-      <HierarchyFilters values={filters} largestBlock={hierarchy.maxBlock} onChange={setFilters} searchError={searchError} />
+      <HierarchyFilters
+        values={filters}
+        largestBlock={hierarchy.maxBlock}
+        onChange={setFilters}
+        searchError={searchError}
+      />
       <p className="text-sm text-slate-600" data-testid="hierarchy-stats">
-        {hierarchy.pairs.filter((p) => p.source !== p.target && !p.composed).length} emulating pairs for block sizes up to {hierarchy.maxBlock}
-        {" "}(plus {hierarchy.pairs.filter((p) => p.composed).length} more by composition)
-        {" · "}drawn: {model.nodes.length} nodes and {model.edges.length} arrows (transitive reduction of {model.pairsInRange} pairs with
-        k in {filters.minBlock}..{filters.maxBlock}){" · "}{hierarchy.emulateNothing.length} rules emulate nothing with 2 ≤ k ≤ {hierarchy.maxBlock}
-        {" · "}computed {new Date(hierarchy.computedAt).toLocaleString()} in {(hierarchy.durationMs / 1000).toFixed(1)} s
-        {hierarchy.computedBy ? ` by ${hierarchy.computedBy.displayName}` : ""}
+        {hierarchy.pairs.filter((p) => p.source !== p.target && !p.composed).length} emulating pairs for block sizes up
+        to {hierarchy.maxBlock} (plus {hierarchy.pairs.filter((p) => p.composed).length} more by composition)
+        {" · "}drawn: {model.nodes.length} nodes and {model.edges.length} arrows (transitive reduction of{" "}
+        {model.pairsInRange} pairs with k in {filters.minBlock}..{filters.maxBlock}){" · "}
+        {hierarchy.emulateNothing.length} rules emulate nothing with 2 ≤ k ≤ {hierarchy.maxBlock}
+        {" · "}computed {new Date(hierarchy.computedAt).toLocaleString()} in {(hierarchy.durationMs / 1000).toFixed(1)}{" "}
+        s{hierarchy.computedBy ? ` by ${hierarchy.computedBy.displayName}` : ""}
       </p>
-      {notDrawn && <p className="text-sm text-amber-700">Rule {searchRule} has no arrow in this range; <button type="button" className="underline" onClick={() => navigate(`/automata/rules/${searchRule}`)}>open its page</button>.</p>}
+      {notDrawn && (
+        <p className="text-sm text-amber-700">
+          Rule {searchRule} has no arrow in this range;{" "}
+          <button type="button" className="underline" onClick={() => navigate(`/automata/rules/${searchRule}`)}>
+            open its page
+          </button>
+          .
+        </p>
+      )}
       <Legend largest={hierarchy.maxBlock} />
       {model.nodes.length === 0 ? (
-        <p className="rounded-lg border border-slate-200 bg-white p-6 text-sm text-slate-600">No emulation with a least block size in this range.</p>
+        <p className="rounded-lg border border-slate-200 bg-white p-6 text-sm text-slate-600">
+          No emulation with a least block size in this range.
+        </p>
       ) : (
-        <HierarchyGraph model={model} highlightRule={searchRule} onOpenRule={(r) => navigate(`/automata/rules/${r}?maxBlock=${hierarchy.maxBlock}`)} />
+        <HierarchyGraph
+          model={model}
+          highlightRule={searchRule}
+          onOpenRule={(r) => navigate(`/automata/rules/${r}?maxBlock=${hierarchy.maxBlock}`)}
+        />
       )}
       <p className="text-xs text-slate-500">
-        Hover a node to see its arrows with their block sizes; click it to open the rule. With symmetry classes on, a node is named by the
-        least rule of its class (bigger dots are bigger classes); "≡" joins nodes that emulate each other.
+        Hover a node to see its arrows with their block sizes; click it to open the rule. With symmetry classes on, a
+        node is named by the least rule of its class (bigger dots are bigger classes); "≡" joins nodes that emulate each
+        other.
       </p>
     </div>
   );
@@ -90,7 +122,11 @@ export function HierarchyExplorer({ params, notStoredSlot }: HierarchyExplorerPr
         </div>
       );
     }
-    return <p className="text-sm text-red-700" role="alert">{err.message}</p>;
+    return (
+      <p className="text-sm text-red-700" role="alert">
+        {err.message}
+      </p>
+    );
   }
   return <Loaded key={`${params.maxBlock}/${params.timeMode}`} hierarchy={query.data} />;
 }

@@ -8,8 +8,20 @@ import forceAtlas2 from "graphology-layout-forceatlas2";
 import { useEffect, useMemo, useState } from "react";
 import type { HierarchyGraphModel } from "../lib/hierarchy-graph-model";
 
-interface NodeAttrs { x: number; y: number; size: number; label: string; color: string; rules: number[] }
-interface EdgeAttrs { size: number; label: string; color: string; type: string }
+interface NodeAttrs {
+  x: number;
+  y: number;
+  size: number;
+  label: string;
+  color: string;
+  rules: number[];
+}
+interface EdgeAttrs {
+  size: number;
+  label: string;
+  color: string;
+  type: string;
+}
 
 const blockColours = ["#0f766e", "#0d9488", "#2563eb", "#7c3aed", "#c026d3", "#db2777", "#ea580c", "#ca8a04"];
 
@@ -38,7 +50,12 @@ function buildGraph(model: HierarchyGraphModel): Graph<NodeAttrs, EdgeAttrs> {
     });
   });
   for (const e of model.edges) {
-    graph.addDirectedEdge(e.source, e.target, { size: 1, label: `k=${e.minBlock}`, color: edgeColour(e.minBlock), type: "arrow" });
+    graph.addDirectedEdge(e.source, e.target, {
+      size: 1,
+      label: `k=${e.minBlock}`,
+      color: edgeColour(e.minBlock),
+      type: "arrow",
+    });
   }
   if (graph.order > 1) forceAtlas2.assign(graph, { iterations: 150, settings: forceAtlas2.inferSettings(graph) });
   // ForceAtlas2 decides the order within a layer (related nodes end up near each other); the layers themselves
@@ -84,7 +101,8 @@ function Interactions({ highlightRule, onOpenRule }: { highlightRule: number | n
 
   useEffect(() => {
     const graph = sigma.getGraph();
-    const searched = highlightRule === null ? null : graph.findNode((_, a) => a.rules.includes(highlightRule)) ?? null;
+    const searched =
+      highlightRule === null ? null : (graph.findNode((_, a) => a.rules.includes(highlightRule)) ?? null);
     const focus = hovered ?? searched;
     const near = new Set<string>();
     if (focus && graph.hasNode(focus)) {
@@ -138,7 +156,12 @@ export function HierarchyGraph({ model, highlightRule, onOpenRule }: HierarchyGr
     [],
   );
   return (
-    <div data-testid="hierarchy-graph" data-nodes={model.nodes.length} data-edges={model.edges.length} className="h-[600px] w-full overflow-hidden rounded-lg border border-slate-200 bg-white">
+    <div
+      data-testid="hierarchy-graph"
+      data-nodes={model.nodes.length}
+      data-edges={model.edges.length}
+      className="h-[600px] w-full overflow-hidden rounded-lg border border-slate-200 bg-white"
+    >
       <SigmaContainer<NodeAttrs, EdgeAttrs> style={{ height: "100%", width: "100%" }} settings={settings}>
         <LoadGraph graph={graph} />
         <Interactions highlightRule={highlightRule} onOpenRule={onOpenRule} />

@@ -20,17 +20,33 @@ export function HierarchyRunPanel({ params }: { params: HierarchyParameters }) {
   const startedRun = useRun(started?.projectId ?? null, started?.runId ?? null);
   // a run for these parameters started earlier (another visit, another member) is followed instead of a new one
   const earlier = useHierarchyRuns(started ? null : chosen);
-  const matching = earlier.data?.find((r) => (r.params as { maxBlock?: number } | null)?.maxBlock === params.maxBlock && r.state !== "cancelled");
+  const matching = earlier.data?.find(
+    (r) => (r.params as { maxBlock?: number } | null)?.maxBlock === params.maxBlock && r.state !== "cancelled",
+  );
   const run = started ? startedRun.data : matching;
 
   useEffect(() => {
     if (run?.state === "succeeded") void queryClient.invalidateQueries({ queryKey: automataKeys.hierarchy(params) });
   }, [run?.state, queryClient, params]);
 
-  if (projects.isPending) return <p className="text-sm text-slate-600" role="status">Looking for projects you can run in…</p>;
-  if (projects.isError) return <p className="text-sm text-red-700" role="alert">{projects.error.message}</p>;
+  if (projects.isPending)
+    return (
+      <p className="text-sm text-slate-600" role="status">
+        Looking for projects you can run in…
+      </p>
+    );
+  if (projects.isError)
+    return (
+      <p className="text-sm text-red-700" role="alert">
+        {projects.error.message}
+      </p>
+    );
   if (projects.data.length === 0) {
-    return <p className="text-sm text-slate-600">None of your projects lets you start runs; ask a project owner for the modeler role.</p>;
+    return (
+      <p className="text-sm text-slate-600">
+        None of your projects lets you start runs; ask a project owner for the modeler role.
+      </p>
+    );
   }
   return (
     <div className="space-y-3 rounded-lg border border-slate-200 bg-white p-4" data-testid="hierarchy-run-panel">
@@ -46,16 +62,31 @@ export function HierarchyRunPanel({ params }: { params: HierarchyParameters }) {
       >
         <label className="flex flex-col gap-1 text-sm text-slate-700">
           Run it in project
-          <select className="rounded-md border border-slate-300 px-2 py-1 text-sm" value={chosen} onChange={(e) => setProjectId(e.target.value)}>
-            {projects.data.map((p) => <option key={p.id} value={p.id}>{p.name}</option>)}
+          <select
+            className="rounded-md border border-slate-300 px-2 py-1 text-sm"
+            value={chosen}
+            onChange={(e) => setProjectId(e.target.value)}
+          >
+            {projects.data.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
           </select>
         </label>
-        <button type="submit" disabled={start.isPending || (run !== undefined && run.state !== "failed")}
-          className="rounded-md bg-brand-700 px-3 py-1.5 text-sm font-medium text-white hover:bg-brand-800 disabled:opacity-50">
+        <button
+          type="submit"
+          disabled={start.isPending || (run !== undefined && run.state !== "failed")}
+          className="rounded-md bg-brand-700 px-3 py-1.5 text-sm font-medium text-white hover:bg-brand-800 disabled:opacity-50"
+        >
           Compute block sizes up to {params.maxBlock} in the background
         </button>
       </form>
-      {start.isError && <p className="text-sm text-red-700" role="alert">{start.error.message}</p>}
+      {start.isError && (
+        <p className="text-sm text-red-700" role="alert">
+          {start.error.message}
+        </p>
+      )}
       {run && <RunProgress run={run} />}
     </div>
   );

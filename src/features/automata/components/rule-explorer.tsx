@@ -15,11 +15,25 @@ function WitnessPanel({ pair, params }: { pair: { source: number; target: number
   return (
     <section className="space-y-3 rounded-lg border border-slate-200 bg-white p-4" data-testid="witness-panel">
       <h2 className="text-base font-semibold text-slate-800">
-        Rule <Link className="text-brand-700 underline" to={`/automata/rules/${pair.source}?maxBlock=${params.maxBlock}`}>{pair.source}</Link> emulates rule{" "}
-        <Link className="text-brand-700 underline" to={`/automata/rules/${pair.target}?maxBlock=${params.maxBlock}`}>{pair.target}</Link>
+        Rule{" "}
+        <Link className="text-brand-700 underline" to={`/automata/rules/${pair.source}?maxBlock=${params.maxBlock}`}>
+          {pair.source}
+        </Link>{" "}
+        emulates rule{" "}
+        <Link className="text-brand-700 underline" to={`/automata/rules/${pair.target}?maxBlock=${params.maxBlock}`}>
+          {pair.target}
+        </Link>
       </h2>
-      {query.isPending && <p className="text-sm text-slate-600" role="status">Checking the witness…</p>}
-      {query.isError && <p className="text-sm text-red-700" role="alert">{query.error.message}</p>}
+      {query.isPending && (
+        <p className="text-sm text-slate-600" role="status">
+          Checking the witness…
+        </p>
+      )}
+      {query.isError && (
+        <p className="text-sm text-red-700" role="alert">
+          {query.error.message}
+        </p>
+      )}
       {query.data && (
         <>
           <WitnessChecks report={query.data} />
@@ -36,22 +50,43 @@ export function RuleExplorer({ rule, params }: { rule: number; params: Hierarchy
   const data = query.data;
   // until the user picks, show the first non-trivial pair so the page always has a witness to look at
   const nonTrivial = (p: HierarchyPairWithWitness) => p.source !== p.target;
-  const fallback = data ? data.emulates.find(nonTrivial) ?? data.emulatedBy.find(nonTrivial) ?? null : null;
+  const fallback = data ? (data.emulates.find(nonTrivial) ?? data.emulatedBy.find(nonTrivial) ?? null) : null;
   const selected = chosen ?? (fallback ? { source: fallback.source, target: fallback.target } : null);
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-start gap-8">
         <RuleDiagram rule={rule} />
         <div className="min-w-64 flex-1 space-y-4">
-          {query.isPending && <p className="text-sm text-slate-600" role="status">Loading what rule {rule} emulates…</p>}
-          {query.isError && <p className="text-sm text-red-700" role="alert">{query.error.message}</p>}
+          {query.isPending && (
+            <p className="text-sm text-slate-600" role="status">
+              Loading what rule {rule} emulates…
+            </p>
+          )}
+          {query.isError && (
+            <p className="text-sm text-red-700" role="alert">
+              {query.error.message}
+            </p>
+          )}
           {data && (
             <>
               <p className="text-sm text-slate-600">
-                Symmetry class: {data.symmetryClass.map((r, i) => (
-                  <span key={r}>{i > 0 && ", "}{r === rule ? <strong>{r}</strong> : <Link className="text-brand-700 underline" to={`/automata/rules/${r}?maxBlock=${params.maxBlock}`}>{r}</Link>}</span>
-                ))}
-                {" "}(reflection and 0/1 complement). Block sizes up to {data.maxBlock}.
+                Symmetry class:{" "}
+                {data.symmetryClass.map((r, i) => (
+                  <span key={r}>
+                    {i > 0 && ", "}
+                    {r === rule ? (
+                      <strong>{r}</strong>
+                    ) : (
+                      <Link
+                        className="text-brand-700 underline"
+                        to={`/automata/rules/${r}?maxBlock=${params.maxBlock}`}
+                      >
+                        {r}
+                      </Link>
+                    )}
+                  </span>
+                ))}{" "}
+                (reflection and 0/1 complement). Block sizes up to {data.maxBlock}.
               </p>
               <EmulationList
                 title={`Rule ${rule} emulates`}

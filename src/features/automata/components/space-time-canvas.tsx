@@ -14,7 +14,16 @@ export interface SpaceTimeCanvasProps {
   testId?: string;
 }
 
-export function SpaceTimeCanvas({ cells, width, rows, cellWidth, cellHeight, blockEvery, label, testId }: SpaceTimeCanvasProps) {
+export function SpaceTimeCanvas({
+  cells,
+  width,
+  rows,
+  cellWidth,
+  cellHeight,
+  blockEvery,
+  label,
+  testId,
+}: SpaceTimeCanvasProps) {
   const ref = useRef<HTMLCanvasElement>(null);
   const pixelWidth = Math.ceil(width * cellWidth);
   const pixelHeight = rows * cellHeight;
@@ -30,7 +39,8 @@ export function SpaceTimeCanvas({ cells, width, rows, cellWidth, cellHeight, blo
     ctx.fillRect(0, 0, pixelWidth, pixelHeight);
     ctx.fillStyle = "#0f172a";
     for (let s = 0; s < rows; s++) {
-      for (let i = 0; i < width; i++) if (cells[s * width + i]) ctx.fillRect(i * cellWidth, s * cellHeight, cellWidth, cellHeight);
+      for (let i = 0; i < width; i++)
+        if (cells[s * width + i]) ctx.fillRect(i * cellWidth, s * cellHeight, cellWidth, cellHeight);
     }
     if (blockEvery && blockEvery > 1) {
       ctx.strokeStyle = "rgba(13, 148, 136, 0.45)";

@@ -21,10 +21,13 @@ export function WitnessChecks({ report }: { report: WitnessReport }) {
   return (
     <div className="space-y-2" data-testid="witness-checks">
       <p className="text-sm text-slate-700">
-        Block size <strong>{report.minBlock}</strong>, time scale <strong>{report.witness.time}</strong>: 0 is encoded as{" "}
-        <code className="rounded bg-slate-100 px-1 font-mono">{report.witness.encoding["0"]}</code>, 1 as{" "}
+        Block size <strong>{report.minBlock}</strong>, time scale <strong>{report.witness.time}</strong>: 0 is encoded
+        as <code className="rounded bg-slate-100 px-1 font-mono">{report.witness.encoding["0"]}</code>, 1 as{" "}
         <code className="rounded bg-slate-100 px-1 font-mono">{report.witness.encoding["1"]}</code>.{" "}
-        <span className={report.verified ? "font-medium text-brand-700" : "font-medium text-red-700"} data-testid="witness-verdict">
+        <span
+          className={report.verified ? "font-medium text-brand-700" : "font-medium text-red-700"}
+          data-testid="witness-verdict"
+        >
           {report.verified ? "The independent verifier confirms it." : "The independent verifier rejects it."}
         </span>
       </p>
@@ -34,8 +37,12 @@ export function WitnessChecks({ report }: { report: WitnessReport }) {
             <tr>
               <th className="py-1 pr-4">a b c</th>
               <th className="py-1 pr-4">G(a,b,c)</th>
-              <th className="py-1 pr-4">u<sub>a</sub> u<sub>b</sub> u<sub>c</sub></th>
-              <th className="py-1 pr-4">middle after {report.witness.time} steps of rule {report.source}</th>
+              <th className="py-1 pr-4">
+                u<sub>a</sub> u<sub>b</sub> u<sub>c</sub>
+              </th>
+              <th className="py-1 pr-4">
+                middle after {report.witness.time} steps of rule {report.source}
+              </th>
               <th className="py-1">agrees</th>
             </tr>
           </thead>
@@ -44,9 +51,15 @@ export function WitnessChecks({ report }: { report: WitnessReport }) {
               <tr key={c.neighbourhood}>
                 <td className="py-1 pr-4 font-mono">{c.neighbourhood.split("").join(" ")}</td>
                 <td className="py-1 pr-4 font-mono">{c.expectedBit}</td>
-                <td className="py-1 pr-4"><Word text={c.input} k={k} /></td>
-                <td className="py-1 pr-4"><Word text={c.obtained} k={k} /></td>
-                <td className={`py-1 ${c.agrees ? "text-brand-700" : "text-red-700"}`}>{c.agrees ? "yes" : `no (expected ${c.expected})`}</td>
+                <td className="py-1 pr-4">
+                  <Word text={c.input} k={k} />
+                </td>
+                <td className="py-1 pr-4">
+                  <Word text={c.obtained} k={k} />
+                </td>
+                <td className={`py-1 ${c.agrees ? "text-brand-700" : "text-red-700"}`}>
+                  {c.agrees ? "yes" : `no (expected ${c.expected})`}
+                </td>
               </tr>
             ))}
           </tbody>

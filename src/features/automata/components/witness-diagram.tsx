@@ -44,14 +44,33 @@ export function WitnessDiagram({ report }: { report: WitnessReport }) {
     <div className="space-y-3" data-testid="witness-diagram">
       <div className="flex flex-wrap items-start gap-6">
         <figure className="space-y-1">
-          <figcaption className="text-sm font-medium text-slate-700">Rule {report.target} (emulated), {STEPS} steps</figcaption>
-          <SpaceTimeCanvas cells={runs.g.cells} width={BLOCKS} rows={runs.rows} cellWidth={gCell} cellHeight={ROW_HEIGHT} label={`Run of rule ${report.target}`} testId="witness-target-run" />
+          <figcaption className="text-sm font-medium text-slate-700">
+            Rule {report.target} (emulated), {STEPS} steps
+          </figcaption>
+          <SpaceTimeCanvas
+            cells={runs.g.cells}
+            width={BLOCKS}
+            rows={runs.rows}
+            cellWidth={gCell}
+            cellHeight={ROW_HEIGHT}
+            label={`Run of rule ${report.target}`}
+            testId="witness-target-run"
+          />
         </figure>
         <figure className="space-y-1">
           <figcaption className="text-sm font-medium text-slate-700">
             Rule {report.source} (emulator) from the encoding, one row every {runs.t === 1 ? "step" : `${runs.t} steps`}
           </figcaption>
-          <SpaceTimeCanvas cells={runs.f.cells} width={BLOCKS * runs.k} rows={runs.rows} cellWidth={fCell} cellHeight={ROW_HEIGHT} blockEvery={fCell * runs.k >= 8 ? runs.k : undefined} label={`Run of rule ${report.source} from the encoded configuration`} testId="witness-source-run" />
+          <SpaceTimeCanvas
+            cells={runs.f.cells}
+            width={BLOCKS * runs.k}
+            rows={runs.rows}
+            cellWidth={fCell}
+            cellHeight={ROW_HEIGHT}
+            blockEvery={fCell * runs.k >= 8 ? runs.k : undefined}
+            label={`Run of rule ${report.source} from the encoded configuration`}
+            testId="witness-source-run"
+          />
         </figure>
       </div>
       <p className={`text-sm ${allAgree ? "text-brand-700" : "text-red-700"}`} data-testid="witness-agreement">

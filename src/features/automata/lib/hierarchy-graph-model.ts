@@ -36,9 +36,16 @@ export interface HierarchyGraphModel {
   pairsInRange: number;
 }
 
-interface UnitEdge { minBlock: number; pair: { source: number; target: number } }
+interface UnitEdge {
+  minBlock: number;
+  pair: { source: number; target: number };
+}
 
-export function buildHierarchyGraph(pairs: readonly HierarchyPair[], symmetryClasses: readonly number[][], filters: GraphFilters): HierarchyGraphModel {
+export function buildHierarchyGraph(
+  pairs: readonly HierarchyPair[],
+  symmetryClasses: readonly number[][],
+  filters: GraphFilters,
+): HierarchyGraphModel {
   const unitOf = new Int32Array(256);
   const unitRules: number[][] = [];
   const unitLabels: string[] = [];
@@ -68,7 +75,8 @@ export function buildHierarchyGraph(pairs: readonly HierarchyPair[], symmetryCla
     let out = adjacency.get(u);
     if (!out) adjacency.set(u, (out = new Map()));
     const prev = out.get(v);
-    if (!prev || p.minBlock < prev.minBlock) out.set(v, { minBlock: p.minBlock, pair: { source: p.source, target: p.target } });
+    if (!prev || p.minBlock < prev.minBlock)
+      out.set(v, { minBlock: p.minBlock, pair: { source: p.source, target: p.target } });
   }
 
   const component = stronglyConnectedComponents(n, (u) => adjacency.get(u)?.keys() ?? []);
@@ -80,7 +88,8 @@ export function buildHierarchyGraph(pairs: readonly HierarchyPair[], symmetryCla
   const dag = new Map<number, Map<number, UnitEdge>>();
   for (const [u, out] of adjacency) {
     for (const [v, e] of out) {
-      const cu = component[u]!, cv = component[v]!;
+      const cu = component[u]!,
+        cv = component[v]!;
       if (cu === cv) continue;
       let row = dag.get(cu);
       if (!row) dag.set(cu, (row = new Map()));
@@ -141,7 +150,12 @@ export function buildHierarchyGraph(pairs: readonly HierarchyPair[], symmetryCla
   const idOf = (c: number) => `n${unitRules[members[c]![0]!]![0]}`;
   return {
     nodes,
-    edges: edges.map(({ from, to, e }) => ({ source: idOf(from), target: idOf(to), minBlock: e.minBlock, pair: e.pair })),
+    edges: edges.map(({ from, to, e }) => ({
+      source: idOf(from),
+      target: idOf(to),
+      minBlock: e.minBlock,
+      pair: e.pair,
+    })),
     isolated,
     pairsInRange,
   };

@@ -3,7 +3,8 @@ import { Run } from "@shared/schemas/runs";
 import { apiRequest } from "@/lib/api-client";
 import { modelKeys } from "./keys";
 
-export const cancelRun = (projectId: string, runId: string) => apiRequest(`/projects/${projectId}/runs/${runId}/cancel`, Run, { method: "POST" });
+export const cancelRun = (projectId: string, runId: string) =>
+  apiRequest(`/projects/${projectId}/runs/${runId}/cancel`, Run, { method: "POST" });
 
 export function useCancelRun(projectId: string) {
   const qc = useQueryClient();

@@ -4,9 +4,14 @@ import { apiRequest } from "@/lib/api-client";
 import { revisionPath } from "./keys";
 
 export const comparePerturbation = (projectId: string, modelId: string, revision: number, body: PerturbationBody) =>
-  apiRequest(`${revisionPath(projectId, modelId, revision)}/perturbation`, PerturbationResult, { method: "POST", body });
+  apiRequest(`${revisionPath(projectId, modelId, revision)}/perturbation`, PerturbationResult, {
+    method: "POST",
+    body,
+  });
 
 /** A computation, not a change: nothing to invalidate afterwards. */
 export function useComparePerturbation(projectId: string, modelId: string, revision: number) {
-  return useMutation({ mutationFn: (body: PerturbationBody) => comparePerturbation(projectId, modelId, revision, body) });
+  return useMutation({
+    mutationFn: (body: PerturbationBody) => comparePerturbation(projectId, modelId, revision, body),
+  });
 }

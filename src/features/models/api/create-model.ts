@@ -3,7 +3,8 @@ import { ModelDetail, type CreateModelBody } from "@shared/schemas/models";
 import { apiRequest } from "@/lib/api-client";
 import { modelKeys, modelsPath } from "./keys";
 
-export const createModel = (projectId: string, body: CreateModelBody) => apiRequest(modelsPath(projectId), ModelDetail, { method: "POST", body });
+export const createModel = (projectId: string, body: CreateModelBody) =>
+  apiRequest(modelsPath(projectId), ModelDetail, { method: "POST", body });
 
 export function useCreateModel(projectId: string) {
   const qc = useQueryClient();

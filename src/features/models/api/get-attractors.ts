@@ -4,7 +4,10 @@ import { apiRequest } from "@/lib/api-client";
 import { modelKeys, revisionPath } from "./keys";
 
 export const getAttractors = (projectId: string, modelId: string, revision: number, markers: readonly string[]) =>
-  apiRequest(`${revisionPath(projectId, modelId, revision)}/attractors?markers=${encodeURIComponent(markers.join(","))}`, SynchronousResult);
+  apiRequest(
+    `${revisionPath(projectId, modelId, revision)}/attractors?markers=${encodeURIComponent(markers.join(","))}`,
+    SynchronousResult,
+  );
 
 export const attractorsQuery = (projectId: string, modelId: string, revision: number, markers: readonly string[]) =>
   queryOptions({
@@ -15,6 +18,12 @@ export const attractorsQuery = (projectId: string, modelId: string, revision: nu
     retry: false,
   });
 
-export function useAttractors(projectId: string, modelId: string, revision: number, markers: readonly string[], enabled = true) {
+export function useAttractors(
+  projectId: string,
+  modelId: string,
+  revision: number,
+  markers: readonly string[],
+  enabled = true,
+) {
   return useQuery({ ...attractorsQuery(projectId, modelId, revision, markers), enabled });
 }

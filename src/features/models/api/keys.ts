@@ -4,9 +4,11 @@ export const modelKeys = {
   project: (projectId: string) => [...modelKeys.all, projectId] as const,
   list: (projectId: string) => [...modelKeys.project(projectId), "list"] as const,
   model: (projectId: string, modelId: string) => [...modelKeys.project(projectId), "model", modelId] as const,
-  detail: (projectId: string, modelId: string, revision: number | "latest") => [...modelKeys.model(projectId, modelId), "detail", revision] as const,
+  detail: (projectId: string, modelId: string, revision: number | "latest") =>
+    [...modelKeys.model(projectId, modelId), "detail", revision] as const,
   revisions: (projectId: string, modelId: string) => [...modelKeys.model(projectId, modelId), "revisions"] as const,
-  revision: (projectId: string, modelId: string, revision: number) => [...modelKeys.model(projectId, modelId), "revision", revision] as const,
+  revision: (projectId: string, modelId: string, revision: number) =>
+    [...modelKeys.model(projectId, modelId), "revision", revision] as const,
   validate: (projectId: string, ruleText: string) => [...modelKeys.project(projectId), "validate", ruleText] as const,
 };
 

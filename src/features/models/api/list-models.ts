@@ -5,7 +5,8 @@ import { modelKeys, modelsPath } from "./keys";
 
 export const listModels = (projectId: string) => apiRequest(modelsPath(projectId), ModelList);
 
-export const modelListQuery = (projectId: string) => queryOptions({ queryKey: modelKeys.list(projectId), queryFn: () => listModels(projectId) });
+export const modelListQuery = (projectId: string) =>
+  queryOptions({ queryKey: modelKeys.list(projectId), queryFn: () => listModels(projectId) });
 
 export function useModelList(projectId: string) {
   return useQuery(modelListQuery(projectId));

@@ -3,7 +3,10 @@ import { ModelDetail } from "@shared/schemas/models";
 import { apiRequest } from "@/lib/api-client";
 import { modelKeys, modelsPath } from "./keys";
 
-export interface UploadInput { file: File; name?: string }
+export interface UploadInput {
+  file: File;
+  name?: string;
+}
 
 export function uploadModel(projectId: string, { file, name }: UploadInput) {
   const form = new FormData();

@@ -18,7 +18,14 @@ export interface AttractorRunPanelProps {
   canStart: boolean;
 }
 
-export function AttractorRunPanel({ projectId, modelId, revision, revisionId, nodeCount, canStart }: AttractorRunPanelProps) {
+export function AttractorRunPanel({
+  projectId,
+  modelId,
+  revision,
+  revisionId,
+  nodeCount,
+  canStart,
+}: AttractorRunPanelProps) {
   const qc = useQueryClient();
   const start = useStartAttractorRun(projectId);
   const cancel = useCancelRun(projectId);
@@ -27,31 +34,50 @@ export function AttractorRunPanel({ projectId, modelId, revision, revisionId, no
   const state = run.data?.state;
 
   useEffect(() => {
-    if (state === "succeeded") void qc.invalidateQueries({ queryKey: modelKeys.revision(projectId, modelId, revision) });
+    if (state === "succeeded")
+      void qc.invalidateQueries({ queryKey: modelKeys.revision(projectId, modelId, revision) });
   }, [state, qc, projectId, modelId, revision]);
 
   return (
-    <div data-testid="attractor-run-panel" className="space-y-2 rounded-md border border-slate-200 bg-slate-50 p-3 text-sm">
+    <div
+      data-testid="attractor-run-panel"
+      className="space-y-2 rounded-md border border-slate-200 bg-slate-50 p-3 text-sm"
+    >
       <p className="text-slate-700">
-        This model has {nodeCount} nodes ({(2 ** nodeCount).toLocaleString()} states). Its exact synchronous analysis runs in the background; the
-        result is stored with revision {revision} and reused afterwards.
+        This model has {nodeCount} nodes ({(2 ** nodeCount).toLocaleString()} states). Its exact synchronous analysis
+        runs in the background; the result is stored with revision {revision} and reused afterwards.
       </p>
       {!runId && canStart && (
-        <Button data-testid="start-attractor-run" disabled={start.isPending} onClick={() => start.mutate(revisionId, { onSuccess: (r) => setRunId(r.id) })}>
+        <Button
+          data-testid="start-attractor-run"
+          disabled={start.isPending}
+          onClick={() => start.mutate(revisionId, { onSuccess: (r) => setRunId(r.id) })}
+        >
           Compute attractors
         </Button>
       )}
       {!runId && !canStart && <p className="text-slate-600">Ask a modeler or the project owner to start it.</p>}
-      {start.error && <p role="alert" className="text-red-700">{start.error.message}</p>}
+      {start.error && (
+        <p role="alert" className="text-red-700">
+          {start.error.message}
+        </p>
+      )}
       {run.data && (state === "queued" || state === "running") && (
         <div className="space-y-1">
           <ProgressBar fraction={run.data.progressFraction} label="Attractor analysis progress" />
           <div className="flex items-center justify-between text-xs text-slate-600">
             <span>
-              {state === "queued" ? "Waiting for a worker…" : `${run.data.progressPhase} · ${Math.round(run.data.progressFraction * 100)}%`}
+              {state === "queued"
+                ? "Waiting for a worker…"
+                : `${run.data.progressPhase} · ${Math.round(run.data.progressFraction * 100)}%`}
             </span>
             {canStart && (
-              <Button variant="secondary" size="sm" disabled={cancel.isPending} onClick={() => cancel.mutate(run.data!.id)}>
+              <Button
+                variant="secondary"
+                size="sm"
+                disabled={cancel.isPending}
+                onClick={() => cancel.mutate(run.data!.id)}
+              >
                 Cancel
               </Button>
             )}

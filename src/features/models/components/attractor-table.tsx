@@ -4,9 +4,16 @@ import type { SynchronousResult } from "@shared/schemas/models";
 
 export function StateCells({ state, nodes, testId }: { state: string; nodes: readonly string[]; testId?: string }) {
   return (
-    <span data-testid={testId} className="inline-flex font-mono" title={nodes.map((n, i) => `${n}=${state[i]}`).join(" ")}>
+    <span
+      data-testid={testId}
+      className="inline-flex font-mono"
+      title={nodes.map((n, i) => `${n}=${state[i]}`).join(" ")}
+    >
       {[...state].map((c, i) => (
-        <span key={i} className={`inline-block w-3 text-center text-[11px] leading-4 ${c === "1" ? "bg-brand-600 text-white" : "bg-slate-100 text-slate-500"}`}>
+        <span
+          key={i}
+          className={`inline-block w-3 text-center text-[11px] leading-4 ${c === "1" ? "bg-brand-600 text-white" : "bg-slate-100 text-slate-500"}`}
+        >
           {c}
         </span>
       ))}
@@ -24,7 +31,11 @@ export function AttractorTable({ result, selected, onSelect }: AttractorTablePro
   const hasPhenotypes = result.markers.length > 0;
   return (
     <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
-      <table data-testid="attractor-table" data-count={result.attractors.length} className="min-w-full divide-y divide-slate-200 text-sm">
+      <table
+        data-testid="attractor-table"
+        data-count={result.attractors.length}
+        className="min-w-full divide-y divide-slate-200 text-sm"
+      >
         <thead className="bg-slate-50 text-left text-xs font-semibold uppercase tracking-wide text-slate-600">
           <tr>
             <th className="px-3 py-2">#</th>
@@ -46,9 +57,15 @@ export function AttractorTable({ result, selected, onSelect }: AttractorTablePro
             >
               <td className="px-3 py-2 tabular-nums text-slate-500">{i + 1}</td>
               <td className="px-3 py-2">{a.length === 1 ? "fixed point" : `cycle of ${a.length}`}</td>
-              <td className="px-3 py-2 text-right tabular-nums" data-testid="attractor-basin">{a.basin}</td>
+              <td className="px-3 py-2 text-right tabular-nums" data-testid="attractor-basin">
+                {a.basin}
+              </td>
               <td className="px-3 py-2 text-right tabular-nums">{((100 * a.basin) / result.stateCount).toFixed(1)}%</td>
-              {hasPhenotypes && <td className="px-3 py-2 font-mono" data-testid="attractor-phenotype">{a.phenotype}</td>}
+              {hasPhenotypes && (
+                <td className="px-3 py-2 font-mono" data-testid="attractor-phenotype">
+                  {a.phenotype}
+                </td>
+              )}
               <td className="space-y-0.5 px-3 py-2">
                 {a.states.slice(0, 6).map((s, j) => (
                   <div key={j}>
@@ -62,8 +79,9 @@ export function AttractorTable({ result, selected, onSelect }: AttractorTablePro
         </tbody>
       </table>
       <p className="border-t border-slate-100 px-3 py-2 text-xs text-slate-500">
-        {result.stateCount.toLocaleString()} states; longest transient {result.maxTransient} step{result.maxTransient === 1 ? "" : "s"}, mean{" "}
-        {result.meanTransient.toFixed(2)}. Phenotype: 1 always on, 0 always off, ~ oscillates on the attractor.
+        {result.stateCount.toLocaleString()} states; longest transient {result.maxTransient} step
+        {result.maxTransient === 1 ? "" : "s"}, mean {result.meanTransient.toFixed(2)}. Phenotype: 1 always on, 0 always
+        off, ~ oscillates on the attractor.
       </p>
     </div>
   );

@@ -2,11 +2,21 @@
 import { Link } from "react-router-dom";
 import type { ModelSummary } from "@shared/schemas/models";
 
-const sourceLabel: Record<ModelSummary["source"], string> = { rules: "rule text", sbml: "SBML-qual", csv: "truth tables", generator: "generator", edit: "edited" };
+const sourceLabel: Record<ModelSummary["source"], string> = {
+  rules: "rule text",
+  sbml: "SBML-qual",
+  csv: "truth tables",
+  generator: "generator",
+  edit: "edited",
+};
 
 export function ModelsTable({ projectId, models }: { projectId: string; models: readonly ModelSummary[] }) {
   if (models.length === 0) {
-    return <p className="rounded-md border border-dashed border-slate-300 bg-white p-6 text-center text-sm text-slate-600">No models yet.</p>;
+    return (
+      <p className="rounded-md border border-dashed border-slate-300 bg-white p-6 text-center text-sm text-slate-600">
+        No models yet.
+      </p>
+    );
   }
   return (
     <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
@@ -25,7 +35,10 @@ export function ModelsTable({ projectId, models }: { projectId: string; models: 
           {models.map((m) => (
             <tr key={m.id} className="hover:bg-slate-50">
               <td className="px-4 py-2">
-                <Link to={`/projects/${projectId}/models/${m.id}`} className="font-medium text-brand-700 hover:underline">
+                <Link
+                  to={`/projects/${projectId}/models/${m.id}`}
+                  className="font-medium text-brand-700 hover:underline"
+                >
                   {m.name}
                 </Link>
                 {m.description && <p className="max-w-md truncate text-xs text-slate-500">{m.description}</p>}

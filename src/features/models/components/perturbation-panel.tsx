@@ -25,11 +25,27 @@ function AttractorList({ title, result }: { title: string; result: PerturbationR
   );
 }
 
-export function PerturbationPanel({ projectId, modelId, revision, nodes, inputs, markers }: { projectId: string; modelId: string; revision: number; nodes: readonly string[]; inputs: readonly string[]; markers: readonly string[] }) {
+export function PerturbationPanel({
+  projectId,
+  modelId,
+  revision,
+  nodes,
+  inputs,
+  markers,
+}: {
+  projectId: string;
+  modelId: string;
+  revision: number;
+  nodes: readonly string[];
+  inputs: readonly string[];
+  markers: readonly string[];
+}) {
   const compare = useComparePerturbation(projectId, modelId, revision);
   const [choice, setChoice] = useState<Record<string, Choice>>({});
   const chosen = (c: Choice) => nodes.filter((n) => choice[n] === c && !inputs.includes(n));
-  const fixed = Object.fromEntries(inputs.filter((n) => choice[n] === "ko" || choice[n] === "oe").map((n) => [n, choice[n] === "oe" ? 1 : 0] as const));
+  const fixed = Object.fromEntries(
+    inputs.filter((n) => choice[n] === "ko" || choice[n] === "oe").map((n) => [n, choice[n] === "oe" ? 1 : 0] as const),
+  );
   const isEmpty = chosen("ko").length + chosen("oe").length + Object.keys(fixed).length === 0;
   const total = compare.data?.before.stateCount ?? 1;
 
@@ -57,12 +73,18 @@ export function PerturbationPanel({ projectId, modelId, revision, nodes, inputs,
         type="button"
         disabled={isEmpty || compare.isPending}
         data-testid="perturb-run"
-        onClick={() => compare.mutate({ knockOut: chosen("ko"), overExpress: chosen("oe"), fixed, markers: [...markers] })}
+        onClick={() =>
+          compare.mutate({ knockOut: chosen("ko"), overExpress: chosen("oe"), fixed, markers: [...markers] })
+        }
         className="rounded-md bg-brand-700 px-3 py-1.5 text-sm font-medium text-white hover:bg-brand-800 disabled:opacity-50"
       >
         Compare attractors
       </button>
-      {compare.error && <p role="alert" className="text-sm text-red-700">{compare.error.message}</p>}
+      {compare.error && (
+        <p role="alert" className="text-sm text-red-700">
+          {compare.error.message}
+        </p>
+      )}
       {compare.data && (
         <div data-testid="perturbation-result" className="space-y-3">
           {markers.length > 0 && (
@@ -79,7 +101,11 @@ export function PerturbationPanel({ projectId, modelId, revision, nodes, inputs,
                   <tr key={p.phenotype}>
                     <td className="pr-6 font-mono">{p.phenotype}</td>
                     <td className="pr-6 text-right tabular-nums">{((100 * p.basinBefore) / total).toFixed(1)}%</td>
-                    <td className={`text-right tabular-nums ${p.basinAfter !== p.basinBefore ? "font-semibold text-amber-700" : ""}`}>{((100 * p.basinAfter) / total).toFixed(1)}%</td>
+                    <td
+                      className={`text-right tabular-nums ${p.basinAfter !== p.basinBefore ? "font-semibold text-amber-700" : ""}`}
+                    >
+                      {((100 * p.basinAfter) / total).toFixed(1)}%
+                    </td>
                   </tr>
                 ))}
               </tbody>

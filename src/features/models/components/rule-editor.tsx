@@ -50,24 +50,53 @@ export function RuleEditor({ projectId, value, onChange, serverErrors = [], rows
 
   return (
     <div className="space-y-2">
-      <div className="flex overflow-hidden rounded-md border border-slate-300 bg-white focus-within:ring-2 focus-within:ring-brand-600" style={{ height: `calc(${rows} * ${lineHeight} + 1rem)` }}>
-        <div ref={gutter} aria-hidden className="select-none overflow-hidden border-r border-slate-200 bg-slate-50 py-2 text-right font-mono text-xs text-slate-400">
+      <div
+        className="flex overflow-hidden rounded-md border border-slate-300 bg-white focus-within:ring-2 focus-within:ring-brand-600"
+        style={{ height: `calc(${rows} * ${lineHeight} + 1rem)` }}
+      >
+        <div
+          ref={gutter}
+          aria-hidden
+          className="select-none overflow-hidden border-r border-slate-200 bg-slate-50 py-2 text-right font-mono text-xs text-slate-400"
+        >
           {lines.map((_, i) => (
-            <div key={i} style={{ height: lineHeight, lineHeight }} className={`px-2 ${byLine.has(i + 1) ? "bg-red-100 font-semibold text-red-700" : ""}`} title={byLine.get(i + 1)?.message}>
+            <div
+              key={i}
+              style={{ height: lineHeight, lineHeight }}
+              className={`px-2 ${byLine.has(i + 1) ? "bg-red-100 font-semibold text-red-700" : ""}`}
+              title={byLine.get(i + 1)?.message}
+            >
               {i + 1}
             </div>
           ))}
         </div>
         <div className="relative flex-1">
-          <pre ref={backdrop} aria-hidden className="pointer-events-none absolute inset-0 m-0 overflow-hidden whitespace-pre px-3 py-2 font-mono text-sm text-transparent">
+          <pre
+            ref={backdrop}
+            aria-hidden
+            className="pointer-events-none absolute inset-0 m-0 overflow-hidden whitespace-pre px-3 py-2 font-mono text-sm text-transparent"
+          >
             {lines.map((line, i) => {
               const issue = byLine.get(i + 1);
-              if (!issue) return <div key={i} style={{ height: lineHeight, lineHeight }}>{line || " "}</div>;
+              if (!issue)
+                return (
+                  <div key={i} style={{ height: lineHeight, lineHeight }}>
+                    {line || " "}
+                  </div>
+                );
               const col = Math.max(0, issue.column - 1);
               return (
-                <div key={i} style={{ height: lineHeight, lineHeight }} className="bg-red-50" data-testid="editor-error-line" data-line={i + 1}>
+                <div
+                  key={i}
+                  style={{ height: lineHeight, lineHeight }}
+                  className="bg-red-50"
+                  data-testid="editor-error-line"
+                  data-line={i + 1}
+                >
                   {line.slice(0, col)}
-                  <span className="rounded-sm bg-red-300/70 underline decoration-red-600 decoration-wavy">{line.slice(col, col + 1) || " "}</span>
+                  <span className="rounded-sm bg-red-300/70 underline decoration-red-600 decoration-wavy">
+                    {line.slice(col, col + 1) || " "}
+                  </span>
                   {line.slice(col + 1)}
                 </div>
               );
@@ -96,7 +125,10 @@ export function RuleEditor({ projectId, value, onChange, serverErrors = [], rows
           <code className="font-mono">threshold(+1 A, -1 B; tie keep)</code>; <code>#</code> starts a comment.
         </span>
       </div>
-      <ParseErrorList errors={shownErrors} title={shownErrors.length === 1 ? "1 problem" : `${shownErrors.length} problems`} />
+      <ParseErrorList
+        errors={shownErrors}
+        title={shownErrors.length === 1 ? "1 problem" : `${shownErrors.length} problems`}
+      />
     </div>
   );
 }

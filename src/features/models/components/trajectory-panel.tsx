@@ -6,7 +6,19 @@ import { useTrajectory } from "../api/get-trajectory";
 
 type Scheme = NonNullable<TrajectoryBody["scheme"]>;
 
-export function TrajectoryPanel({ projectId, modelId, revision, nodes, suggestedInitial }: { projectId: string; modelId: string; revision: number; nodes: readonly string[]; suggestedInitial: string }) {
+export function TrajectoryPanel({
+  projectId,
+  modelId,
+  revision,
+  nodes,
+  suggestedInitial,
+}: {
+  projectId: string;
+  modelId: string;
+  revision: number;
+  nodes: readonly string[];
+  suggestedInitial: string;
+}) {
   const run = useTrajectory(projectId, modelId, revision);
   const [initial, setInitial] = useState(suggestedInitial);
   const [scheme, setScheme] = useState<Scheme>("synchronous");
@@ -35,7 +47,12 @@ export function TrajectoryPanel({ projectId, modelId, revision, nodes, suggested
         </label>
         <label className="flex flex-col gap-1">
           <span className="text-slate-700">Update scheme</span>
-          <select data-testid="trajectory-scheme" value={scheme} onChange={(e) => setScheme(e.target.value as Scheme)} className="rounded-md border border-slate-300 px-2 py-1">
+          <select
+            data-testid="trajectory-scheme"
+            value={scheme}
+            onChange={(e) => setScheme(e.target.value as Scheme)}
+            className="rounded-md border border-slate-300 px-2 py-1"
+          >
             <option value="synchronous">synchronous</option>
             <option value="random-order">random-order asynchronous</option>
             <option value="general-asynchronous">general asynchronous (one node per step)</option>
@@ -43,26 +60,54 @@ export function TrajectoryPanel({ projectId, modelId, revision, nodes, suggested
         </label>
         <label className="flex flex-col gap-1">
           <span className="text-slate-700">Steps</span>
-          <input type="number" min={1} max={1000} value={steps} onChange={(e) => setSteps(Number(e.target.value))} className="w-20 rounded-md border border-slate-300 px-2 py-1" />
+          <input
+            type="number"
+            min={1}
+            max={1000}
+            value={steps}
+            onChange={(e) => setSteps(Number(e.target.value))}
+            className="w-20 rounded-md border border-slate-300 px-2 py-1"
+          />
         </label>
         {scheme !== "synchronous" && (
           <label className="flex flex-col gap-1">
             <span className="text-slate-700">Seed</span>
-            <input type="number" min={0} value={seed} onChange={(e) => setSeed(Number(e.target.value))} className="w-20 rounded-md border border-slate-300 px-2 py-1" />
+            <input
+              type="number"
+              min={0}
+              value={seed}
+              onChange={(e) => setSeed(Number(e.target.value))}
+              className="w-20 rounded-md border border-slate-300 px-2 py-1"
+            />
           </label>
         )}
-        <button type="submit" disabled={!isValid || run.isPending} data-testid="trajectory-run" className="rounded-md bg-brand-700 px-3 py-1.5 font-medium text-white hover:bg-brand-800 disabled:opacity-50">
+        <button
+          type="submit"
+          disabled={!isValid || run.isPending}
+          data-testid="trajectory-run"
+          className="rounded-md bg-brand-700 px-3 py-1.5 font-medium text-white hover:bg-brand-800 disabled:opacity-50"
+        >
           Simulate
         </button>
       </form>
       <div className="flex flex-wrap gap-1 text-xs">
         {nodes.map((n, j) => (
-          <button key={n} type="button" onClick={() => flip(j)} className={`rounded px-1.5 py-0.5 font-mono ${initial[j] === "1" ? "bg-brand-600 text-white" : "bg-slate-100 text-slate-600"}`} title="Click to flip">
+          <button
+            key={n}
+            type="button"
+            onClick={() => flip(j)}
+            className={`rounded px-1.5 py-0.5 font-mono ${initial[j] === "1" ? "bg-brand-600 text-white" : "bg-slate-100 text-slate-600"}`}
+            title="Click to flip"
+          >
             {n}
           </button>
         ))}
       </div>
-      {run.error && <p role="alert" className="text-sm text-red-700">{run.error.message}</p>}
+      {run.error && (
+        <p role="alert" className="text-sm text-red-700">
+          {run.error.message}
+        </p>
+      )}
       {run.data && <StateRaster nodes={run.data.nodes} states={run.data.states} />}
     </div>
   );

@@ -7,7 +7,13 @@ import { issuesOf, ParseErrorList } from "./parse-error-list";
 
 const accepted = ".sbml,.xml,.rules,.txt,.csv";
 
-export function UploadDropZone({ projectId, onUploaded }: { projectId: string; onUploaded(detail: ModelDetail): void }) {
+export function UploadDropZone({
+  projectId,
+  onUploaded,
+}: {
+  projectId: string;
+  onUploaded(detail: ModelDetail): void;
+}) {
   const upload = useUploadModel(projectId);
   const input = useRef<HTMLInputElement>(null);
   const [isOver, setOver] = useState(false);
@@ -47,7 +53,9 @@ export function UploadDropZone({ projectId, onUploaded }: { projectId: string; o
         className={`flex cursor-pointer flex-col items-center justify-center rounded-lg border-2 border-dashed px-6 py-10 text-center ${isOver ? "border-brand-600 bg-brand-50" : "border-slate-300 bg-white hover:border-brand-600"}`}
       >
         <p className="text-sm font-medium text-slate-800">Drop a model file here, or click to choose one</p>
-        <p className="mt-1 text-xs text-slate-500">SBML-qual (.sbml, .xml), rule text (.rules, .txt) or truth tables (.csv), up to 5 MB</p>
+        <p className="mt-1 text-xs text-slate-500">
+          SBML-qual (.sbml, .xml), rule text (.rules, .txt) or truth tables (.csv), up to 5 MB
+        </p>
         {upload.isPending && <p className="mt-2 text-xs text-brand-700">Reading {fileName}…</p>}
         <input
           ref={input}
@@ -61,9 +69,19 @@ export function UploadDropZone({ projectId, onUploaded }: { projectId: string; o
           }}
         />
       </div>
-      {localError && <p role="alert" className="text-sm text-red-700">{localError}</p>}
-      {issues.length > 0 && <ParseErrorList errors={issues} title={`${fileName} could not be read; nothing was stored`} />}
-      {upload.error && issues.length === 0 && <p role="alert" className="text-sm text-red-700">{upload.error.message}</p>}
+      {localError && (
+        <p role="alert" className="text-sm text-red-700">
+          {localError}
+        </p>
+      )}
+      {issues.length > 0 && (
+        <ParseErrorList errors={issues} title={`${fileName} could not be read; nothing was stored`} />
+      )}
+      {upload.error && issues.length === 0 && (
+        <p role="alert" className="text-sm text-red-700">
+          {upload.error.message}
+        </p>
+      )}
     </div>
   );
 }

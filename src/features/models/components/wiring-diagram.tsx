@@ -7,7 +7,13 @@ import { createEdgeArrowProgram } from "sigma/rendering";
 import type { Settings } from "sigma/settings";
 import { useEffect, useMemo, useState } from "react";
 import type { StructureResult } from "@shared/schemas/models";
-import { buildWiringGraph, NODE_COLOUR, signStyle, type WiringEdgeAttrs, type WiringNodeAttrs } from "../lib/wiring-graph";
+import {
+  buildWiringGraph,
+  NODE_COLOUR,
+  signStyle,
+  type WiringEdgeAttrs,
+  type WiringNodeAttrs,
+} from "../lib/wiring-graph";
 import { drawWiringPng } from "../lib/wiring-png";
 
 const ON = "#0d9488";
@@ -49,7 +55,11 @@ function Interactions({ search, state, onHover, pngName }: InteractionsProps) {
   useEffect(() => {
     const graph = sigma.getGraph();
     const query = search.trim().toLowerCase();
-    const found = query ? graph.findNode((id) => id.toLowerCase() === query) ?? graph.findNode((id) => id.toLowerCase().includes(query)) ?? null : null;
+    const found = query
+      ? (graph.findNode((id) => id.toLowerCase() === query) ??
+        graph.findNode((id) => id.toLowerCase().includes(query)) ??
+        null)
+      : null;
     const focus = hovered ?? found;
     const near = new Set<string>();
     if (focus && graph.hasNode(focus)) {
@@ -78,7 +88,8 @@ function Interactions({ search, state, onHover, pngName }: InteractionsProps) {
   useEffect(() => {
     if (!query) return;
     const graph = sigma.getGraph();
-    const found = graph.findNode((id) => id.toLowerCase() === query) ?? graph.findNode((id) => id.toLowerCase().includes(query));
+    const found =
+      graph.findNode((id) => id.toLowerCase() === query) ?? graph.findNode((id) => id.toLowerCase().includes(query));
     if (!found) return;
     // Display data are only normalised once sigma has rendered with the new reducers, so centre after that render.
     const centre = () => {
@@ -127,7 +138,10 @@ export function WiringDiagram({ structure, state, pngName }: WiringDiagramProps)
       edgeProgramClasses: {
         activation: createEdgeArrowProgram<WiringNodeAttrs, WiringEdgeAttrs>(),
         // A short, wide head reads as the flat bar of a repression.
-        inhibition: createEdgeArrowProgram<WiringNodeAttrs, WiringEdgeAttrs>({ lengthToThicknessRatio: 1.5, widenessToThicknessRatio: 8 }),
+        inhibition: createEdgeArrowProgram<WiringNodeAttrs, WiringEdgeAttrs>({
+          lengthToThicknessRatio: 1.5,
+          widenessToThicknessRatio: 8,
+        }),
       },
       labelFont: '"Inter Variable", sans-serif',
       labelSize: 13,
@@ -180,13 +194,19 @@ export function WiringDiagram({ structure, state, pngName }: WiringDiagramProps)
           data-edges={structure.edges.filter((e) => e.source !== e.target).length}
           className="h-[460px] w-full overflow-hidden rounded-lg border border-slate-200 bg-white"
         >
-          <SigmaContainer<WiringNodeAttrs, WiringEdgeAttrs> style={{ height: "100%", width: "100%" }} settings={settings}>
+          <SigmaContainer<WiringNodeAttrs, WiringEdgeAttrs>
+            style={{ height: "100%", width: "100%" }}
+            settings={settings}
+          >
             <LoadGraph structure={structure} />
             <Interactions search={search} state={state} onHover={setHovered} pngName={pngName} />
           </SigmaContainer>
         </div>
         {node && (
-          <div data-testid="node-details" className="pointer-events-none absolute bottom-2 left-2 z-10 max-w-sm rounded-md border border-slate-200 bg-white/95 p-3 text-xs shadow">
+          <div
+            data-testid="node-details"
+            className="pointer-events-none absolute bottom-2 left-2 z-10 max-w-sm rounded-md border border-slate-200 bg-white/95 p-3 text-xs shadow"
+          >
             <p className="text-sm font-semibold text-slate-900">{node.name}</p>
             <p className="mt-1 font-mono text-slate-700">
               {node.name}' = {node.rule}
@@ -206,7 +226,9 @@ export function WiringDiagram({ structure, state, pngName }: WiringDiagramProps)
                 ))}
               </p>
             )}
-            {targets.length > 0 && <p className="mt-1 text-slate-600">regulates: {targets.map((e) => e.target).join(", ")}</p>}
+            {targets.length > 0 && (
+              <p className="mt-1 text-slate-600">regulates: {targets.map((e) => e.target).join(", ")}</p>
+            )}
           </div>
         )}
       </div>

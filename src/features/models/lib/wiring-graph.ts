@@ -4,8 +4,23 @@ import Graph from "graphology";
 import forceAtlas2 from "graphology-layout-forceatlas2";
 import type { EdgeSign, StructureResult } from "@shared/schemas/models";
 
-export interface WiringNodeAttrs { x: number; y: number; size: number; label: string; color: string; inDegree: number; outDegree: number; rule: string; isInput: boolean }
-export interface WiringEdgeAttrs { size: number; color: string; type: string; sign: EdgeSign }
+export interface WiringNodeAttrs {
+  x: number;
+  y: number;
+  size: number;
+  label: string;
+  color: string;
+  inDegree: number;
+  outDegree: number;
+  rule: string;
+  isInput: boolean;
+}
+export interface WiringEdgeAttrs {
+  size: number;
+  color: string;
+  type: string;
+  sign: EdgeSign;
+}
 
 export const signStyle: Record<EdgeSign, { color: string; type: string; label: string }> = {
   positive: { color: "#16a34a", type: "activation", label: "activates" },
@@ -39,7 +54,10 @@ export function buildWiringGraph(structure: StructureResult): Graph<WiringNodeAt
     graph.addDirectedEdge(e.source, e.target, { size: 3, color: style.color, type: style.type, sign: e.sign });
   }
   if (graph.order > 2 && graph.size > 0) {
-    forceAtlas2.assign(graph, { iterations: 300, settings: { ...forceAtlas2.inferSettings(graph), adjustSizes: true } });
+    forceAtlas2.assign(graph, {
+      iterations: 300,
+      settings: { ...forceAtlas2.inferSettings(graph), adjustSizes: true },
+    });
   }
   return graph;
 }

@@ -3,9 +3,13 @@ import { ProjectListItem, type CreateProjectBody } from "@shared/schemas/project
 import { apiRequest } from "@/lib/api-client";
 import { projectKeys } from "./keys";
 
-export const createProject = (body: CreateProjectBody) => apiRequest("/projects", ProjectListItem, { method: "POST", body });
+export const createProject = (body: CreateProjectBody) =>
+  apiRequest("/projects", ProjectListItem, { method: "POST", body });
 
 export function useCreateProject() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createProject, onSuccess: () => queryClient.invalidateQueries({ queryKey: projectKeys.list() }) });
+  return useMutation({
+    mutationFn: createProject,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: projectKeys.list() }),
+  });
 }

@@ -4,9 +4,11 @@ import { InvitationPreview } from "@shared/schemas/projects";
 import { apiRequest } from "@/lib/api-client";
 import { projectKeys } from "./keys";
 
-export const getInvitation = (token: string) => apiRequest(`/invitations/${encodeURIComponent(token)}`, InvitationPreview);
+export const getInvitation = (token: string) =>
+  apiRequest(`/invitations/${encodeURIComponent(token)}`, InvitationPreview);
 
-export const invitationQuery = (token: string) => queryOptions({ queryKey: projectKeys.invitationPreview(token), queryFn: () => getInvitation(token) });
+export const invitationQuery = (token: string) =>
+  queryOptions({ queryKey: projectKeys.invitationPreview(token), queryFn: () => getInvitation(token) });
 
 export function useInvitationPreview(token: string) {
   return useQuery(invitationQuery(token));

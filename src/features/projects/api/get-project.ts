@@ -6,7 +6,8 @@ import { projectKeys } from "./keys";
 
 export const getProject = (projectId: string) => apiRequest(`/projects/${projectId}`, ProjectDetail);
 
-export const projectQuery = (projectId: string) => queryOptions({ queryKey: projectKeys.detail(projectId), queryFn: () => getProject(projectId) });
+export const projectQuery = (projectId: string) =>
+  queryOptions({ queryKey: projectKeys.detail(projectId), queryFn: () => getProject(projectId) });
 
 export function useProject(projectId: string) {
   return useQuery(projectQuery(projectId));

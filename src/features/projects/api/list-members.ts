@@ -6,7 +6,8 @@ import { projectKeys } from "./keys";
 
 export const listMembers = (projectId: string) => apiRequest(`/projects/${projectId}/members`, z.array(Member));
 
-export const membersQuery = (projectId: string) => queryOptions({ queryKey: projectKeys.members(projectId), queryFn: () => listMembers(projectId) });
+export const membersQuery = (projectId: string) =>
+  queryOptions({ queryKey: projectKeys.members(projectId), queryFn: () => listMembers(projectId) });
 
 export function useMembers(projectId: string) {
   return useQuery(membersQuery(projectId));

@@ -15,7 +15,15 @@ import { useInvitationPreview } from "../api/get-invitation";
 
 const NewAccountForm = z.object({ displayName: DisplayName, password: NewPassword });
 
-export function AcceptInvitationPanel({ token, signedInEmail, onAccepted }: { token: string; signedInEmail: string | null; onAccepted: (projectId: string) => void }) {
+export function AcceptInvitationPanel({
+  token,
+  signedInEmail,
+  onAccepted,
+}: {
+  token: string;
+  signedInEmail: string | null;
+  onAccepted: (projectId: string) => void;
+}) {
   const { data: invitation, error, isPending } = useInvitationPreview(token);
   const accept = useAcceptInvitation(token);
   const [formError, setFormError] = useState<string | null>(null);
@@ -38,25 +46,45 @@ export function AcceptInvitationPanel({ token, signedInEmail, onAccepted }: { to
   return (
     <div className="space-y-5">
       <p className="text-slate-700">
-        <strong>{invitation.invitedByName || "A project owner"}</strong> invited <strong>{invitation.email}</strong> to the project{" "}
-        <strong>{invitation.projectName}</strong> as <strong data-testid="invited-role">{invitation.role}</strong>.
+        <strong>{invitation.invitedByName || "A project owner"}</strong> invited <strong>{invitation.email}</strong> to
+        the project <strong>{invitation.projectName}</strong> as{" "}
+        <strong data-testid="invited-role">{invitation.role}</strong>.
       </p>
       {signedInEmail && !isForMe ? (
-        <Alert tone="info">You are signed in as {signedInEmail}. Sign out first, then open this link again to accept as {invitation.email}.</Alert>
+        <Alert tone="info">
+          You are signed in as {signedInEmail}. Sign out first, then open this link again to accept as{" "}
+          {invitation.email}.
+        </Alert>
       ) : isForMe ? (
-        <Button onClick={() => acceptWith({})} disabled={accept.isPending}>Accept and open the project</Button>
+        <Button onClick={() => acceptWith({})} disabled={accept.isPending}>
+          Accept and open the project
+        </Button>
       ) : invitation.accountExists ? (
         <Alert tone="info">
           {invitation.email} already has an account.{" "}
-          <Link className="font-medium underline" to={`/sign-in?next=${encodeURIComponent(`/invitations/${token}`)}&email=${encodeURIComponent(invitation.email)}`}>
+          <Link
+            className="font-medium underline"
+            to={`/sign-in?next=${encodeURIComponent(`/invitations/${token}`)}&email=${encodeURIComponent(invitation.email)}`}
+          >
             Sign in
           </Link>{" "}
           to accept.
         </Alert>
       ) : (
-        <form onSubmit={form.handleSubmit(acceptWith)} noValidate className="space-y-4" aria-label="Create your account">
+        <form
+          onSubmit={form.handleSubmit(acceptWith)}
+          noValidate
+          className="space-y-4"
+          aria-label="Create your account"
+        >
           <p className="text-sm text-slate-600">Choose your name and a password to create your account.</p>
-          <TextField label="Your name" autoComplete="name" maxLength={120} error={form.formState.errors.displayName?.message} {...form.register("displayName")} />
+          <TextField
+            label="Your name"
+            autoComplete="name"
+            maxLength={120}
+            error={form.formState.errors.displayName?.message}
+            {...form.register("displayName")}
+          />
           <TextField
             label="Password"
             type="password"

@@ -9,7 +9,8 @@ const verbs: Record<string, (e: AuditEntry) => string> = {
   "project.describe": () => "changed the project description",
   "project.archive": () => "archived the project",
   "project.restore": () => "restored the project",
-  "member.role": (e) => `changed ${e.target ?? "someone"}'s role from ${String(e.details.from)} to ${String(e.details.to)}`,
+  "member.role": (e) =>
+    `changed ${e.target ?? "someone"}'s role from ${String(e.details.from)} to ${String(e.details.to)}`,
   "member.remove": (e) => `removed ${e.target ?? "someone"} (${String(e.details.role)})`,
   "invitation.create": (e) => `invited ${e.target ?? "someone"} as ${String(e.details.role)}`,
   "invitation.revoke": (e) => `withdrew the invitation to ${e.target ?? "someone"}`,
@@ -27,10 +28,15 @@ export function AuditList({ projectId }: { projectId: string }) {
   if (error) return <Alert>{error.message}</Alert>;
   if (entries.length === 0) return <p className="text-sm text-slate-500">Nothing has happened here yet.</p>;
   return (
-    <ol className="divide-y divide-slate-100 rounded-lg border border-slate-200 bg-white text-sm" data-testid="audit-log">
+    <ol
+      className="divide-y divide-slate-100 rounded-lg border border-slate-200 bg-white text-sm"
+      data-testid="audit-log"
+    >
       {entries.map((e) => (
         <li key={e.id} className="flex flex-wrap items-baseline gap-x-3 px-4 py-2">
-          <time className="w-40 shrink-0 text-xs tabular-nums text-slate-500" dateTime={e.createdAt}>{new Date(e.createdAt).toLocaleString()}</time>
+          <time className="w-40 shrink-0 text-xs tabular-nums text-slate-500" dateTime={e.createdAt}>
+            {new Date(e.createdAt).toLocaleString()}
+          </time>
           <span>
             <span className="font-medium text-slate-900">{e.actorName || "Someone"}</span> {describe(e)}
           </span>

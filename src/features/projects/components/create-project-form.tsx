@@ -24,12 +24,27 @@ export function CreateProjectForm({ onCreated }: { onCreated: (projectId: string
   });
   return (
     <form onSubmit={submit} noValidate className="flex flex-wrap items-start gap-3" aria-label="New project">
-      <TextField label="New project name" className="min-w-64 flex-1" maxLength={120} error={form.formState.errors.name?.message} {...form.register("name")} />
-      <TextField label="Description (optional)" className="min-w-64 flex-[2]" maxLength={2000} {...form.register("description")} />
+      <TextField
+        label="New project name"
+        className="min-w-64 flex-1"
+        maxLength={120}
+        error={form.formState.errors.name?.message}
+        {...form.register("name")}
+      />
+      <TextField
+        label="Description (optional)"
+        className="min-w-64 flex-[2]"
+        maxLength={2000}
+        {...form.register("description")}
+      />
       <Button type="submit" className="mt-6" disabled={form.formState.isSubmitting}>
         Create project
       </Button>
-      {formError && <div className="w-full"><Alert>{formError}</Alert></div>}
+      {formError && (
+        <div className="w-full">
+          <Alert>{formError}</Alert>
+        </div>
+      )}
     </form>
   );
 }

@@ -17,7 +17,10 @@ export function InvitationsPanel({ projectId }: { projectId: string }) {
   const revoke = useRevokeInvitation(projectId);
   const { data: pending } = useInvitations(projectId, true);
   const [message, setMessage] = useState<{ tone: "error" | "success"; text: string } | null>(null);
-  const form = useForm({ resolver: zodResolver(CreateInvitationBody), defaultValues: { email: "", role: "viewer" as const } });
+  const form = useForm({
+    resolver: zodResolver(CreateInvitationBody),
+    defaultValues: { email: "", role: "viewer" as const },
+  });
   const submit = form.handleSubmit(async (values) => {
     setMessage(null);
     try {
@@ -30,15 +33,35 @@ export function InvitationsPanel({ projectId }: { projectId: string }) {
     }
   });
   return (
-    <section className="space-y-4 rounded-lg border border-slate-200 bg-white p-5" aria-labelledby="invite-title" data-testid="invite-panel">
-      <h2 id="invite-title" className="text-lg font-semibold">Invite someone</h2>
+    <section
+      className="space-y-4 rounded-lg border border-slate-200 bg-white p-5"
+      aria-labelledby="invite-title"
+      data-testid="invite-panel"
+    >
+      <h2 id="invite-title" className="text-lg font-semibold">
+        Invite someone
+      </h2>
       <form onSubmit={submit} noValidate className="flex flex-wrap items-start gap-3" aria-label="Invite by e-mail">
-        <TextField label="E-mail address" type="email" className="min-w-64 flex-1" error={form.formState.errors.email?.message} {...form.register("email")} />
+        <TextField
+          label="E-mail address"
+          type="email"
+          className="min-w-64 flex-1"
+          error={form.formState.errors.email?.message}
+          {...form.register("email")}
+        />
         <div className="space-y-1">
-          <label htmlFor="invite-role" className="block text-sm font-medium text-slate-700">Role</label>
-          <select id="invite-role" className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm" {...form.register("role")}>
+          <label htmlFor="invite-role" className="block text-sm font-medium text-slate-700">
+            Role
+          </label>
+          <select
+            id="invite-role"
+            className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm"
+            {...form.register("role")}
+          >
             {PROJECT_ROLES.map((r) => (
-              <option key={r} value={r}>{r}</option>
+              <option key={r} value={r}>
+                {r}
+              </option>
             ))}
           </select>
         </div>
@@ -50,7 +73,10 @@ export function InvitationsPanel({ projectId }: { projectId: string }) {
       {pending && pending.length > 0 && (
         <div>
           <h3 className="mb-2 text-sm font-semibold text-slate-700">Waiting for an answer</h3>
-          <ul className="divide-y divide-slate-100 rounded-md border border-slate-200 text-sm" data-testid="pending-invitations">
+          <ul
+            className="divide-y divide-slate-100 rounded-md border border-slate-200 text-sm"
+            data-testid="pending-invitations"
+          >
             {pending.map((i) => (
               <li key={i.id} className="flex flex-wrap items-center gap-3 px-3 py-2">
                 <span className="font-medium">{i.email}</span>

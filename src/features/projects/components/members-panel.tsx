@@ -15,7 +15,15 @@ const roleHelp: Record<ProjectRole, string> = {
   viewer: "read only",
 };
 
-export function MembersPanel({ projectId, canManage, currentUserId }: { projectId: string; canManage: boolean; currentUserId: string }) {
+export function MembersPanel({
+  projectId,
+  canManage,
+  currentUserId,
+}: {
+  projectId: string;
+  canManage: boolean;
+  currentUserId: string;
+}) {
   const { data: members, error, isPending } = useMembers(projectId);
   const changeRole = useChangeMemberRole(projectId);
   const remove = useRemoveMember(projectId);
@@ -43,7 +51,11 @@ export function MembersPanel({ projectId, canManage, currentUserId }: { projectI
               <th className="px-4 py-2">Name</th>
               <th className="px-4 py-2">E-mail</th>
               <th className="px-4 py-2">Role</th>
-              {canManage && <th className="px-4 py-2"><span className="sr-only">Actions</span></th>}
+              {canManage && (
+                <th className="px-4 py-2">
+                  <span className="sr-only">Actions</span>
+                </th>
+              )}
             </tr>
           </thead>
           <tbody className="divide-y divide-slate-100">
@@ -51,7 +63,9 @@ export function MembersPanel({ projectId, canManage, currentUserId }: { projectI
               <tr key={m.userId} data-testid="member-row">
                 <td className="px-4 py-2 font-medium text-slate-900">
                   {m.displayName}
-                  {m.userId === currentUserId && <span className="ml-2 rounded bg-slate-100 px-1.5 py-0.5 text-xs text-slate-600">you</span>}
+                  {m.userId === currentUserId && (
+                    <span className="ml-2 rounded bg-slate-100 px-1.5 py-0.5 text-xs text-slate-600">you</span>
+                  )}
                 </td>
                 <td className="px-4 py-2 text-slate-600">{m.email}</td>
                 <td className="px-4 py-2">
@@ -59,20 +73,31 @@ export function MembersPanel({ projectId, canManage, currentUserId }: { projectI
                     <select
                       aria-label={`Role of ${m.displayName}`}
                       value={m.role}
-                      onChange={(e) => run(() => changeRole.mutateAsync({ userId: m.userId, role: e.target.value as ProjectRole }))}
+                      onChange={(e) =>
+                        run(() => changeRole.mutateAsync({ userId: m.userId, role: e.target.value as ProjectRole }))
+                      }
                       className="rounded-md border border-slate-300 bg-white px-2 py-1 text-sm"
                     >
                       {PROJECT_ROLES.map((r) => (
-                        <option key={r} value={r}>{r}</option>
+                        <option key={r} value={r}>
+                          {r}
+                        </option>
                       ))}
                     </select>
                   ) : (
-                    <span title={roleHelp[m.role]} className="capitalize">{m.role}</span>
+                    <span title={roleHelp[m.role]} className="capitalize">
+                      {m.role}
+                    </span>
                   )}
                 </td>
                 {canManage && (
                   <td className="px-4 py-2 text-right">
-                    <Button variant="ghost" size="sm" onClick={() => run(() => remove.mutateAsync(m.userId))} aria-label={`Remove ${m.displayName}`}>
+                    <Button
+                      variant="ghost"
+                      size="sm"
+                      onClick={() => run(() => remove.mutateAsync(m.userId))}
+                      aria-label={`Remove ${m.displayName}`}
+                    >
                       Remove
                     </Button>
                   </td>

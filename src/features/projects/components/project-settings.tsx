@@ -38,7 +38,12 @@ export function ProjectSettings({ project, onDeleted }: { project: ProjectDetail
     setMessage(null);
     try {
       await update.mutateAsync({ archived: !project.archived });
-      setMessage({ tone: "success", text: project.archived ? "The project was restored." : "The project was archived; its content is now read-only." });
+      setMessage({
+        tone: "success",
+        text: project.archived
+          ? "The project was restored."
+          : "The project was archived; its content is now read-only.",
+      });
     } catch (err) {
       setMessage({ tone: "error", text: (err as Error).message });
     }
@@ -56,10 +61,22 @@ export function ProjectSettings({ project, onDeleted }: { project: ProjectDetail
   };
 
   return (
-    <section className="space-y-6 rounded-lg border border-slate-200 bg-white p-5" aria-labelledby="settings-title" data-testid="project-settings">
-      <h2 id="settings-title" className="text-lg font-semibold">Project settings</h2>
+    <section
+      className="space-y-6 rounded-lg border border-slate-200 bg-white p-5"
+      aria-labelledby="settings-title"
+      data-testid="project-settings"
+    >
+      <h2 id="settings-title" className="text-lg font-semibold">
+        Project settings
+      </h2>
       <form onSubmit={rename} noValidate className="flex flex-wrap items-start gap-3" aria-label="Rename project">
-        <TextField label="Project name" className="min-w-64 flex-1" maxLength={120} error={form.formState.errors.name?.message} {...form.register("name")} />
+        <TextField
+          label="Project name"
+          className="min-w-64 flex-1"
+          maxLength={120}
+          error={form.formState.errors.name?.message}
+          {...form.register("name")}
+        />
         <Button type="submit" variant="secondary" className="mt-6" disabled={form.formState.isSubmitting}>
           Rename
         </Button>
@@ -82,12 +99,20 @@ export function ProjectSettings({ project, onDeleted }: { project: ProjectDetail
       </div>
       <Dialog open={isDeleteOpen} title="Delete this project?" onClose={() => setDeleteOpen(false)}>
         <p className="text-sm text-slate-700">
-          This removes <strong>{project.name}</strong> with all its models, runs, reductions, members and history. It cannot be undone.
+          This removes <strong>{project.name}</strong> with all its models, runs, reductions, members and history. It
+          cannot be undone.
         </p>
-        <TextField label={`Type the project's name to confirm`} value={typedName} onChange={(e) => setTypedName(e.target.value)} autoFocus />
+        <TextField
+          label={`Type the project's name to confirm`}
+          value={typedName}
+          onChange={(e) => setTypedName(e.target.value)}
+          autoFocus
+        />
         {deleteError && <Alert>{deleteError}</Alert>}
         <div className="flex justify-end gap-2">
-          <Button variant="secondary" onClick={() => setDeleteOpen(false)}>Cancel</Button>
+          <Button variant="secondary" onClick={() => setDeleteOpen(false)}>
+            Cancel
+          </Button>
           <Button variant="danger" onClick={confirmDelete} disabled={typedName !== project.name || remove.isPending}>
             Delete for good
           </Button>

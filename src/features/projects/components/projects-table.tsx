@@ -1,9 +1,22 @@
 // The caller's projects as a table with search, sortable columns and paging (TanStack Table v9, client-side:
 // a person's project list is small enough to hold in the browser).
 import {
-  columnFilteringFeature, createColumnHelper, createFilteredRowModel, createPaginatedRowModel, createSortedRowModel,
-  filterFn_includesString, globalFilteringFeature, rowPaginationFeature, rowSortingFeature, sortFn_alphanumeric,
-  sortFn_datetime, sortFn_text, tableFeatures, useTable, type PaginationState, type SortingState,
+  columnFilteringFeature,
+  createColumnHelper,
+  createFilteredRowModel,
+  createPaginatedRowModel,
+  createSortedRowModel,
+  filterFn_includesString,
+  globalFilteringFeature,
+  rowPaginationFeature,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  sortFn_datetime,
+  sortFn_text,
+  tableFeatures,
+  useTable,
+  type PaginationState,
+  type SortingState,
 } from "@tanstack/react-table";
 import { useState } from "react";
 import { Link } from "react-router-dom";
@@ -93,10 +106,20 @@ export function ProjectsTable({ projects }: { projects: ProjectListItem[] }) {
                 {group.headers.map((header) => {
                   const sorted = header.column.getIsSorted();
                   return (
-                    <th key={header.id} className="px-4 py-2" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}>
-                      <button type="button" className="inline-flex items-center gap-1 uppercase hover:text-slate-900" onClick={header.column.getToggleSortingHandler()}>
+                    <th
+                      key={header.id}
+                      className="px-4 py-2"
+                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
+                    >
+                      <button
+                        type="button"
+                        className="inline-flex items-center gap-1 uppercase hover:text-slate-900"
+                        onClick={header.column.getToggleSortingHandler()}
+                      >
                         <table.FlexRender header={header} />
-                        <span aria-hidden className="text-slate-400">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
+                        <span aria-hidden className="text-slate-400">
+                          {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}
+                        </span>
                       </button>
                     </th>
                   );
@@ -117,7 +140,9 @@ export function ProjectsTable({ projects }: { projects: ProjectListItem[] }) {
             {rows.length === 0 && (
               <tr>
                 <td colSpan={columns.length} className="px-4 py-6 text-center text-slate-500">
-                  {projects.length === 0 ? "You are not in any project yet. Create one above." : "No project matches your search."}
+                  {projects.length === 0
+                    ? "You are not in any project yet. Create one above."
+                    : "No project matches your search."}
                 </td>
               </tr>
             )}
@@ -126,7 +151,12 @@ export function ProjectsTable({ projects }: { projects: ProjectListItem[] }) {
       </div>
       {table.getPageCount() > 1 && (
         <div className="flex items-center justify-end gap-2 text-sm">
-          <Button variant="secondary" size="sm" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+          <Button
+            variant="secondary"
+            size="sm"
+            onClick={() => table.previousPage()}
+            disabled={!table.getCanPreviousPage()}
+          >
             Previous
           </Button>
           <span className="text-slate-600">

@@ -3,7 +3,8 @@ import { HierarchyGraph } from "@shared/schemas/reductions";
 import { apiRequest } from "@/lib/api-client";
 import { reductionKeys } from "./keys";
 
-export const getModelHierarchy = (projectId: string) => apiRequest(`/projects/${projectId}/model-hierarchy`, HierarchyGraph);
+export const getModelHierarchy = (projectId: string) =>
+  apiRequest(`/projects/${projectId}/model-hierarchy`, HierarchyGraph);
 
 export const modelHierarchyQuery = (projectId: string) =>
   queryOptions({ queryKey: reductionKeys.hierarchy(projectId), queryFn: () => getModelHierarchy(projectId) });

@@ -1,12 +1,17 @@
 import type { ReductionNotion, ReviewState } from "@shared/schemas/reductions";
 
-export interface ReductionFilter { state?: ReviewState; notion?: ReductionNotion; sourceModelId?: string }
+export interface ReductionFilter {
+  state?: ReviewState;
+  notion?: ReductionNotion;
+  sourceModelId?: string;
+}
 
 export const reductionKeys = {
   all: ["reductions"] as const,
   project: (projectId: string) => [...reductionKeys.all, projectId] as const,
   list: (projectId: string, f: ReductionFilter) => [...reductionKeys.project(projectId), "list", f] as const,
-  detail: (projectId: string, reductionId: string) => [...reductionKeys.project(projectId), "detail", reductionId] as const,
+  detail: (projectId: string, reductionId: string) =>
+    [...reductionKeys.project(projectId), "detail", reductionId] as const,
   hierarchy: (projectId: string) => [...reductionKeys.project(projectId), "hierarchy"] as const,
 };
 

@@ -4,7 +4,10 @@ import { apiRequest } from "@/lib/api-client";
 import { reductionKeys, reductionPath } from "./keys";
 
 export const saveTarget = (projectId: string, reductionId: string, name: string) =>
-  apiRequest(`${reductionPath(projectId, reductionId)}/save-target`, ReductionDetail, { method: "POST", body: { name } });
+  apiRequest(`${reductionPath(projectId, reductionId)}/save-target`, ReductionDetail, {
+    method: "POST",
+    body: { name },
+  });
 
 /** A new model appears in the project: the model lists and the hierarchy go stale with the reduction. */
 export function useSaveTarget(projectId: string, reductionId: string) {
@@ -13,7 +16,10 @@ export function useSaveTarget(projectId: string, reductionId: string) {
     mutationFn: (name: string) => saveTarget(projectId, reductionId, name),
     onSuccess: (data) => {
       qc.setQueryData(reductionKeys.detail(projectId, reductionId), data);
-      return Promise.all([qc.invalidateQueries({ queryKey: reductionKeys.project(projectId) }), qc.invalidateQueries({ queryKey: ["models"] })]);
+      return Promise.all([
+        qc.invalidateQueries({ queryKey: reductionKeys.project(projectId) }),
+        qc.invalidateQueries({ queryKey: ["models"] }),
+      ]);
     },
   });
 }

@@ -12,12 +12,23 @@ export function CodewordTable({ certificate }: { certificate: Certificate }) {
       <div className="space-y-3">
         <table className="min-w-full text-sm" data-testid="codeword-table">
           <thead className="bg-slate-50 text-xs uppercase text-slate-500">
-            <tr><th className={cellClass}>Target node</th><th className={cellClass}>Block (source nodes)</th><th className={cellClass}>Codeword for 0</th><th className={cellClass}>Codeword for 1</th></tr>
+            <tr>
+              <th className={cellClass}>Target node</th>
+              <th className={cellClass}>Block (source nodes)</th>
+              <th className={cellClass}>Codeword for 0</th>
+              <th className={cellClass}>Codeword for 1</th>
+            </tr>
           </thead>
           <tbody>
             {certificate.witness.blocks.map((b, j) => (
               <tr key={b.target}>
-                <td className={cellClass}><span className="mr-2 inline-block h-3 w-3 rounded-full align-middle" style={{ background: BLOCK_COLOURS[j % BLOCK_COLOURS.length] }} />{b.target}</td>
+                <td className={cellClass}>
+                  <span
+                    className="mr-2 inline-block h-3 w-3 rounded-full align-middle"
+                    style={{ background: BLOCK_COLOURS[j % BLOCK_COLOURS.length] }}
+                  />
+                  {b.target}
+                </td>
                 <td className={cellClass}>{b.nodes.join(", ")}</td>
                 <td className={`${cellClass} font-mono`}>{b.zero}</td>
                 <td className={`${cellClass} font-mono`}>{b.one}</td>
@@ -26,7 +37,11 @@ export function CodewordTable({ certificate }: { certificate: Certificate }) {
           </tbody>
         </table>
         <p className="text-sm text-slate-600">
-          {context.length === 0 ? "No context: every source node belongs to a block." : <>Context (fixed values): {context.map(([n, v]) => `${n} = ${v}`).join(", ")}</>}
+          {context.length === 0 ? (
+            "No context: every source node belongs to a block."
+          ) : (
+            <>Context (fixed values): {context.map(([n, v]) => `${n} = ${v}`).join(", ")}</>
+          )}
         </p>
       </div>
     );
@@ -34,10 +49,18 @@ export function CodewordTable({ certificate }: { certificate: Certificate }) {
   if (certificate.notion === "dynamical-embedding") {
     return (
       <table className="min-w-full text-sm" data-testid="codeword-table">
-        <thead className="bg-slate-50 text-xs uppercase text-slate-500"><tr><th className={cellClass}>Target state</th><th className={cellClass}>Source state</th></tr></thead>
+        <thead className="bg-slate-50 text-xs uppercase text-slate-500">
+          <tr>
+            <th className={cellClass}>Target state</th>
+            <th className={cellClass}>Source state</th>
+          </tr>
+        </thead>
         <tbody>
           {Object.entries(certificate.witness.map).map(([x, y]) => (
-            <tr key={x}><td className={`${cellClass} font-mono`}>{x}</td><td className={`${cellClass} font-mono`}>{y}</td></tr>
+            <tr key={x}>
+              <td className={`${cellClass} font-mono`}>{x}</td>
+              <td className={`${cellClass} font-mono`}>{y}</td>
+            </tr>
           ))}
         </tbody>
       </table>
@@ -45,10 +68,20 @@ export function CodewordTable({ certificate }: { certificate: Certificate }) {
   }
   return (
     <table className="min-w-full text-sm" data-testid="codeword-table">
-      <thead className="bg-slate-50 text-xs uppercase text-slate-500"><tr><th className={cellClass}>Target node</th><th className={cellClass}>Observes</th><th className={cellClass}>Truth table (row = inputs as bits, first input lowest)</th></tr></thead>
+      <thead className="bg-slate-50 text-xs uppercase text-slate-500">
+        <tr>
+          <th className={cellClass}>Target node</th>
+          <th className={cellClass}>Observes</th>
+          <th className={cellClass}>Truth table (row = inputs as bits, first input lowest)</th>
+        </tr>
+      </thead>
       <tbody>
         {certificate.witness.observables.map((o) => (
-          <tr key={o.target}><td className={cellClass}>{o.target}</td><td className={cellClass}>{o.inputs.join(", ")}</td><td className={`${cellClass} font-mono`}>{o.table}</td></tr>
+          <tr key={o.target}>
+            <td className={cellClass}>{o.target}</td>
+            <td className={cellClass}>{o.inputs.join(", ")}</td>
+            <td className={`${cellClass} font-mono`}>{o.table}</td>
+          </tr>
         ))}
       </tbody>
     </table>

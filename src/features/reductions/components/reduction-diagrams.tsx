@@ -10,8 +10,8 @@ import { BLOCK_COLOURS, sourceNodeRoles } from "../lib/certificate-view";
 const SIGN_COLOUR = { positive: "#16a34a", negative: "#dc2626", dual: "#9333ea", "non-essential": "#cbd5e1" } as const;
 
 function edgesOf(net: ReturnType<typeof networkFromCertificate>): GraphEdge[] {
-  return interactionGraph(net).edges
-    .filter((e) => e.sign !== "non-essential")
+  return interactionGraph(net)
+    .edges.filter((e) => e.sign !== "non-essential")
     .map((e) => ({ source: net.names[e.source]!, target: net.names[e.target]!, color: SIGN_COLOUR[e.sign] }));
 }
 
@@ -22,21 +22,31 @@ export function ReductionDiagrams({ certificate }: { certificate: Certificate })
     const roles = sourceNodeRoles(certificate);
     const sourceNodes: GraphNode[] = source.names.map((name) => {
       const role = roles.get(name)!;
-      const suffix = role.contextValue !== null ? ` = ${role.contextValue}` : role.targetName ? ` → ${role.targetName}` : "";
+      const suffix =
+        role.contextValue !== null ? ` = ${role.contextValue}` : role.targetName ? ` → ${role.targetName}` : "";
       return { id: name, label: name + suffix, color: role.colour };
     });
-    const targetNodes: GraphNode[] = target.names.map((name, j) => ({ id: name, label: name, color: BLOCK_COLOURS[j % BLOCK_COLOURS.length]!, size: 12 }));
+    const targetNodes: GraphNode[] = target.names.map((name, j) => ({
+      id: name,
+      label: name,
+      color: BLOCK_COLOURS[j % BLOCK_COLOURS.length]!,
+      size: 12,
+    }));
     return { sourceNodes, sourceEdges: edgesOf(source), targetNodes, targetEdges: edgesOf(target) };
   }, [certificate]);
 
   return (
     <div className="grid gap-4 lg:grid-cols-2">
       <figure>
-        <figcaption className="mb-1 text-sm font-medium text-slate-700">Source F ({sourceNodes.length} nodes): colour = block, grey = context</figcaption>
+        <figcaption className="mb-1 text-sm font-medium text-slate-700">
+          Source F ({sourceNodes.length} nodes): colour = block, grey = context
+        </figcaption>
         <NetworkGraph nodes={sourceNodes} edges={sourceEdges} testId="source-diagram" />
       </figure>
       <figure>
-        <figcaption className="mb-1 text-sm font-medium text-slate-700">Target G ({targetNodes.length} nodes)</figcaption>
+        <figcaption className="mb-1 text-sm font-medium text-slate-700">
+          Target G ({targetNodes.length} nodes)
+        </figcaption>
         <NetworkGraph nodes={targetNodes} edges={targetEdges} testId="target-diagram" />
       </figure>
     </div>

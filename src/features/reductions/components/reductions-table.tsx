@@ -3,29 +3,66 @@ import { Link } from "react-router-dom";
 import type { ReductionSummary } from "@shared/schemas/reductions";
 import { ReviewStateBadge } from "./review-panel";
 
-const notionLabel = { "block-emulation": "block emulation", "dynamical-embedding": "dynamical embedding", "coarse-graining": "coarse-graining" } as const;
+const notionLabel = {
+  "block-emulation": "block emulation",
+  "dynamical-embedding": "dynamical embedding",
+  "coarse-graining": "coarse-graining",
+} as const;
 
 export function ReductionsTable({ projectId, reductions }: { projectId: string; reductions: ReductionSummary[] }) {
-  if (reductions.length === 0) return <p className="rounded-md border border-dashed border-slate-300 p-6 text-center text-sm text-slate-500" data-testid="no-reductions">No reductions yet. Start a search above.</p>;
+  if (reductions.length === 0)
+    return (
+      <p
+        className="rounded-md border border-dashed border-slate-300 p-6 text-center text-sm text-slate-500"
+        data-testid="no-reductions"
+      >
+        No reductions yet. Start a search above.
+      </p>
+    );
   return (
     <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
       <table className="min-w-full text-sm" data-testid="reductions-table">
         <thead className="bg-slate-50 text-left text-xs uppercase text-slate-500">
           <tr>
-            <th className="px-3 py-2">Source</th><th className="px-3 py-2">Notion</th><th className="px-3 py-2">t</th><th className="px-3 py-2">Target</th>
-            <th className="px-3 py-2">Flags</th><th className="px-3 py-2">Review</th><th className="px-3 py-2">Found</th>
+            <th className="px-3 py-2">Source</th>
+            <th className="px-3 py-2">Notion</th>
+            <th className="px-3 py-2">t</th>
+            <th className="px-3 py-2">Target</th>
+            <th className="px-3 py-2">Flags</th>
+            <th className="px-3 py-2">Review</th>
+            <th className="px-3 py-2">Found</th>
           </tr>
         </thead>
         <tbody>
           {reductions.map((r) => (
             <tr key={r.id} className="border-t border-slate-100 hover:bg-slate-50">
-              <td className="px-3 py-2"><Link to={`/projects/${projectId}/reductions/${r.id}`} className="font-medium text-brand-700 hover:underline">{r.source.modelName}</Link> <span className="text-xs text-slate-500">r{r.source.revision}</span></td>
+              <td className="px-3 py-2">
+                <Link
+                  to={`/projects/${projectId}/reductions/${r.id}`}
+                  className="font-medium text-brand-700 hover:underline"
+                >
+                  {r.source.modelName}
+                </Link>{" "}
+                <span className="text-xs text-slate-500">r{r.source.revision}</span>
+              </td>
               <td className="px-3 py-2">{notionLabel[r.notion]}</td>
               <td className="px-3 py-2">{r.timeScale}</td>
-              <td className="px-3 py-2">{r.target ? r.target.modelName : <span className="text-slate-600">{r.targetNodeCount} nodes: {r.targetNames.join(", ")}</span>}</td>
+              <td className="px-3 py-2">
+                {r.target ? (
+                  r.target.modelName
+                ) : (
+                  <span className="text-slate-600">
+                    {r.targetNodeCount} nodes: {r.targetNames.join(", ")}
+                  </span>
+                )}
+              </td>
               <td className="px-3 py-2 text-xs text-slate-600">{r.flags.join(", ")}</td>
-              <td className="px-3 py-2"><ReviewStateBadge state={r.reviewState} /></td>
-              <td className="px-3 py-2 text-xs text-slate-500">{r.foundBy?.displayName ?? "—"} · {new Date(r.createdAt).toLocaleDateString()}</td>
+              <td className="px-3 py-2">
+                <ReviewStateBadge state={r.reviewState} />
+              </td>
+              <td className="px-3 py-2 text-xs text-slate-500">
+                {r.foundBy?.displayName ?? "—"} · {new Date(r.createdAt).toLocaleDateString()}
+              </td>
             </tr>
           ))}
         </tbody>

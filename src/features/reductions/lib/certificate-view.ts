@@ -9,15 +9,27 @@ import type { Certificate } from "@shared/schemas/reductions";
 export const BLOCK_COLOURS = ["#0d9488", "#2563eb", "#c026d3", "#ea580c", "#ca8a04", "#16a34a", "#db2777", "#7c3aed"];
 export const CONTEXT_COLOUR = { 0: "#cbd5e1", 1: "#475569" } as const;
 
-export interface SourceNodeRole { block: number | null; targetName: string | null; contextValue: 0 | 1 | null; colour: string }
+export interface SourceNodeRole {
+  block: number | null;
+  targetName: string | null;
+  contextValue: 0 | 1 | null;
+  colour: string;
+}
 
 /** For each source node, the target node it helps encode (block emulation), or its fixed context value. */
 export function sourceNodeRoles(cert: Certificate): Map<string, SourceNodeRole> {
   const roles = new Map<string, SourceNodeRole>();
-  for (const node of cert.source.nodes) roles.set(node.name, { block: null, targetName: null, contextValue: null, colour: "#94a3b8" });
+  for (const node of cert.source.nodes)
+    roles.set(node.name, { block: null, targetName: null, contextValue: null, colour: "#94a3b8" });
   if (cert.notion === "block-emulation") {
     cert.witness.blocks.forEach((b, j) => {
-      for (const name of b.nodes) roles.set(name, { block: j, targetName: b.target, contextValue: null, colour: BLOCK_COLOURS[j % BLOCK_COLOURS.length]! });
+      for (const name of b.nodes)
+        roles.set(name, {
+          block: j,
+          targetName: b.target,
+          contextValue: null,
+          colour: BLOCK_COLOURS[j % BLOCK_COLOURS.length]!,
+        });
     });
     for (const [name, value] of Object.entries(cert.witness.context)) {
       roles.set(name, { block: null, targetName: null, contextValue: value, colour: CONTEXT_COLOUR[value] });
@@ -25,7 +37,13 @@ export function sourceNodeRoles(cert: Certificate): Map<string, SourceNodeRole> 
   }
   if (cert.notion === "coarse-graining") {
     cert.witness.observables.forEach((o, j) => {
-      for (const name of o.inputs) roles.set(name, { block: j, targetName: o.target, contextValue: null, colour: BLOCK_COLOURS[j % BLOCK_COLOURS.length]! });
+      for (const name of o.inputs)
+        roles.set(name, {
+          block: j,
+          targetName: o.target,
+          contextValue: null,
+          colour: BLOCK_COLOURS[j % BLOCK_COLOURS.length]!,
+        });
     });
   }
   return roles;
@@ -43,18 +61,30 @@ function encode(cert: Certificate, source: BooleanNetwork, targetState: string):
   return source.names.map((name) => values.get(name) ?? "0").join("");
 }
 
-function observe(cert: Extract<Certificate, { notion: "coarse-graining" }>, source: BooleanNetwork, state: string): string {
+function observe(
+  cert: Extract<Certificate, { notion: "coarse-graining" }>,
+  source: BooleanNetwork,
+  state: string,
+): string {
   const index = new Map(source.names.map((n, i) => [n, i] as const));
   return cert.witness.observables
     .map((o) => {
       let row = 0;
-      o.inputs.forEach((name, j) => { if (state[index.get(name)!] === "1") row |= 1 << j; });
+      o.inputs.forEach((name, j) => {
+        if (state[index.get(name)!] === "1") row |= 1 << j;
+      });
       return o.table[row]!;
     })
     .join("");
 }
 
-export interface PairedStep { step: number; target: string; source: string; expected: string; agrees: boolean }
+export interface PairedStep {
+  step: number;
+  target: string;
+  source: string;
+  expected: string;
+  agrees: boolean;
+}
 
 /**
  * G's run from `targetStart` beside F's run from the encoded state, F sampled every t steps. For a coarse-graining the

@@ -3,7 +3,8 @@ import { Run } from "@shared/schemas/runs";
 import { apiRequest } from "@/lib/api-client";
 import { runKeys, runPath } from "./keys";
 
-export const cancelRun = (projectId: string, runId: string) => apiRequest(`${runPath(projectId, runId)}/cancel`, Run, { method: "POST" });
+export const cancelRun = (projectId: string, runId: string) =>
+  apiRequest(`${runPath(projectId, runId)}/cancel`, Run, { method: "POST" });
 
 export function useCancelRun(projectId: string, runId: string) {
   const qc = useQueryClient();

@@ -3,7 +3,8 @@ import { z } from "zod";
 import { apiRequest } from "@/lib/api-client";
 import { runKeys, runPath } from "./keys";
 
-export const deleteRun = (projectId: string, runId: string) => apiRequest(runPath(projectId, runId), z.unknown(), { method: "DELETE" });
+export const deleteRun = (projectId: string, runId: string) =>
+  apiRequest(runPath(projectId, runId), z.unknown(), { method: "DELETE" });
 
 export function useDeleteRun(projectId: string, runId: string) {
   const qc = useQueryClient();

@@ -1,5 +1,8 @@
 // Query keys of the runs feature, widest first: invalidating runKeys.project(id) refreshes lists and details.
-export interface RunFilter { kind?: string; state?: string }
+export interface RunFilter {
+  kind?: string;
+  state?: string;
+}
 
 export const runKeys = {
   all: ["runs"] as const,

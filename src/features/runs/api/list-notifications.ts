@@ -7,7 +7,12 @@ export const listNotifications = () => apiRequest("/notifications", Notification
 
 /** Checked every 30 s; anonymous visitors get 401, which the bell shows as nothing. */
 export const notificationsQuery = () =>
-  queryOptions({ queryKey: runKeys.notifications(), queryFn: listNotifications, refetchInterval: 30_000, retry: false });
+  queryOptions({
+    queryKey: runKeys.notifications(),
+    queryFn: listNotifications,
+    refetchInterval: 30_000,
+    retry: false,
+  });
 
 export function useNotifications() {
   return useQuery(notificationsQuery());

@@ -3,7 +3,8 @@ import { Run } from "@shared/schemas/runs";
 import { apiRequest } from "@/lib/api-client";
 import { runKeys, runPath } from "./keys";
 
-export const retryRun = (projectId: string, runId: string) => apiRequest(`${runPath(projectId, runId)}/retry`, Run, { method: "POST" });
+export const retryRun = (projectId: string, runId: string) =>
+  apiRequest(`${runPath(projectId, runId)}/retry`, Run, { method: "POST" });
 
 export function useRetryRun(projectId: string, runId: string) {
   const qc = useQueryClient();

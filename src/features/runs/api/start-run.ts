@@ -5,7 +5,8 @@ import { runKeys, runsPath } from "./keys";
 
 export type StartRunInput = Omit<StartRunBody, "modelRevisionId"> & { modelRevisionId?: string | null };
 
-export const startRun = (projectId: string, body: StartRunInput) => apiRequest(runsPath(projectId), StartRunResponse, { method: "POST", body });
+export const startRun = (projectId: string, body: StartRunInput) =>
+  apiRequest(runsPath(projectId), StartRunResponse, { method: "POST", body });
 
 export function useStartRun(projectId: string) {
   const qc = useQueryClient();

@@ -37,26 +37,52 @@ export function NotificationBell() {
         className="relative rounded-md p-2 text-slate-200 hover:bg-slate-800 hover:text-white"
         data-testid="notification-bell"
       >
-        <svg viewBox="0 0 24 24" className="h-5 w-5" fill="none" stroke="currentColor" strokeWidth={1.8} aria-hidden="true">
+        <svg
+          viewBox="0 0 24 24"
+          className="h-5 w-5"
+          fill="none"
+          stroke="currentColor"
+          strokeWidth={1.8}
+          aria-hidden="true"
+        >
           <path d="M6 8a6 6 0 1 1 12 0c0 7 3 9 3 9H3s3-2 3-9" strokeLinecap="round" strokeLinejoin="round" />
           <path d="M10.3 21a1.94 1.94 0 0 0 3.4 0" strokeLinecap="round" />
         </svg>
         {unread > 0 && (
-          <span className="absolute -right-0.5 -top-0.5 min-w-4 rounded-full bg-red-600 px-1 text-center text-[10px] font-semibold leading-4 text-white" data-testid="notification-count">
+          <span
+            className="absolute -right-0.5 -top-0.5 min-w-4 rounded-full bg-red-600 px-1 text-center text-[10px] font-semibold leading-4 text-white"
+            data-testid="notification-count"
+          >
             {unread > 99 ? "99+" : unread}
           </span>
         )}
       </button>
       {isOpen && (
-        <div role="dialog" aria-label="Notifications" className="absolute right-0 z-30 mt-2 w-80 rounded-lg border border-slate-200 bg-white text-slate-900 shadow-lg">
+        <div
+          role="dialog"
+          aria-label="Notifications"
+          className="absolute right-0 z-30 mt-2 w-80 rounded-lg border border-slate-200 bg-white text-slate-900 shadow-lg"
+        >
           <p className="border-b border-slate-100 px-4 py-2 text-sm font-semibold">Notifications</p>
           {data.items.length === 0 ? (
-            <p className="px-4 py-3 text-sm text-slate-500">Nothing yet. Runs that take longer than a minute tell you here when they end.</p>
+            <p className="px-4 py-3 text-sm text-slate-500">
+              Nothing yet. Runs that take longer than a minute tell you here when they end.
+            </p>
           ) : (
             <ul className="max-h-96 divide-y divide-slate-100 overflow-y-auto">
               {data.items.map((n) => (
                 <li key={n.id} className={`px-4 py-2 text-sm ${n.readAt ? "" : "bg-brand-50"}`}>
-                  {n.link ? <Link to={n.link} className="font-medium text-brand-700 hover:underline" onClick={() => setOpen(false)}>{n.title}</Link> : <span className="font-medium">{n.title}</span>}
+                  {n.link ? (
+                    <Link
+                      to={n.link}
+                      className="font-medium text-brand-700 hover:underline"
+                      onClick={() => setOpen(false)}
+                    >
+                      {n.title}
+                    </Link>
+                  ) : (
+                    <span className="font-medium">{n.title}</span>
+                  )}
                   <p className="text-slate-600">{n.body}</p>
                   <p className="text-xs text-slate-400">{new Date(n.createdAt).toLocaleString()}</p>
                 </li>

@@ -21,12 +21,23 @@ export function RunActions({ run }: { run: Run }) {
     <div className="space-y-2">
       <div className="flex flex-wrap gap-2">
         {!isRunFinished(run.state) && (
-          <Button variant="secondary" onClick={() => cancel.mutate()} disabled={cancel.isPending} data-testid="cancel-run">Cancel run</Button>
+          <Button
+            variant="secondary"
+            onClick={() => cancel.mutate()}
+            disabled={cancel.isPending}
+            data-testid="cancel-run"
+          >
+            Cancel run
+          </Button>
         )}
         {(run.state === "failed" || run.state === "cancelled") && (
-          <Button onClick={() => retry.mutate()} disabled={retry.isPending} data-testid="retry-run">Retry</Button>
+          <Button onClick={() => retry.mutate()} disabled={retry.isPending} data-testid="retry-run">
+            Retry
+          </Button>
         )}
-        <Button variant="danger" onClick={onDelete} disabled={remove.isPending} data-testid="delete-run">Delete</Button>
+        <Button variant="danger" onClick={onDelete} disabled={remove.isPending} data-testid="delete-run">
+          Delete
+        </Button>
       </div>
       {error && <Alert>{error.message}</Alert>}
     </div>

@@ -23,11 +23,14 @@ export function RunProgress({ run }: { run: Run }) {
     <div className="space-y-2" data-testid="run-progress" data-fraction={run.progressFraction}>
       <div className="flex flex-wrap items-baseline justify-between gap-2 text-sm">
         <span className="font-medium text-slate-800">
-          {Math.round(run.progressFraction * 100)}% <span className="font-normal text-slate-500">· {run.progressPhase}</span>
+          {Math.round(run.progressFraction * 100)}%{" "}
+          <span className="font-normal text-slate-500">· {run.progressPhase}</span>
         </span>
         <span className="text-slate-600" data-testid="run-times">
           {run.startedAt ? <>Elapsed {formatDuration(elapsedMs)}</> : "Waiting for a worker"}
-          {isLive && run.startedAt && (remainingMs === null ? " · estimating time left…" : ` · about ${formatDuration(remainingMs)} left`)}
+          {isLive &&
+            run.startedAt &&
+            (remainingMs === null ? " · estimating time left…" : ` · about ${formatDuration(remainingMs)} left`)}
         </span>
       </div>
       <ProgressBar fraction={run.progressFraction} label="Run progress" tone={tone} />

@@ -10,7 +10,11 @@ const tones: Record<RunState, string> = {
 
 export function RunStateBadge({ state }: { state: RunState }) {
   return (
-    <span className={`inline-flex rounded-full px-2.5 py-0.5 text-xs font-medium capitalize ${tones[state]}`} data-testid="run-state" data-state={state}>
+    <span
+      className={`inline-flex rounded-full px-2.5 py-0.5 text-xs font-medium capitalize ${tones[state]}`}
+      data-testid="run-state"
+      data-state={state}
+    >
       {state}
     </span>
   );

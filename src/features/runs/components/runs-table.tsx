@@ -7,7 +7,12 @@ import { RunStateBadge } from "./run-state-badge";
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 export function RunsTable({ projectId, runs }: { projectId: string; runs: Run[] }) {
-  if (runs.length === 0) return <p className="text-sm text-slate-500" data-testid="runs-empty">No runs match.</p>;
+  if (runs.length === 0)
+    return (
+      <p className="text-sm text-slate-500" data-testid="runs-empty">
+        No runs match.
+      </p>
+    );
   return (
     <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
       <table className="min-w-full divide-y divide-slate-200 text-sm" data-testid="runs-table">
@@ -23,10 +28,23 @@ export function RunsTable({ projectId, runs }: { projectId: string; runs: Run[] 
           {runs.map((run) => (
             <tr key={run.id} className="hover:bg-slate-50">
               <td className="px-4 py-2">
-                <Link to={`/projects/${projectId}/runs/${run.id}`} className="font-medium text-brand-700 hover:underline">{run.kind}</Link>
+                <Link
+                  to={`/projects/${projectId}/runs/${run.id}`}
+                  className="font-medium text-brand-700 hover:underline"
+                >
+                  {run.kind}
+                </Link>
               </td>
-              <td className="px-4 py-2"><RunStateBadge state={run.state} /></td>
-              <td className="px-4 py-2"><ProgressBar fraction={run.progressFraction} label={`Progress of run ${run.id}`} tone={run.state === "failed" ? "danger" : run.state === "cancelled" ? "muted" : "brand"} /></td>
+              <td className="px-4 py-2">
+                <RunStateBadge state={run.state} />
+              </td>
+              <td className="px-4 py-2">
+                <ProgressBar
+                  fraction={run.progressFraction}
+                  label={`Progress of run ${run.id}`}
+                  tone={run.state === "failed" ? "danger" : run.state === "cancelled" ? "muted" : "brand"}
+                />
+              </td>
               <td className="whitespace-nowrap px-4 py-2 text-slate-600">{when(run.createdAt)}</td>
             </tr>
           ))}

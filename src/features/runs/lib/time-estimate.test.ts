@@ -8,23 +8,35 @@ const iso = (ms: number) => new Date(ms).toISOString();
 describe("timeEstimate", () => {
   it("timeEstimate(run, now) predicts the exact remaining time of a run progressing at a constant rate", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1_000, max: 10_000_000 }), fc.double({ min: 0.02, max: 0.999, noNaN: true }), (totalMs, f) => {
-        const now = t0 + f * totalMs;
-        const e = timeEstimate({ startedAt: iso(t0), finishedAt: null, progressFraction: f }, now);
-        // ISO strings keep whole milliseconds, so allow the rounding of the start and of now.
-        expect(Math.abs(e.remainingMs! - (1 - f) * totalMs)).toBeLessThanOrEqual(2 / f);
-      }),
+      fc.property(
+        fc.integer({ min: 1_000, max: 10_000_000 }),
+        fc.double({ min: 0.02, max: 0.999, noNaN: true }),
+        (totalMs, f) => {
+          const now = t0 + f * totalMs;
+          const e = timeEstimate({ startedAt: iso(t0), finishedAt: null, progressFraction: f }, now);
+          // ISO strings keep whole milliseconds, so allow the rounding of the start and of now.
+          expect(Math.abs(e.remainingMs! - (1 - f) * totalMs)).toBeLessThanOrEqual(2 / f);
+        },
+      ),
       { seed: 20261202 },
     );
   });
 
   it("timeEstimate(run, now) gives no estimate before 2% and none for a queued run", () => {
-    expect(timeEstimate({ startedAt: iso(t0), finishedAt: null, progressFraction: 0.01 }, t0 + 5000)).toEqual({ elapsedMs: 5000, remainingMs: null });
-    expect(timeEstimate({ startedAt: null, finishedAt: null, progressFraction: 0 }, t0)).toEqual({ elapsedMs: 0, remainingMs: null });
+    expect(timeEstimate({ startedAt: iso(t0), finishedAt: null, progressFraction: 0.01 }, t0 + 5000)).toEqual({
+      elapsedMs: 5000,
+      remainingMs: null,
+    });
+    expect(timeEstimate({ startedAt: null, finishedAt: null, progressFraction: 0 }, t0)).toEqual({
+      elapsedMs: 0,
+      remainingMs: null,
+    });
   });
 
   it("timeEstimate(run, now) measures a finished run from start to finish, whatever now is", () => {
-    expect(timeEstimate({ startedAt: iso(t0), finishedAt: iso(t0 + 61_000), progressFraction: 0.4 }, t0 + 999_999)).toEqual({ elapsedMs: 61_000, remainingMs: 0 });
+    expect(
+      timeEstimate({ startedAt: iso(t0), finishedAt: iso(t0 + 61_000), progressFraction: 0.4 }, t0 + 999_999),
+    ).toEqual({ elapsedMs: 61_000, remainingMs: 0 });
   });
 });
 

@@ -1,10 +1,16 @@
 // Elapsed and remaining time of a run from its progress fraction, assuming the rate so far continues (the
 // estimate a progress bar conventionally shows; common practice). No estimate until 2% is done: early rates mislead.
-export interface TimeEstimate { elapsedMs: number; remainingMs: number | null }
+export interface TimeEstimate {
+  elapsedMs: number;
+  remainingMs: number | null;
+}
 
 const MIN_FRACTION_FOR_ESTIMATE = 0.02;
 
-export function timeEstimate(run: { startedAt: string | null; finishedAt: string | null; progressFraction: number }, nowMs: number): TimeEstimate {
+export function timeEstimate(
+  run: { startedAt: string | null; finishedAt: string | null; progressFraction: number },
+  nowMs: number,
+): TimeEstimate {
   if (!run.startedAt) return { elapsedMs: 0, remainingMs: null };
   const end = run.finishedAt ? Date.parse(run.finishedAt) : nowMs;
   const elapsedMs = Math.max(0, end - Date.parse(run.startedAt));

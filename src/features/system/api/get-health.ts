@@ -5,7 +5,12 @@ import { apiRequest } from "@/lib/api-client";
 export const systemKeys = { all: ["system"] as const, health: () => [...systemKeys.all, "health"] as const };
 
 export const healthQuery = () =>
-  queryOptions({ queryKey: systemKeys.health(), queryFn: () => apiRequest("/health", Health), refetchInterval: 30_000, retry: false });
+  queryOptions({
+    queryKey: systemKeys.health(),
+    queryFn: () => apiRequest("/health", Health),
+    refetchInterval: 30_000,
+    retry: false,
+  });
 
 export function useHealth() {
   return useQuery(healthQuery());
