@@ -260,4 +260,3 @@ describe("evaluateExpectations", () => {
     expect(() => evaluateExpectations(net, table, { shouldStop: () => ++calls > 1 })).toThrow(CancelledError);
   });
 });
-

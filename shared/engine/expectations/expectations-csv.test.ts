@@ -6,7 +6,7 @@ import { MAX_CSV_ERRORS, parseExpectationsCsv, readExpectationsCsv, writeExpecta
 
 const HEADER = "id,update,knock_out,over_express,inputs,outcome,pattern,from,count,source,note";
 
-const nameArb = fc.constantFrom("Cyst", "Lum", "GlfA", "DrmK", "x0", "x_1", "Node12", "a");
+const nameArb: fc.Arbitrary<string> = fc.constantFrom("Cyst", "Lum", "GlfA", "DrmK", "x0", "x_1", "Node12", "a");
 const assignmentArb: fc.Arbitrary<Assignment> = fc
   .uniqueArray(fc.tuple(nameArb, fc.constantFrom<0 | 1>(0, 1)), { selector: ([n]) => n, maxLength: 4 })
   .map((entries) => Object.fromEntries(entries));
