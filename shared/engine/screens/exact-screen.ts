@@ -81,6 +81,50 @@ function substituteHeld(
   return { reduced: checkNetwork({ names: Array.from(kept, (i) => net.names[i]!), regulators, tables }), kept };
 }
 
+/**
+ * Add to basin[a] every state outside the held subspace whose successor (the unperturbed successor with the held
+ * bits overwritten) lies in the basin of reduced attractor a. Held bit positions are squeezed out from the highest
+ * down, so the lower ones keep their place while the word shrinks. Unrolled for one and two held nodes: this loop
+ * over all 2^n states is as costly as the reduced analysis itself.
+ */
+function countOutsideStates(
+  succ: Uint32Array,
+  attractorOf: Int32Array,
+  heldMask: number,
+  heldValues: number,
+  heldNodes: number[],
+  basin: Float64Array,
+): void {
+  const removed = [...heldNodes].sort((a, b) => b - a);
+  const hi = removed[0] ?? 0;
+  const lo = removed[1] ?? -1;
+  const hiLow = (1 << hi) - 1;
+  const loLow = lo < 0 ? 0 : (1 << lo) - 1;
+  if (removed.length === 1) {
+    for (let s = 0; s < succ.length; s++) {
+      if ((s & heldMask) === heldValues) continue;
+      const t = succ[s]!;
+      basin[attractorOf[(t & hiLow) | ((t >>> (hi + 1)) << hi)]!]!++;
+    }
+    return;
+  }
+  if (removed.length === 2) {
+    for (let s = 0; s < succ.length; s++) {
+      if ((s & heldMask) === heldValues) continue;
+      let t = succ[s]!;
+      t = (t & hiLow) | ((t >>> (hi + 1)) << hi);
+      basin[attractorOf[(t & loLow) | ((t >>> (lo + 1)) << lo)]!]!++;
+    }
+    return;
+  }
+  for (let s = 0; s < succ.length; s++) {
+    if ((s & heldMask) === heldValues) continue;
+    let t = succ[s]!;
+    for (const i of removed) t = (t & ((1 << i) - 1)) | ((t >>> (i + 1)) << i);
+    basin[attractorOf[t]!]!++;
+  }
+}
+
 /** One row: the perturbation's attractors, basins and phenotype share, compared with the context's baseline. */
 export function exactScreenRow(
   ctx: ExactScreenContext,
@@ -105,17 +149,8 @@ export function exactScreenRow(
     for (let q = 0; q < kept.length; q++) s |= ((r >>> q) & 1) << kept[q]!;
     return s >>> 0;
   };
-  // Held positions removed from the highest down, so the lower ones keep their place while the word shrinks.
-  const removed = [...held.keys()].sort((a, b) => b - a);
   const basin = Float64Array.from(sub.attractors, (a) => a.basin);
-  const succ = base.successors;
-  const of = sub.attractorOf;
-  for (let s = 0; s < succ.length; s++) {
-    if ((s & heldMask) === heldValues) continue;
-    let t = succ[s]!;
-    for (const i of removed) t = (t & ((1 << i) - 1)) | ((t >>> (i + 1)) << i);
-    basin[of[t]!]!++;
-  }
+  countOutsideStates(base.successors, sub.attractorOf, heldMask, heldValues, [...held.keys()], basin);
   let phenotypeAttractors = 0;
   let phenotypeBasin = 0;
   let unchanged = 0;
