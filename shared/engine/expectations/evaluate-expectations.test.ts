@@ -8,7 +8,7 @@ import { YEAST_RULE_TEXT } from "../rules/yeast-rule-text.test-support";
 import { randomNK } from "../update/random-networks.test-support";
 import type { AttractorMethod } from "./attractor-census";
 import type { Assignment, Expectation, ExpectedOutcome } from "./expectation";
-import { evaluateExpectation, evaluateExpectations } from "./evaluate-expectations";
+import { evaluateExpectation, evaluateExpectations, groupByCondition } from "./evaluate-expectations";
 import { readExpectationsCsv } from "./expectations-csv";
 import { referenceStatus } from "./reference-judge.test-support";
 
@@ -242,6 +242,26 @@ describe("evaluateExpectations", () => {
       ["li2004-only-fixed-points", "undecided", "cycle-bound"],
       ["li2004-mitotic-off", "undecided", "cycle-bound"],
     ]);
+  });
+
+  it("groupByCondition groups expectations by condition whatever the order of the names, and sharding by group changes no result", () => {
+    const net = randomNK(6, 2, 11);
+    const cond = (knockOut: string[]) => ({ knockOut, overExpress: [], inputs: {} });
+    const count = { kind: "attractor-count", comparison: "at-least", count: 2 } as const;
+    const table = [
+      expectation(count, { id: "a", condition: cond(["g0", "g1"]) }),
+      expectation({ kind: "some-attractor", pattern: { g2: 1 } }, { id: "b", condition: cond([]) }),
+      expectation({ kind: "no-attractor", pattern: { g3: 0 } }, { id: "c", condition: cond(["g1", "g0"]) }),
+    ];
+    const groups = groupByCondition(table);
+    expect(groups).toEqual([[0, 2], [1]]);
+    const sharded = groups.flatMap((g) =>
+      evaluateExpectations(
+        net,
+        g.map((i) => table[i]!),
+      ),
+    );
+    expect(sharded.sort((x, y) => (x.id < y.id ? -1 : 1))).toEqual(evaluateExpectations(net, table));
   });
 
   it("evaluateExpectations reports progress up to 1 and stops with CancelledError on request", () => {

@@ -128,6 +128,19 @@ function conditionKey(c: ExpectationCondition): string {
   ]);
 }
 
+/**
+ * Indices of the expectations grouped by condition, in order of first appearance: a run that shards a table by
+ * these groups keeps one analysis per condition, as one unsplit evaluateExpectations call does.
+ */
+export function groupByCondition(expectations: readonly Expectation[]): number[][] {
+  const groups = new Map<string, number[]>();
+  expectations.forEach((e, i) => {
+    const key = conditionKey(e.condition);
+    groups.set(key, [...(groups.get(key) ?? []), i]);
+  });
+  return [...groups.values()];
+}
+
 /** Evaluate every expectation; results in the order given. Progress counts expectations. */
 export function evaluateExpectations(
   net: BooleanNetwork,

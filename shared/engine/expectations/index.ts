@@ -40,6 +40,7 @@ export { judgeOutcome, describeAttractor, type ExpectationStatus, type Judgement
 export {
   evaluateExpectations,
   evaluateExpectation,
+  groupByCondition,
   attractorMethods,
   EVALUATION_DEFAULTS,
   type EvaluationOptions,
