@@ -2,8 +2,9 @@
 // up to its size limit (synchronous: Kauffman's functional-graph view, J. Theor. Biol. 1969; asynchronous: terminal
 // components after Thomas, J. Theor. Biol. 1991). Above it, SAT enumerates fixed points completely and cycles up to a
 // length (Dubrova and Teslenko, IEEE/ACM TCBB 2011), and one synchronous trajectory answers reachability from a state.
+import { compareStateIndices, rotateToSmallest } from "../bits";
 import { EngineError } from "../errors";
-import { stateToString, type BooleanNetwork } from "../network";
+import { stateFromString, stateToString, type BooleanNetwork } from "../network";
 import { satCycles, satFixedPoints } from "../sat";
 import { asynchronousAttractors, analyseSynchronous, MAX_ASYNC_NODES } from "../state-graph";
 import { bytesFromString, bytesToString, successorTable, trajectory, MAX_TABLE_NODES } from "../update";
@@ -52,13 +53,6 @@ function cycleFrom(successors: Uint32Array, start: number): number[] {
   return path.slice(seen.get(x)!);
 }
 
-function rotateToSmallestText(cycle: number[], n: number): number[] {
-  let best = 0;
-  const texts = cycle.map((s) => stateToString(s, n));
-  for (let q = 1; q < texts.length; q++) if (texts[q]! < texts[best]!) best = q;
-  return [...cycle.slice(best), ...cycle.slice(0, best)];
-}
-
 /** Exact synchronous analysis (up to 24 nodes); also answers fixed-point questions for either update. */
 export function exactSynchronousMethod(maxNodes: number = MAX_TABLE_NODES): AttractorMethod {
   return {
@@ -82,16 +76,13 @@ export function exactSynchronousMethod(maxNodes: number = MAX_TABLE_NODES): Attr
         found.sort((a, b) => (a.states[0]! < b.states[0]! ? -1 : 1));
         return exactCensus(METHOD.exactSynchronous, found);
       }
-      const cycle = rotateToSmallestText(cycleFrom(successors, indexOfText(scope.state)), n);
+      const cycle = rotateToSmallest(
+        cycleFrom(successors, stateFromString(scope.state)),
+        (a, b) => compareStateIndices(a, b, n) < 0,
+      );
       return exactCensus(METHOD.exactSynchronous, [fromIndices(cycle, n)]);
     },
   };
-}
-
-function indexOfText(state: string): number {
-  let s = 0;
-  for (let i = state.length - 1; i >= 0; i--) s = s * 2 + (state[i] === "1" ? 1 : 0);
-  return s;
 }
 
 /** Exact asynchronous attractors (up to 22 nodes): all of them, or those reachable from a state. */
@@ -106,7 +97,7 @@ export function exactAsynchronousMethod(maxNodes: number = MAX_ASYNC_NODES): Att
       const n = net.names.length;
       let attractors = asynchronousAttractors(net, options).attractors;
       if (scope.kind === "reachable-from") {
-        const reached = asynchronousReach(net, indexOfText(scope.state));
+        const reached = asynchronousReach(net, stateFromString(scope.state));
         attractors = attractors.filter((a) => reached[a.states[0]!] === 1);
       }
       return exactCensus(
@@ -164,10 +155,7 @@ export function trajectoryMethod(maxSteps: number): AttractorMethod {
           fixedPointsComplete: false,
           gap: { reason: "trajectory-bound", text: `the trajectory did not close within ${maxSteps} steps` },
         };
-      const cycle = rows.slice(first, rows.length - 1);
-      let best = 0;
-      for (let q = 1; q < cycle.length; q++) if (cycle[q]! < cycle[best]!) best = q;
-      const ordered = [...cycle.slice(best), ...cycle.slice(0, best)];
+      const ordered = rotateToSmallest(rows.slice(first, rows.length - 1), (a, b) => a < b);
       return exactCensus(METHOD.trajectory, [
         { reading: readingOfStates(ordered), size: ordered.length, states: ordered.slice(0, MAX_LISTED_STATES) },
       ]);
