@@ -1,3 +1,5 @@
 export { tableFormula } from "./function-formula";
 export { satCycles, satFixedPoints } from "./synchronous-cycles";
 export type { SatCycle, SatCycleSearch, SatOptions } from "./synchronous-cycles";
+export { ClauseSolver } from "./clause-solver";
+export { tableCubes } from "./table-cubes";
