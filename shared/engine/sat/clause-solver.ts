@@ -3,7 +3,10 @@
 // (fixed points, trap spaces, closure of observables) write clauses over numbered variables straight to its MiniSat
 // instance; only the pinned version's internals are relied on. MiniSat here takes one assumption per call, so a
 // temporary group of clauses is guarded by an activation variable: assume it for a call, retire it to drop the group.
+// Each instance has a fixed 64 MB heap (the build cannot grow it), about 10^7 clause literals; running out aborts
+// the instance, which is reported as an EngineError with code SOLVER_MEMORY.
 import Logic from "logic-solver";
+import { EngineError } from "../errors";
 
 interface MiniSatInternals {
   addClause(terms: number[]): boolean;
@@ -39,7 +42,7 @@ export class ClauseSolver {
       this.unsat = true;
       return;
     }
-    if (!this.sat.addClause(lits as number[])) this.unsat = true;
+    if (!guarded(() => this.sat.addClause(lits as number[]))) this.unsat = true;
   }
 
   /**
@@ -48,16 +51,32 @@ export class ClauseSolver {
    */
   solve(assume?: number): (boolean | null)[] | null {
     if (this.unsat) return null;
-    this.sat.ensureVar(this.nextVar - 1);
-    const ok = assume === undefined ? this.sat.solve() : this.sat.solveAssuming(assume);
+    const ok = guarded(() => {
+      this.sat.ensureVar(this.nextVar - 1);
+      return assume === undefined ? this.sat.solve() : this.sat.solveAssuming(assume);
+    });
     const solution = ok ? this.sat.getSolution() : null;
-    if (assume !== undefined) this.sat.retireVar(assume);
+    if (assume !== undefined) guarded(() => this.sat.retireVar(assume));
     else if (!ok) this.unsat = true;
     return solution;
   }
 
   /** Switch off the clauses guarded by an activation variable that is no longer needed. */
   retire(activation: number): void {
-    if (!this.unsat) this.sat.retireVar(activation);
+    if (!this.unsat) guarded(() => this.sat.retireVar(activation));
+  }
+}
+
+// The Emscripten build aborts by throwing a string; anything else is passed on unchanged.
+function guarded<T>(call: () => T): T {
+  try {
+    return call();
+  } catch (err) {
+    if (typeof err === "string" && err.startsWith("abort("))
+      throw new EngineError(
+        "SOLVER_MEMORY",
+        "the SAT solver ran out of its 64 MB of memory; ask for fewer solutions or a smaller network",
+      );
+    throw err;
   }
 }

@@ -19,3 +19,15 @@ export {
   fixedByName,
   type RestrictedNetwork,
 } from "./subspace";
+export {
+  asynchronousAttractorReport,
+  MAX_EXACT_FREE_NODES,
+  MAX_LISTED_ATTRACTOR_STATES,
+  DEFAULT_ATTRACTOR_TRAP_SPACE_LIMIT,
+  type AsynchronousAttractorReport,
+  type AttractorReportOptions,
+  type AttractorMethod,
+  type LocatedAttractor,
+  type MinimalTrapSpaceReport,
+  type TrapSpaceVerdict,
+} from "./trap-space-attractors";

@@ -6,7 +6,11 @@
 // condition without auxiliaries. Inclusion-minimal (or maximal) solutions are reached by asking for a strictly
 // smaller (larger) trap space until there is none, then blocking every trap space that contains (lies in) the one
 // found; each blocked solution contains (lies in) a recorded one, so the enumeration is complete when the solver
-// finds no more. Minimal trap spaces all fix the nodes that percolation fixes, so the search runs on the rest.
+// finds no more. Minimal trap spaces all fix the nodes that percolation fixes, so the search runs on the rest; and
+// every fixed point is a minimal trap space, found far faster by the plain fixed-point encoding, so fixed points are
+// enumerated first and blocked, and the trap-space solver only has to look for the cyclic ones (measured on chaotic
+// 400-node networks of in-degree 3: two thirds of the time went into reaching fixed points through the trap-space
+// encoding).
 import { CancelledError, EngineError } from "../errors";
 import type { BooleanNetwork } from "../network";
 import type { Progress, ShouldStop } from "../progress";
@@ -15,8 +19,8 @@ import { FREE, fixedByName, percolate, restrictToSubspace, subspacePattern } fro
 
 /** Largest network the trap-space search accepts (the bench shows 1,000 nodes of in-degree 2 in seconds). */
 export const MAX_TRAP_SPACE_NODES = 5_000;
-/** Default cap on the number of trap spaces listed. */
-export const DEFAULT_TRAP_SPACE_LIMIT = 10_000;
+/** Default cap on the number of trap spaces listed (blocking clauses of many more can fill the solver's heap). */
+export const DEFAULT_TRAP_SPACE_LIMIT = 1_000;
 
 export type TrapSpaceKind = "minimal" | "maximal";
 
@@ -129,9 +133,27 @@ export function forEachTrapSpace(
     for (let i = 0; i < m; i++) if (s[i] !== FREE) out.push(fixLit(i, s[i]!));
     return out;
   };
-  if (kind === "maximal") solver.clause(fixingsOutside(new Int8Array(m).fill(FREE)));
-
   let count = 0;
+  if (kind === "maximal") solver.clause(fixingsOutside(new Int8Array(m).fill(FREE)));
+  else {
+    // Fixed points are the trap spaces that fix every node; asked for first, under a guard, they come quickly.
+    onProgress?.(0, "fixed points");
+    const everyNodeFixed = solver.newVar();
+    for (let i = 0; i < m; i++) solver.clause([-everyNodeFixed, fixLit(i, 1), fixLit(i, 0)]);
+    for (;;) {
+      if (shouldStop?.()) throw new CancelledError();
+      const ask = solver.newVar();
+      solver.clause([-ask, everyNodeFixed]);
+      const point = solver.solve(ask);
+      if (!point) break;
+      if (count >= limit) return { complete: false, percolatedNodes };
+      const s = decode(point);
+      visit(lift(s));
+      count++;
+      solver.clause(fixingsOutside(s));
+    }
+    solver.retire(everyNodeFixed);
+  }
   for (;;) {
     if (shouldStop?.()) throw new CancelledError();
     const solution = solver.solve();
