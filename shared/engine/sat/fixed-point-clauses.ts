@@ -8,19 +8,32 @@ import type { ShouldStop } from "../progress";
 import { ClauseSolver } from "./clause-solver";
 import { tableCubes } from "./table-cubes";
 
-/** Require state variables vars[i] (one per node) to form a fixed point of `net`. */
-export function requireFixedPoint(solver: ClauseSolver, net: BooleanNetwork, vars: ArrayLike<number>): void {
-  for (let i = 0; i < net.names.length; i++) {
-    const regs = net.regulators[i]!;
-    for (const value of [0, 1] as const) {
-      for (const cube of tableCubes(net.tables[i]!, regs.length, value)) {
-        const clause = [value === 1 ? vars[i]! : -vars[i]!];
-        for (let j = 0; j < regs.length; j++)
-          if (cube.mask & (1 << j)) clause.push((cube.value >> j) & 1 ? -vars[regs[j]!]! : vars[regs[j]!]!);
-        solver.clause(clause);
-      }
+/** Require output <-> table(inputs), where row bit j of the table is the value of variable inputs[j]. */
+export function requireNodeFunction(
+  solver: ClauseSolver,
+  table: Uint8Array,
+  inputs: ArrayLike<number>,
+  output: number,
+): void {
+  for (const value of [0, 1] as const) {
+    for (const cube of tableCubes(table, inputs.length, value)) {
+      const clause = [value === 1 ? output : -output];
+      for (let j = 0; j < inputs.length; j++)
+        if (cube.mask & (1 << j)) clause.push((cube.value >> j) & 1 ? -inputs[j]! : inputs[j]!);
+      solver.clause(clause);
     }
   }
+}
+
+/** Require state variables vars[i] (one per node) to form a fixed point of `net`. */
+export function requireFixedPoint(solver: ClauseSolver, net: BooleanNetwork, vars: ArrayLike<number>): void {
+  for (let i = 0; i < net.names.length; i++)
+    requireNodeFunction(
+      solver,
+      net.tables[i]!,
+      Array.from(net.regulators[i]!, (r) => vars[r]!),
+      vars[i]!,
+    );
 }
 
 /**

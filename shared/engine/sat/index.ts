@@ -3,4 +3,4 @@ export { satCycles, satFixedPoints } from "./synchronous-cycles";
 export type { SatCycle, SatCycleSearch, SatOptions } from "./synchronous-cycles";
 export { ClauseSolver } from "./clause-solver";
 export { tableCubes } from "./table-cubes";
-export { requireFixedPoint, forEachFixedPoint } from "./fixed-point-clauses";
+export { requireNodeFunction, requireFixedPoint, forEachFixedPoint } from "./fixed-point-clauses";
