@@ -51,8 +51,22 @@ if (caseIndex >= 0) {
   const [name, task] = process.argv.slice(caseIndex + 1, caseIndex + 3) as [string, Task];
   process.stdout.write(JSON.stringify(measure(name, task)) + "\n");
 } else {
-  const targets: Record<string, number> = { "trap-spaces nk-1000-2": 60, "fixed-points nk-300-2": 10, "fixed-points nk-300-3": 10 };
-  const names = ["nk-100-2", "nk-300-2", "nk-1000-2", "nk-100-3", "nk-300-3", "nk-1000-3", "threshold-100-3", "threshold-300-3", "threshold-1000-3"];
+  const targets: Record<string, number> = {
+    "trap-spaces nk-1000-2": 60,
+    "fixed-points nk-300-2": 10,
+    "fixed-points nk-300-3": 10,
+  };
+  const names = [
+    "nk-100-2",
+    "nk-300-2",
+    "nk-1000-2",
+    "nk-100-3",
+    "nk-300-3",
+    "nk-1000-3",
+    "threshold-100-3",
+    "threshold-300-3",
+    "threshold-1000-3",
+  ];
   const rows: string[][] = [["case", "network", "seconds", "target", "result"]];
   const script = fileURLToPath(import.meta.url);
   for (const task of ["trap-spaces", "fixed-points", "elimination"] as const) {
@@ -68,12 +82,20 @@ if (caseIndex >= 0) {
         const r = JSON.parse(child.stdout.trim().split("\n").pop()!) as { seconds: number; detail: string };
         seconds = r.seconds.toFixed(2);
         detail = r.detail;
-      } else if (child.error === undefined && child.signal === null) detail = `failed: ${child.stderr.trim().split("\n").pop()}`;
-      const verdict = target === undefined ? "-" : seconds !== "stopped" && Number(seconds) < target ? `< ${target} s ok` : `< ${target} s MISSED`;
+      } else if (child.error === undefined && child.signal === null)
+        detail = `failed: ${child.stderr.trim().split("\n").pop()}`;
+      const verdict =
+        target === undefined
+          ? "-"
+          : seconds !== "stopped" && Number(seconds) < target
+            ? `< ${target} s ok`
+            : `< ${target} s MISSED`;
       rows.push([task, name, seconds, verdict, detail]);
       process.stdout.write(`${rows.at(-1)!.join("  ")}\n`);
     }
   }
   const widths = rows[0]!.map((_, c) => Math.max(...rows.map((r) => r[c]!.length)));
-  process.stdout.write("\n" + rows.map((r) => r.map((cell, c) => cell.padEnd(widths[c]!)).join("  ")).join("\n") + "\n");
+  process.stdout.write(
+    "\n" + rows.map((r) => r.map((cell, c) => cell.padEnd(widths[c]!)).join("  ")).join("\n") + "\n",
+  );
 }

@@ -3,7 +3,11 @@
 // complete; beyond it each minimal trap space small enough is analysed exactly and the rest are reported as holding
 // at least one attractor, and the whole list is "found so far" (attractors outside every minimal trap space are not
 // excluded).
-import { asynchronousAttractorReport, DEFAULT_ATTRACTOR_TRAP_SPACE_LIMIT, MAX_EXACT_FREE_NODES } from "@shared/engine/trap-spaces";
+import {
+  asynchronousAttractorReport,
+  DEFAULT_ATTRACTOR_TRAP_SPACE_LIMIT,
+  MAX_EXACT_FREE_NODES,
+} from "@shared/engine/trap-spaces";
 import { integerOption, parseCommandArgs, printJson, readModel, runCommand } from "../cli-io";
 
 export const summary =

@@ -8,7 +8,15 @@ import { coarseGrainBySat, MAX_SAT_COARSE_GRAINING_TIME, nodeObservable } from "
 import { MAX_TABULATED_NODES } from "@shared/engine/emulation";
 import type { BooleanNetwork } from "@shared/engine/network";
 import { mergeShards, searchShard } from "../../reductions/search-plan";
-import { CommandError, integerOption, parseCommandArgs, printJson, readModelFile, runCommand, UsageError } from "../cli-io";
+import {
+  CommandError,
+  integerOption,
+  parseCommandArgs,
+  printJson,
+  readModelFile,
+  runCommand,
+  UsageError,
+} from "../cli-io";
 
 export const summary = "coarse-grain <file> --observe A,B [--time t] --json: coarse-graining onto observed nodes";
 const USAGE = `usage: coarse-grain <model file> --observe A,B,... [--time t (1..8, default 1)] [--json]
@@ -28,7 +36,12 @@ export function run(args: string[]): Promise<number> {
       .filter(Boolean);
     if (observe.length === 0) throw new UsageError("--observe needs at least one node name");
     if (source.names.length > MAX_TABULATED_NODES)
-      return bySat(source, observe, integerOption(values.time, "--time", 1, MAX_SAT_COARSE_GRAINING_TIME, 1), values.json);
+      return bySat(
+        source,
+        observe,
+        integerOption(values.time, "--time", 1, MAX_SAT_COARSE_GRAINING_TIME, 1),
+        values.json,
+      );
     const search = {
       mode: "coarse-grain" as const,
       sourceModelId: "",

@@ -57,7 +57,13 @@ export function run(args: string[]): Promise<number> {
         })()
       : (() => {
           const r = eliminateNodes(model.network, values["all-eligible"] ? "all-eligible" : chosen);
-          return { eliminated: r.eliminated, fixed: {}, network: r.network, skipped: r.skipped, preserves: r.preserves };
+          return {
+            eliminated: r.eliminated,
+            fixed: {},
+            network: r.network,
+            skipped: r.skipped,
+            preserves: r.preserves,
+          };
         })();
     const ruleText = printRuleText(networkToDefinition(out.network));
     if (values.json) {
@@ -73,7 +79,11 @@ export function run(args: string[]): Promise<number> {
     const lines = [
       `# ${model.network.names.length} nodes -> ${out.network.names.length}; eliminated: ${out.eliminated.join(", ") || "none"}`,
       ...(values.percolate && out.eliminated.length > 0
-        ? [`# fixed: ${Object.entries(out.fixed).map(([k, v]) => `${k}=${v}`).join(", ")}`]
+        ? [
+            `# fixed: ${Object.entries(out.fixed)
+              .map(([k, v]) => `${k}=${v}`)
+              .join(", ")}`,
+          ]
         : []),
       ...out.skipped.map((s) => `# kept ${s.node}: eliminating it would give a node ${s.regulators} regulators`),
       `# preserves: ${out.preserves}`,

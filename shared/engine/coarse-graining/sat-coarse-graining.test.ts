@@ -25,7 +25,9 @@ describe("coarseGrainBySat", () => {
         (n, k, t, seed, observedCount) => {
           const rng = seedrandom(String(seed));
           const net = randomNetwork(rng, n, Math.min(k, n));
-          const observed = [...new Set(Array.from({ length: Math.min(observedCount, n) }, () => Math.floor(rng() * n)))];
+          const observed = [
+            ...new Set(Array.from({ length: Math.min(observedCount, n) }, () => Math.floor(rng() * n))),
+          ];
           const exact = coarseGrain(
             net,
             observed.map((o) => nodeObservable(net, o)),

@@ -49,14 +49,18 @@ export function coarseGrainBySat(
   const n = source.names.length;
   const m = observedNodes.length;
   if (n > MAX_SAT_COARSE_GRAINING_NODES)
-    throw new EngineError("TOO_LARGE", `coarse-graining by SAT supports at most ${MAX_SAT_COARSE_GRAINING_NODES} source nodes`);
+    throw new EngineError(
+      "TOO_LARGE",
+      `coarse-graining by SAT supports at most ${MAX_SAT_COARSE_GRAINING_NODES} source nodes`,
+    );
   if (m < 1) throw new EngineError("BAD_OBSERVABLE", "at least one observed node is needed");
   if (m > MAX_SAT_OBSERVED_NODES)
     throw new EngineError("TOO_LARGE", `at most ${MAX_SAT_OBSERVED_NODES} observed nodes are supported`);
   if (!(Number.isInteger(time) && time >= 1 && time <= MAX_SAT_COARSE_GRAINING_TIME))
     throw new EngineError("BAD_ARGUMENT", `the time scale must be an integer 1..${MAX_SAT_COARSE_GRAINING_TIME}`);
   for (const o of observedNodes)
-    if (!(Number.isInteger(o) && o >= 0 && o < n)) throw new EngineError("BAD_OBSERVABLE", `node ${o} is not a source node`);
+    if (!(Number.isInteger(o) && o >= 0 && o < n))
+      throw new EngineError("BAD_OBSERVABLE", `node ${o} is not a source node`);
   if (new Set(observedNodes).size !== m) throw new EngineError("BAD_OBSERVABLE", "a node is observed twice");
   const { onProgress, shouldStop } = control;
   onProgress?.(0, "encoding the cone of the observed nodes");
@@ -74,9 +78,7 @@ export function coarseGrainBySat(
   const cone = new Set(layers.flat());
 
   const solver = new ClauseSolver();
-  const copies = [0, 1].map(() =>
-    layers.map((layer) => new Map(layer.map((i) => [i, solver.newVar()] as const))),
-  );
+  const copies = [0, 1].map(() => layers.map((layer) => new Map(layer.map((i) => [i, solver.newVar()] as const))));
   for (const copy of copies)
     for (let s = 1; s <= time; s++)
       for (const i of layers[s]!) {

@@ -55,7 +55,10 @@ export function eliminateNodes(
 ): EliminationResult {
   const n = net.names.length;
   if (n > MAX_ELIMINATION_NODES)
-    throw new EngineError("TOO_LARGE", `node elimination supports at most ${MAX_ELIMINATION_NODES} nodes; this network has ${n}`);
+    throw new EngineError(
+      "TOO_LARGE",
+      `node elimination supports at most ${MAX_ELIMINATION_NODES} nodes; this network has ${n}`,
+    );
   const limit = Math.min(options.maxRegulators ?? MAX_ELIMINATION_REGULATORS, MAX_ELIMINATION_REGULATORS);
   const { onProgress, shouldStop } = options;
   const w = working(net);
@@ -91,7 +94,7 @@ export function eliminateNodes(
   // Rounds: rank the eligible nodes by cost, eliminate in that order while each still fits, repeat until a round
   // removes nothing (costs change as regulator lists merge, so they are checked again before each step).
   const skipped = new Map<number, number>();
-  for (let changed = true; changed; ) {
+  for (let changed = true; changed;) {
     changed = false;
     const candidates: { v: number; cost: number }[] = [];
     for (let v = 0; v < n; v++) if (w.alive[v] && !w.regs[v]!.includes(v)) candidates.push({ v, cost: cost(w, v) });
@@ -206,7 +209,7 @@ function result(
   const n = net.names.length;
   const position = new Int32Array(n).fill(-1);
   const kept: number[] = [];
-  for (let i = 0; i < n; i++) if (w.alive[i]) (position[i] = kept.length), kept.push(i);
+  for (let i = 0; i < n; i++) if (w.alive[i]) ((position[i] = kept.length), kept.push(i));
   const network = checkNetwork({
     names: kept.map((i) => net.names[i]!),
     regulators: kept.map((i) => Int32Array.from(w.regs[i]!, (r) => position[r]!)),

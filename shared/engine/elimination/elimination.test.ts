@@ -101,7 +101,8 @@ describe("percolateConstants", () => {
             .sort();
         expect(asyncSets(net, cut)).toEqual(asyncSets(result.network, (s) => s));
         // Every attractor state of the original has the percolated values.
-        for (const s of fixedPoints(net)) for (const [name, v] of Object.entries(result.fixed)) expect(Number(s[net.names.indexOf(name)])).toBe(v);
+        for (const s of fixedPoints(net))
+          for (const [name, v] of Object.entries(result.fixed)) expect(Number(s[net.names.indexOf(name)])).toBe(v);
       }),
       { seed: 1222, numRuns: 60 },
     );

@@ -24,7 +24,10 @@ export interface PercolationResult {
 export function percolateConstants(net: BooleanNetwork, hold: Record<string, 0 | 1> = {}): PercolationResult {
   const n = net.names.length;
   if (n > MAX_PERCOLATION_NODES)
-    throw new EngineError("TOO_LARGE", `percolation supports at most ${MAX_PERCOLATION_NODES} nodes; this network has ${n}`);
+    throw new EngineError(
+      "TOO_LARGE",
+      `percolation supports at most ${MAX_PERCOLATION_NODES} nodes; this network has ${n}`,
+    );
   const start = new Int8Array(n).fill(FREE);
   const index = new Map(net.names.map((name, i) => [name, i] as const));
   for (const [name, value] of Object.entries(hold)) {

@@ -65,7 +65,8 @@ export function essentialPart(regs: readonly number[], table: Uint8Array): { reg
   for (let j = kept.length - 1; j >= 0; j--) {
     const bit = 1 << j;
     let depends = false;
-    for (let r = 0; r < current.length && !depends; r++) if (!(r & bit) && current[r] !== current[r | bit]) depends = true;
+    for (let r = 0; r < current.length && !depends; r++)
+      if (!(r & bit) && current[r] !== current[r | bit]) depends = true;
     if (depends) continue;
     const smaller = new Uint8Array(current.length >> 1);
     for (let r = 0; r < smaller.length; r++) smaller[r] = current[((r >> j) << (j + 1)) | (r & (bit - 1))]!;
@@ -87,7 +88,7 @@ export function restrictToSubspace(net: BooleanNetwork, subspace: Int8Array): Re
   const n = net.names.length;
   const position = new Int32Array(n).fill(-1);
   const nodes: number[] = [];
-  for (let i = 0; i < n; i++) if (subspace[i] === FREE) (position[i] = nodes.length), nodes.push(i);
+  for (let i = 0; i < n; i++) if (subspace[i] === FREE) ((position[i] = nodes.length), nodes.push(i));
   const regulators: Int32Array[] = [];
   const tables: Uint8Array[] = [];
   for (const i of nodes) {

@@ -17,7 +17,9 @@ describe("asynchronousAttractorReport", () => {
         const net = randomNK(n, Math.min(k, n), seed);
         const report = asynchronousAttractorReport(net);
         expect(report.completeness).toBe("proved complete");
-        expect(report.attractors.map((a) => a.states!).sort((a, b) => (a[0]! < b[0]! ? -1 : 1))).toEqual(exactSets(net));
+        expect(report.attractors.map((a) => a.states!).sort((a, b) => (a[0]! < b[0]! ? -1 : 1))).toEqual(
+          exactSets(net),
+        );
         // Each minimal trap space holds at least one attractor (Klarner et al., Natural Computing 2015).
         for (const t of report.minimalTrapSpaces) expect(t.attractorCount).toBeGreaterThanOrEqual(1);
         const outside = report.attractors.filter((a) => a.trapSpace === null).length;

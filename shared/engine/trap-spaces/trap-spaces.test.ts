@@ -11,7 +11,7 @@ function isTrapSpace(net: BooleanNetwork, pattern: string): boolean {
   const n = pattern.length;
   const free = [...pattern].flatMap((c, i) => (c === "-" ? [i] : []));
   for (let sub = 0; sub < 2 ** free.length; sub++) {
-    const state = [...pattern].map((c) => (c === "1" ? 1 : 0));
+    const state: number[] = [...pattern].map((c) => (c === "1" ? 1 : 0));
     free.forEach((i, q) => (state[i] = (sub >> q) & 1));
     for (let i = 0; i < n; i++) {
       if (pattern[i] === "-") continue;
@@ -81,9 +81,7 @@ describe("trapSpaces", () => {
     ] as const) {
       const net = randomNK(10, k, `ten-${seed}`);
       expect(trapSpaces(net).trapSpaces.map((t) => t.pattern)).toEqual(bruteForce(net, "minimal"));
-      expect(trapSpaces(net, { kind: "maximal" }).trapSpaces.map((t) => t.pattern)).toEqual(
-        bruteForce(net, "maximal"),
-      );
+      expect(trapSpaces(net, { kind: "maximal" }).trapSpaces.map((t) => t.pattern)).toEqual(bruteForce(net, "maximal"));
     }
   });
 
@@ -110,11 +108,7 @@ describe("trapSpaces", () => {
 
   it("trapSpaces(net, { limit }) stops with complete false only when more trap spaces exist", () => {
     // Four independent self-activations (x' = x): 2^4 = 16 fixed points, each a minimal trap space.
-    const net = networkFromFunctions(
-      ["p", "q", "r", "s"],
-      [[0], [1], [2], [3]],
-      (_, x) => x[0]!,
-    );
+    const net = networkFromFunctions(["p", "q", "r", "s"], [[0], [1], [2], [3]], (_, x) => x[0]!);
     expect(trapSpaces(net).trapSpaces).toHaveLength(16);
     const cut = trapSpaces(net, { limit: 5 });
     expect(cut.complete).toBe(false);
