@@ -21,6 +21,7 @@ export {
 } from "./subspace";
 export {
   asynchronousAttractorReport,
+  MAX_ATTRACTOR_REPORT_NODES,
   MAX_EXACT_FREE_NODES,
   MAX_LISTED_ATTRACTOR_STATES,
   DEFAULT_ATTRACTOR_TRAP_SPACE_LIMIT,

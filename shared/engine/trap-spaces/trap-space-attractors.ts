@@ -12,8 +12,10 @@ import type { BooleanNetwork } from "../network";
 import type { Progress, ShouldStop } from "../progress";
 import { asynchronousAttractors, MAX_ASYNC_NODES } from "../state-graph";
 import { FREE, fixedByName, percolate, restrictToSubspace, subspacePattern } from "./subspace";
-import { forEachTrapSpace, type TrapSpace } from "./trap-spaces";
+import { forEachTrapSpace, MAX_TRAP_SPACE_NODES, type TrapSpace } from "./trap-spaces";
 
+/** Largest network accepted (the minimal trap spaces come first). */
+export const MAX_ATTRACTOR_REPORT_NODES = MAX_TRAP_SPACE_NODES;
 /** Largest free part (in nodes) of a subspace that is analysed exactly (the exact asynchronous limit). */
 export const MAX_EXACT_FREE_NODES = MAX_ASYNC_NODES;
 /** Attractors with more states than this are reported by size and pattern, without their states. */
