@@ -6,7 +6,8 @@ import Logic from "logic-solver";
 import { rotateToSmallest } from "../bits";
 import { CancelledError } from "../errors";
 import type { BooleanNetwork } from "../network";
-import type { LongTaskOptions } from "../update";
+import { bytesToString, type LongTaskOptions } from "../update";
+import { forEachFixedPoint } from "./fixed-point-clauses";
 import { tableFormula } from "./function-formula";
 
 export interface SatCycle {
@@ -78,10 +79,21 @@ export function satCycles(net: BooleanNetwork, maxLength: number, options: SatOp
   return { cycles: sortCycles(cycles), complete: true };
 }
 
-/** All fixed points (states equal to their synchronous successor). */
+/**
+ * All fixed points (states equal to their synchronous successor), sorted by text. They go through the clause form of
+ * x <-> F(x) (fixed-point-clauses.ts) rather than the formula layer: on 1,000-node networks that is many times faster.
+ */
 export function satFixedPoints(net: BooleanNetwork, options: SatOptions = {}): { states: string[]; complete: boolean } {
-  const r = satCycles(net, 1, options);
-  return { states: r.cycles.map((c) => c.states[0]!), complete: r.complete };
+  const states: string[] = [];
+  options.onProgress?.(0, "fixed points");
+  const complete = forEachFixedPoint(
+    net,
+    options.maxSolutions ?? 10_000,
+    (state) => states.push(bytesToString(state)),
+    options.shouldStop,
+  );
+  options.onProgress?.(1, "done");
+  return { states: states.sort(), complete };
 }
 
 function sortCycles(cycles: SatCycle[]): SatCycle[] {
