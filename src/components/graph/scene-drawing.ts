@@ -55,10 +55,10 @@ export function drawScene(scene: GraphScene, options: DrawOptions = {}): Drawing
   const fontSize = options.fontSize ?? LABEL_FONT_SIZE;
   const xs = scene.nodes.map((n) => n.x);
   const ys = scene.nodes.map((n) => n.y);
-  const minX = Math.min(...xs, 0);
-  const minY = Math.min(...ys, 0);
-  const spanX = Math.max(...xs, 0) - minX;
-  const spanY = Math.max(...ys, 0) - minY;
+  const minX = xs.length ? Math.min(...xs) : 0;
+  const minY = ys.length ? Math.min(...ys) : 0;
+  const spanX = xs.length ? Math.max(...xs) - minX : 0;
+  const spanY = ys.length ? Math.max(...ys) - minY : 0;
   const fit = options.fit ?? { width: 720, height: 480 };
   const scale =
     options.scale ?? Math.min(spanX > 0 ? fit.width / spanX : Infinity, spanY > 0 ? fit.height / spanY : Infinity, 60);

@@ -5,8 +5,7 @@ import type { Hierarchy, HierarchyParameters } from "@shared/schemas/automata";
 import { ApiError } from "@/lib/api-client";
 import { useHierarchy } from "../api/get-hierarchy";
 import { buildHierarchyGraph } from "../lib/hierarchy-graph-model";
-import { QUALITATIVE } from "@/components/graph/palette";
-import { blockSizeColour } from "../lib/hierarchy-scene";
+import { blockSizeColour, LARGEST_COLOURED_BLOCK } from "../lib/hierarchy-scene";
 import { HierarchyGraph } from "./hierarchy-graph";
 import { HierarchyFilters, type HierarchyFilterValues } from "./hierarchy-filters";
 
@@ -28,10 +27,10 @@ function Legend({ largest }: { largest: number }) {
   return (
     <div className="flex flex-wrap items-center gap-3 text-xs text-slate-600" aria-label="Edge colours">
       <span>Arrow colour = least block size k:</span>
-      {Array.from({ length: Math.min(largest, QUALITATIVE.length) }, (_, i) => i + 1).map((k) => (
+      {Array.from({ length: Math.min(largest, LARGEST_COLOURED_BLOCK) }, (_, i) => i + 1).map((k) => (
         <span key={k} className="flex items-center gap-1">
           <span className="inline-block h-1 w-5 rounded" style={{ background: blockSizeColour(k) }} />
-          {k === QUALITATIVE.length && largest > k ? `≥ ${k}` : k}
+          {k === LARGEST_COLOURED_BLOCK && largest > k ? `≥ ${k}` : k}
         </span>
       ))}
     </div>

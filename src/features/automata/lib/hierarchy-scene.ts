@@ -3,11 +3,18 @@
 // folded zig-zag over several rows so every label has room. Arrow colours come from the colour-blind-safe palette.
 import { forceLayout } from "@/components/graph/force-layout";
 import { separateParallelEdges, type GraphScene, type SceneEdge } from "@/components/graph/graph-scene";
-import { NODE_COLOUR, qualitativeColour } from "@/components/graph/palette";
+import { NODE_COLOUR, qualitativeColour, SIGN_COLOURS } from "@/components/graph/palette";
 import type { HierarchyGraphModel } from "./hierarchy-graph-model";
 
-/** Arrow colour for a least block size k: palette entry k − 1, the last entry for every larger k. */
-export const blockSizeColour = (minBlock: number) => qualitativeColour(minBlock - 1);
+/** The largest block size with a colour of its own; every larger k shares the palette's last colour. */
+export const LARGEST_COLOURED_BLOCK = 9;
+
+/**
+ * Arrow colour for a least block size k. k = 1 (a rule that is a renaming of another) is neutral grey; from k = 2 on
+ * the palette runs in order, so the common small block sizes get its strongest colours and only k ≥ 9 its yellow.
+ */
+export const blockSizeColour = (minBlock: number) =>
+  minBlock <= 1 ? SIGN_COLOURS["non-essential"] : qualitativeColour(minBlock - 2);
 
 /** Sideways spacing, in layout units, between neighbours on one drawn row. */
 const COLUMN = 1;
