@@ -231,6 +231,21 @@ function Behaviours({
     };
   }, [sigma, counts, container]);
 
+  // Centre on an emphasised node (a search hit) once per hit; display data exist only after a render with it.
+  useEffect(() => {
+    if (!emphasis) return;
+    const centre = () => {
+      const pos = sigma.getNodeDisplayData(emphasis);
+      if (pos) sigma.getCamera().animate({ x: pos.x, y: pos.y, ratio: 0.8 }, { duration: 250 });
+    };
+    sigma.once("afterRender", centre);
+    sigma.scheduleRefresh();
+    return () => {
+      sigma.off("afterRender", centre);
+      sigma.getCamera().setState({ x: 0.5, y: 0.5, ratio: 1 });
+    };
+  }, [sigma, emphasis]);
+
   // A new focus or a new set of loops must reach the overlay even when sigma has nothing else to redraw.
   useEffect(() => {
     sigma.scheduleRefresh();
@@ -244,7 +259,7 @@ export interface SceneSigmaProps {
   height: number;
   /** The node whose neighbourhood is shown (hover, keyboard focus or selection); others are muted. */
   focus?: string | null;
-  /** A node marked without muting the others (a search hit). */
+  /** A node marked and centred without muting the others (a search hit). */
   emphasis?: string | null;
   colourOf?: (id: string, colour: string) => string;
   /** Edge labels when nothing is focused; with a focus the focused edges always show theirs. */
