@@ -68,7 +68,7 @@ describe("separateParallelEdges", () => {
 });
 
 describe("widestGapMiddle", () => {
-  it("widestGapMiddle points a loop straight up when its node has no other edges", () => {
+  it("widestGapMiddle points straight up when nothing else leaves the node", () => {
     expect(widestGapMiddle([])).toBeCloseTo(-Math.PI / 2);
   });
 
@@ -85,15 +85,15 @@ describe("widestGapMiddle", () => {
     );
   });
 
-  it("placeSelfLoops turns a loop away from the node's one neighbour", () => {
+  it("placeSelfLoops turns a loop away from the node's neighbour and its label", () => {
     const scene = placeSelfLoops({
       nodes: [
         { id: "A", label: "A", x: 0, y: 0, size: 8, color: "#000" },
-        { id: "B", label: "B", x: 10, y: 0, size: 8, color: "#000" },
+        { id: "B", label: "B", x: 0, y: 10, size: 8, color: "#000" },
       ],
       edges: [edge("A", "B"), edge("A", "A")],
     });
-    // B lies to the right (angle 0), so the loop points left (angle ±π)
-    expect(Math.abs(scene.edges[1]!.loopAngle!)).toBeCloseTo(Math.PI);
+    // B lies below (angle π/2) and the label to the right (angle 0): the loop takes the middle of the rest
+    expect(scene.edges[1]!.loopAngle!).toBeCloseTo(-(3 * Math.PI) / 4);
   });
 });

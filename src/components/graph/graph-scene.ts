@@ -87,12 +87,12 @@ export function separateParallelEdges<E extends Pick<SceneEdge, "source" | "targ
 }
 
 /**
- * Points each self-loop into the widest empty angle around its node, so it does not cover the node's other edges.
- * A node with no other edges gets its loop on top.
+ * Points each self-loop into the widest empty angle around its node, so it covers neither the node's other edges nor
+ * its label (drawn to the right, angle 0).
  */
 export function placeSelfLoops(scene: GraphScene): GraphScene {
   const position = new Map(scene.nodes.map((n) => [n.id, n] as const));
-  const directions = new Map<string, number[]>();
+  const directions = new Map<string, number[]>(scene.nodes.map((n) => [n.id, [0]] as const));
   for (const e of scene.edges) {
     if (isSelfLoop(e)) continue;
     const s = position.get(e.source);

@@ -103,9 +103,10 @@ export function layoutHierarchy(graph: HierarchyGraph): HierarchyLayout {
     node.x = placed.x!;
     node.y = placed.y!;
   }
+  const routes = edges.map((e, i) => g.edge({ v: e.source, w: e.target, name: `e${i}` }));
+  const ends = edgeEnds(edges, routes, sceneNodes);
   const sceneEdges: SceneEdge[] = edges.map((e, i) => {
-    const routed = g.edge({ v: e.source, w: e.target, name: `e${i}` });
-    const points = routed.points ?? [];
+    const routed = routes[i]!;
     const verb = NOTION_VERBS[e.notion];
     return {
       id: `e${i}`,
@@ -115,8 +116,9 @@ export function layoutHierarchy(graph: HierarchyGraph): HierarchyLayout {
       head: "arrow",
       size: e.isComposed ? 1.5 : 2.5,
       curvature: 0,
-      // dagre's first and last points lie on the boxes; the circles are clipped separately
-      points: points.slice(1, -1),
+      // dagre's first and last points lie on the boxes, which are wide to hold the labels; the arrows instead leave
+      // a circle straight down and enter the next straight from above, so no head hides under a label
+      points: [ends[i]!.start, ...(routed.points ?? []).slice(1, -1), ends[i]!.end],
       label: edgeLabel(e),
       labelAt: routed.x !== undefined && routed.y !== undefined ? { x: routed.x, y: routed.y } : undefined,
       description: `${names.get(e.source)} ${verb} ${names.get(e.target)} at time scale ${e.timeScale}${e.isComposed ? " (composed from approved reductions, verified)" : ""}`,
@@ -132,4 +134,40 @@ export function layoutHierarchy(graph: HierarchyGraph): HierarchyLayout {
     },
     isolated,
   };
+}
+
+/**
+ * Where each arrow leaves its source and enters its target: just below or above the circle (whichever faces the
+ * other node), spread sideways when several arrows share a node so their heads do not land on each other.
+ */
+function edgeEnds(
+  edges: readonly HierarchyEdge[],
+  routes: readonly { points?: { x: number; y: number }[] }[],
+  nodes: ReadonlyMap<string, SceneNode>,
+): { start: { x: number; y: number }; end: { x: number; y: number } }[] {
+  const clearance = LABEL_FONT_SIZE / 2 + 6;
+  const slots = new Map<string, { index: number; towardX: number }[]>();
+  const claim = (node: string, index: number, towardX: number) =>
+    (slots.get(node) ?? slots.set(node, []).get(node)!).push({ index, towardX });
+  edges.forEach((e, i) => {
+    const points = routes[i]!.points ?? [];
+    claim(`out:${e.source}`, i, points[1]?.x ?? nodes.get(e.target)!.x);
+    claim(`in:${e.target}`, i, points[points.length - 2]?.x ?? nodes.get(e.source)!.x);
+  });
+  const offset = new Map<string, number>();
+  for (const [key, list] of slots) {
+    const node = nodes.get(key.slice(key.indexOf(":") + 1))!;
+    list.sort((a, b) => a.towardX - b.towardX || a.index - b.index);
+    const step = list.length > 1 ? Math.min(8, (1.4 * node.size) / (list.length - 1)) : 0;
+    list.forEach((slot, k) => offset.set(`${key}#${slot.index}`, (k - (list.length - 1) / 2) * step));
+  }
+  return edges.map((e, i) => {
+    const s = nodes.get(e.source)!;
+    const t = nodes.get(e.target)!;
+    const down = t.y >= s.y ? 1 : -1;
+    return {
+      start: { x: s.x + offset.get(`out:${e.source}#${i}`)!, y: s.y + down * Math.max(s.size + 14, clearance) },
+      end: { x: t.x + offset.get(`in:${e.target}#${i}`)!, y: t.y - down * Math.max(t.size + 14, clearance) },
+    };
+  });
 }
