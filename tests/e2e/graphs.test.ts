@@ -1,7 +1,7 @@
 // Every graph as a person sees it, in headless Chromium against the demo project: self-loops drawn and counted, two-way
 // regulations on separate curves, the exports in the screen's colours, the model hierarchy laid out the same on every
 // load with arrows pointing down, every automaton node labelled, nodes reachable and operable by keyboard, the skip
-// link, and the reduction pages on a 390 px wide phone without sideways scrolling.
+// link, the reduction pages on a 390 px wide phone without sideways scrolling, and a coarse-graining explained in words.
 import fs from "node:fs";
 import { XMLParser } from "fast-xml-parser";
 import type { Page } from "playwright-core";
@@ -19,7 +19,7 @@ let base: string;
 const errors: string[] = [];
 
 beforeAll(async () => {
-  browser = await openBrowserSession({ signInAs: "owner@demo.emulant.test" });
+  browser = await openBrowserSession({ signInAs: "owner@demo.emulant.test", withWorker: true });
   base = browser.server.baseUrl;
   browser.page.on("pageerror", (e) => errors.push(e.message));
 });
@@ -222,6 +222,43 @@ describe("graphs in the browser", () => {
     } finally {
       await page.setViewportSize({ width: 1280, height: 800 });
     }
+  });
+
+  it("captions a coarse-graining as such and says in words what each observable reads", async () => {
+    const { page, context } = browser;
+    const api = `${base}/api/projects/${PROJECT}`;
+    // A and B swap every step whatever C does, so observing A and B closes: G is the two-node swap
+    const created = await context.request.post(`${api}/models`, {
+      data: { name: `Swap with a passenger ${Date.now()}`, ruleText: "A' = B\nB' = A\nC' = A & C\n" },
+    });
+    expect(created.status()).toBe(201);
+    const modelId = (await created.json()).data.model.id as string;
+    const started = await context.request.post(`${api}/reductions/searches`, {
+      data: { mode: "coarse-grain", sourceModelId: modelId, observe: ["A", "B"] },
+    });
+    expect(started.status(), await started.text()).toBeLessThan(300);
+    const runId = (await started.json()).data.id as string;
+    await expect
+      .poll(async () => (await (await context.request.get(`${api}/runs/${runId}`)).json()).data.state, {
+        timeout: 60_000,
+      })
+      .toBe("succeeded");
+    const list = (await (await context.request.get(`${api}/reductions`)).json()).data as {
+      id: string;
+      notion: string;
+      source: { modelId: string };
+    }[];
+    const found = list.find((r) => r.source.modelId === modelId && r.notion === "coarse-graining");
+    expect(found).toBeDefined();
+    await page.goto(`${base}/projects/${PROJECT}/reductions/${found!.id}`);
+    await page.getByTestId("reduction-detail").waitFor();
+    expect(await page.getByTestId("source-caption").textContent()).toContain("the observable that reads the node");
+    const words = await page.getByTestId("observables-in-words").locator("li").allTextContents();
+    expect(words).toHaveLength(2);
+    for (const w of words) expect(w).toMatch(/^\S+ is 1 exactly when [AB] is 1 \(it copies [AB]\)$/);
+    expect(await page.getByTestId("codeword-table").textContent()).toContain("In words");
+    expect(await page.getByTestId("target-rules").textContent()).toMatch(/' = /);
+    await screenshot(page, "graphs-coarse-graining");
     expect(errors).toEqual([]);
   });
 });
