@@ -89,7 +89,7 @@ describe("reductions in the browser", () => {
 
     await page.goto(`${server.baseUrl}/projects/${projectId}/hierarchy`);
     await expect.poll(() => page.getByTestId("model-hierarchy").getAttribute("data-edges")).toBe("1");
-    await page.locator('[data-testid="model-hierarchy-graph"] canvas').first().waitFor();
+    await page.locator('[data-testid="model-hierarchy-graph"] circle').first().waitFor();
     await screenshot(page, "reductions-model-hierarchy");
     expect(errors).toEqual([]);
   });

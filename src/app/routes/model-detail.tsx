@@ -221,7 +221,7 @@ export function ModelDetailRoute() {
 
       <Section title="Wiring diagram" testId="wiring-section">
         {structure.data ? (
-          <WiringDiagram structure={structure.data} state={selectedState} pngName={`${baseName}.png`} />
+          <WiringDiagram structure={structure.data} state={selectedState} fileName={baseName} />
         ) : structure.error ? (
           <Alert>{structure.error.message}</Alert>
         ) : (

@@ -1,4 +1,5 @@
-// The frame every screen sits in: header with product name, navigation, the account slot, and the footer status.
+// The frame every screen sits in: a skip link (the first thing Tab reaches), header with product name, navigation,
+// the account slot, and the footer status.
 import { useState, type ReactNode } from "react";
 import { NavLink, Outlet } from "react-router-dom";
 import { HealthBadge } from "./health-badge";
@@ -22,6 +23,18 @@ export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: Reac
   const [isMenuOpen, setMenuOpen] = useState(false);
   return (
     <div className="flex min-h-screen flex-col">
+      <a
+        href="#main"
+        data-testid="skip-link"
+        onClick={(e) => {
+          // focus the content itself, so the next Tab continues from there rather than from the header
+          e.preventDefault();
+          document.getElementById("main")?.focus();
+        }}
+        className="sr-only z-50 rounded-md bg-white px-3 py-2 text-sm font-medium text-slate-900 shadow focus:not-sr-only focus:fixed focus:left-3 focus:top-3 focus:outline-2 focus:outline-amber-600"
+      >
+        Skip to content
+      </a>
       <header className="bg-slate-900 text-white shadow">
         <div className="mx-auto flex max-w-7xl items-center gap-4 px-4 py-3">
           <NavLink
@@ -63,7 +76,7 @@ export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: Reac
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
+      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 focus:outline-none">
         <Outlet />
       </main>
       <footer className="border-t border-slate-200 bg-white">

@@ -73,6 +73,8 @@ export function StateRaster({
       ref={canvas}
       data-testid={testId}
       data-steps={states.length}
+      role="img"
+      aria-label={`${states.length} states, one row per step, of the nodes ${nodes.join(", ")}; filled cells are on. First row ${states[0] ?? "none"}, last row ${states[states.length - 1] ?? "none"}.`}
       style={{ width, height }}
       className="max-w-full rounded border border-slate-200"
     />

@@ -5,7 +5,8 @@ import type { Hierarchy, HierarchyParameters } from "@shared/schemas/automata";
 import { ApiError } from "@/lib/api-client";
 import { useHierarchy } from "../api/get-hierarchy";
 import { buildHierarchyGraph } from "../lib/hierarchy-graph-model";
-import { edgeColour, HierarchyGraph } from "./hierarchy-graph";
+import { blockSizeColour, LARGEST_COLOURED_BLOCK } from "../lib/hierarchy-scene";
+import { HierarchyGraph } from "./hierarchy-graph";
 import { HierarchyFilters, type HierarchyFilterValues } from "./hierarchy-filters";
 
 export interface HierarchyExplorerProps {
@@ -26,10 +27,10 @@ function Legend({ largest }: { largest: number }) {
   return (
     <div className="flex flex-wrap items-center gap-3 text-xs text-slate-600" aria-label="Edge colours">
       <span>Arrow colour = least block size k:</span>
-      {Array.from({ length: Math.min(largest, 8) }, (_, i) => i + 1).map((k) => (
+      {Array.from({ length: Math.min(largest, LARGEST_COLOURED_BLOCK) }, (_, i) => i + 1).map((k) => (
         <span key={k} className="flex items-center gap-1">
-          <span className="inline-block h-1 w-5 rounded" style={{ background: edgeColour(k) }} />
-          {k === 8 && largest > 8 ? "≥ 8" : k}
+          <span className="inline-block h-1 w-5 rounded" style={{ background: blockSizeColour(k) }} />
+          {k === LARGEST_COLOURED_BLOCK && largest > k ? `≥ ${k}` : k}
         </span>
       ))}
     </div>
@@ -91,12 +92,13 @@ function Loaded({ hierarchy }: { hierarchy: Hierarchy }) {
           model={model}
           highlightRule={searchRule}
           onOpenRule={(r) => navigate(`/automata/rules/${r}?maxBlock=${hierarchy.maxBlock}`)}
+          fileName={`eca-hierarchy-k${filters.minBlock}-${filters.maxBlock}`}
         />
       )}
       <p className="text-xs text-slate-500">
-        Hover a node to see its arrows with their block sizes; click it to open the rule. With symmetry classes on, a
-        node is named by the least rule of its class (bigger dots are bigger classes); "≡" joins nodes that emulate each
-        other.
+        Hover a node (or Tab to it in the lists under the graph) to see its arrows with their block sizes; click it (or
+        press Enter) to open the rule. With symmetry classes on, a node is named by the least rule of its class (bigger
+        dots are bigger classes); "≡" joins nodes that emulate each other.
       </p>
     </div>
   );

@@ -52,8 +52,14 @@ export function AttractorTable({ result, selected, onSelect }: AttractorTablePro
               key={i}
               data-testid="attractor-row"
               aria-selected={selected === i}
+              tabIndex={0}
               onClick={() => onSelect(selected === i ? null : i)}
-              className={`cursor-pointer align-top ${selected === i ? "bg-brand-50" : "hover:bg-slate-50"}`}
+              onKeyDown={(e) => {
+                if (e.key !== "Enter" && e.key !== " ") return;
+                e.preventDefault();
+                onSelect(selected === i ? null : i);
+              }}
+              className={`cursor-pointer align-top focus-visible:outline-2 focus-visible:-outline-offset-2 focus-visible:outline-amber-600 ${selected === i ? "bg-brand-50" : "hover:bg-slate-50"}`}
             >
               <td className="px-3 py-2 tabular-nums text-slate-500">{i + 1}</td>
               <td className="px-3 py-2">{a.length === 1 ? "fixed point" : `cycle of ${a.length}`}</td>

@@ -20,7 +20,12 @@ export function BasinChart({
     <svg
       data-testid="basin-chart"
       role="img"
-      aria-label="Basin sizes"
+      aria-label={`Basin sizes: ${rows
+        .map(
+          (a, i) =>
+            `#${i + 1} ${a.length === 1 ? "fixed point" : `cycle of ${a.length}`}, ${((100 * a.basin) / result.stateCount).toFixed(1)}% of states`,
+        )
+        .join("; ")}`}
       viewBox={`0 0 ${width} ${rows.length * rowHeight + 8}`}
       className="w-full max-w-xl"
     >

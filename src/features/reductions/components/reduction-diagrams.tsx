@@ -1,53 +1,133 @@
-// F's wiring with each node coloured by the target node its block encodes (context nodes grey, dark for 1, light
-// for 0), and G's wiring beside it in the same colours, so a reader can match blocks to target nodes at a glance.
-import { useMemo } from "react";
+// F's wiring with each node coloured by what it carries of G (the target node its block encodes, or the observable
+// that reads it; context nodes grey, dark for 1, light for 0), and G's wiring beside it in the same colours with
+// its rules as text, so a reader can match blocks to target nodes at a glance.
+import { useMemo, useState } from "react";
 import { networkFromCertificate } from "@shared/engine/certificates";
-import { interactionGraph } from "@shared/engine/structure";
 import type { Certificate } from "@shared/schemas/reductions";
-import { NetworkGraph, type GraphEdge, type GraphNode } from "@/components/graph/network-graph";
-import { BLOCK_COLOURS, sourceNodeRoles } from "../lib/certificate-view";
+import { ExportButtons } from "@/components/graph/export-buttons";
+import { GraphEdgeList } from "@/components/graph/graph-edge-list";
+import { GraphNodeList } from "@/components/graph/graph-node-list";
+import type { GraphScene } from "@/components/graph/graph-scene";
+import { drawScene } from "@/components/graph/scene-drawing";
+import { SceneSigma } from "@/components/graph/scene-sigma";
+import { drawingToSvg } from "@/components/graph/scene-svg";
+import { BLOCK_COLOURS, observableInWords, sourceNodeRoles, targetRuleText } from "../lib/certificate-view";
+import { networkScene } from "../lib/reduction-scene";
 
-const SIGN_COLOUR = { positive: "#16a34a", negative: "#dc2626", dual: "#9333ea", "non-essential": "#cbd5e1" } as const;
+function sourceCaption(certificate: Certificate, nodeCount: number): string {
+  switch (certificate.notion) {
+    case "block-emulation":
+      return `Source F (${nodeCount} nodes): colour = the target node its block encodes; grey = context, light for 0 and dark for 1`;
+    case "coarse-graining":
+      return `Source F (${nodeCount} nodes): colour = the observable that reads the node; grey = read by no observable`;
+    case "dynamical-embedding":
+      return `Source F (${nodeCount} nodes): G's states are mapped to whole states of F (see the state map below), so no node stands for one node of G`;
+  }
+}
 
-function edgesOf(net: ReturnType<typeof networkFromCertificate>): GraphEdge[] {
-  return interactionGraph(net)
-    .edges.filter((e) => e.sign !== "non-essential")
-    .map((e) => ({ source: net.names[e.source]!, target: net.names[e.target]!, color: SIGN_COLOUR[e.sign] }));
+function targetCaption(certificate: Certificate, nodeCount: number): string {
+  switch (certificate.notion) {
+    case "block-emulation":
+      return `Target G (${nodeCount} nodes), one colour per node as its block in F`;
+    case "coarse-graining":
+      return `Target G (${nodeCount} nodes): the observables of F, one step of G for ${certificate.time} of F`;
+    case "dynamical-embedding":
+      return `Target G (${nodeCount} nodes)`;
+  }
+}
+
+function Diagram({
+  scene,
+  testId,
+  fileName,
+  title,
+}: {
+  scene: GraphScene;
+  testId: string;
+  fileName: string;
+  title: string;
+}) {
+  const [focus, setFocus] = useState<string | null>(null);
+  return (
+    <div className="space-y-2">
+      <SceneSigma
+        scene={scene}
+        height={340}
+        focus={focus}
+        onHoverNode={setFocus}
+        testId={testId}
+        description={`${title}: ${scene.nodes.length} nodes and ${scene.edges.length} regulations; listed as text below.`}
+      />
+      <div className="flex flex-wrap items-start justify-between gap-2">
+        <GraphNodeList
+          nodes={scene.nodes.map((n) => ({ id: n.id, label: n.label }))}
+          label={`Nodes of ${title}`}
+          hint="Tab to a node to see its regulations in the picture."
+          onFocusNode={setFocus}
+          onActivate={(id) => setFocus(id)}
+          testId={`${testId}-nodes`}
+        />
+        <ExportButtons
+          svg={() => drawingToSvg(drawScene(scene), title)}
+          fileName={fileName}
+          testIdPrefix={`${testId}-download`}
+        />
+      </div>
+      <GraphEdgeList edges={scene.edges} testId={`${testId}-edges`} />
+    </div>
+  );
 }
 
 export function ReductionDiagrams({ certificate }: { certificate: Certificate }) {
-  const { sourceNodes, sourceEdges, targetNodes, targetEdges } = useMemo(() => {
+  const { sourceScene, targetScene, ruleText } = useMemo(() => {
     const source = networkFromCertificate(certificate.source);
     const target = networkFromCertificate(certificate.target);
     const roles = sourceNodeRoles(certificate);
-    const sourceNodes: GraphNode[] = source.names.map((name) => {
+    const sourceScene = networkScene(source, (name) => {
       const role = roles.get(name)!;
       const suffix =
         role.contextValue !== null ? ` = ${role.contextValue}` : role.targetName ? ` → ${role.targetName}` : "";
-      return { id: name, label: name + suffix, color: role.colour };
+      return { label: name + suffix, color: role.colour, size: 9 };
     });
-    const targetNodes: GraphNode[] = target.names.map((name, j) => ({
-      id: name,
+    const targetScene = networkScene(target, (name, j) => ({
       label: name,
       color: BLOCK_COLOURS[j % BLOCK_COLOURS.length]!,
-      size: 12,
+      size: 11,
     }));
-    return { sourceNodes, sourceEdges: edgesOf(source), targetNodes, targetEdges: edgesOf(target) };
+    return { sourceScene, targetScene, ruleText: targetRuleText(certificate) };
   }, [certificate]);
 
   return (
-    <div className="grid gap-4 lg:grid-cols-2">
-      <figure>
-        <figcaption className="mb-1 text-sm font-medium text-slate-700">
-          Source F ({sourceNodes.length} nodes): colour = block, grey = context
+    <div className="grid min-w-0 gap-6 lg:grid-cols-2">
+      <figure className="min-w-0 space-y-1">
+        <figcaption className="text-sm font-medium text-slate-700" data-testid="source-caption">
+          {sourceCaption(certificate, sourceScene.nodes.length)}
         </figcaption>
-        <NetworkGraph nodes={sourceNodes} edges={sourceEdges} testId="source-diagram" />
+        <Diagram scene={sourceScene} testId="source-diagram" fileName="source-F" title="Source F" />
+        {certificate.notion === "coarse-graining" && (
+          <ul className="list-disc space-y-0.5 pl-5 text-sm text-slate-700" data-testid="observables-in-words">
+            {certificate.witness.observables.map((o) => (
+              <li key={o.target}>{observableInWords(o)}</li>
+            ))}
+          </ul>
+        )}
       </figure>
-      <figure>
-        <figcaption className="mb-1 text-sm font-medium text-slate-700">
-          Target G ({targetNodes.length} nodes)
+      <figure className="min-w-0 space-y-1">
+        <figcaption className="text-sm font-medium text-slate-700" data-testid="target-caption">
+          {targetCaption(certificate, targetScene.nodes.length)}
         </figcaption>
-        <NetworkGraph nodes={targetNodes} edges={targetEdges} testId="target-diagram" />
+        <div className="grid gap-3 sm:grid-cols-[minmax(0,1fr)_auto]">
+          <Diagram scene={targetScene} testId="target-diagram" fileName="target-G" title="Target G" />
+          <div className="min-w-0 sm:max-w-64">
+            <p className="text-xs font-medium uppercase text-slate-500">G's rules</p>
+            <pre
+              className="mt-1 overflow-x-auto rounded-md border border-slate-200 bg-slate-50 p-2 text-xs text-slate-800"
+              data-testid="target-rules"
+            >
+              {ruleText}
+            </pre>
+          </div>
+        </div>
       </figure>
     </div>
   );

@@ -115,12 +115,12 @@ export function SearchForm({ models, isPending, error, onSubmit }: SearchFormPro
       </div>
       <p className="text-sm text-slate-600">{modes.find((m) => m.mode === mode)!.hint}</p>
       <div className="flex flex-wrap items-end gap-4">
-        <label className="flex flex-col gap-1 text-sm">
+        <label className="flex min-w-0 max-w-full flex-col gap-1 text-sm">
           <span className="font-medium text-slate-700">Source model F</span>
           <select
             value={sourceModelId}
             onChange={(e) => setSource(e.target.value)}
-            className={inputClass}
+            className={`${inputClass} max-w-full`}
             data-testid="source-model"
           >
             {models.map((m) => (
@@ -132,12 +132,12 @@ export function SearchForm({ models, isPending, error, onSubmit }: SearchFormPro
         </label>
         {mode === "given-target" && (
           <>
-            <label className="flex flex-col gap-1 text-sm">
+            <label className="flex min-w-0 max-w-full flex-col gap-1 text-sm">
               <span className="font-medium text-slate-700">Target model G</span>
               <select
                 value={targetModelId}
                 onChange={(e) => setTarget(e.target.value)}
-                className={inputClass}
+                className={`${inputClass} max-w-full`}
                 data-testid="target-model"
               >
                 {models.map((m) => (

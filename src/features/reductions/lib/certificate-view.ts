@@ -2,12 +2,15 @@
 // which source node carries which target node, and the two runs side by side, the source run sampled every t steps.
 import { networkFromCertificate } from "@shared/engine/certificates";
 import type { BooleanNetwork } from "@shared/engine/network";
+import { networkToDefinition, printExpr, printRuleText, tableToExpr } from "@shared/engine/rules";
 import { bytesFromString, bytesToString, synchronousStep } from "@shared/engine/update";
 import type { Certificate } from "@shared/schemas/reductions";
+import { CONTEXT_COLOURS, QUALITATIVE } from "@/components/graph/palette";
 
-/** Distinct hues for up to eight blocks; more blocks reuse them (the codeword table names them anyway). */
-export const BLOCK_COLOURS = ["#0d9488", "#2563eb", "#c026d3", "#ea580c", "#ca8a04", "#16a34a", "#db2777", "#7c3aed"];
-export const CONTEXT_COLOUR = { 0: "#cbd5e1", 1: "#475569" } as const;
+/** The colour-blind-safe palette without its black, which would read as a context node set to 1; more blocks than
+ * colours reuse them (the codeword table names them anyway). */
+export const BLOCK_COLOURS: readonly string[] = QUALITATIVE.filter((c) => c !== "#000000");
+export const CONTEXT_COLOUR = CONTEXT_COLOURS;
 
 export interface SourceNodeRole {
   block: number | null;
@@ -119,4 +122,27 @@ export function pairedRuns(cert: Certificate, start: string, steps: number): Pai
     f = stepTimes(source, f, cert.time);
   }
   return out;
+}
+
+/** G's rules as rule text, one line per node, from the certificate's truth tables. */
+export function targetRuleText(cert: Certificate): string {
+  return printRuleText(networkToDefinition(networkFromCertificate(cert.target))).trimEnd();
+}
+
+type Observable = Extract<Certificate, { notion: "coarse-graining" }>["witness"]["observables"][number];
+
+/**
+ * One observable of a coarse-graining in words: which of F's nodes it reads and when it is 1, as the shortest
+ * sum-of-products formula of its truth table (the table itself stays in the encoding table for checking).
+ */
+export function observableInWords(o: Observable): string {
+  const table = Uint8Array.from(o.table, (c) => (c === "1" ? 1 : 0));
+  const expr = tableToExpr(table, o.inputs);
+  if (expr.kind === "const") return `${o.target} is always ${expr.value}, whatever F does`;
+  if (expr.kind === "var") return `${o.target} is 1 exactly when ${expr.name} is 1 (it copies ${expr.name})`;
+  if (expr.kind === "not" && expr.arg.kind === "var")
+    return `${o.target} is 1 exactly when ${expr.arg.name} is 0 (the opposite of ${expr.arg.name})`;
+  const read =
+    o.inputs.length === 1 ? o.inputs[0] : `${o.inputs.slice(0, -1).join(", ")} and ${o.inputs[o.inputs.length - 1]}`;
+  return `${o.target} reads ${read} and is 1 exactly when ${printExpr(expr)} (& and, | or, ! not)`;
 }
