@@ -1,10 +1,20 @@
 // Invitations by e-mail: owners and admins send them (project-scoped router), the invitee previews and accepts
 // one by its token (public router). A token works once, before it expires, and only while it is the newest one
 // for that address; accepting creates the account when the address has none.
-import { Router, type Request } from "express";
+import type { Request } from "express";
 import type { Knex } from "knex";
 import type { Logger } from "pino";
-import { AcceptInvitationBody, CreateInvitationBody, InvitationParams, TokenParams } from "@shared/schemas/projects";
+import { z } from "zod";
+import {
+  AcceptedInvitation,
+  AcceptInvitationBody,
+  CreateInvitationBody,
+  Invitation as InvitationSchema,
+  InvitationParams,
+  InvitationPreview,
+  ProjectParams,
+  TokenParams,
+} from "@shared/schemas/projects";
 import type { ProjectRole } from "@shared/types/roles";
 import { recordAudit } from "../db/repositories/audit-log";
 import {
@@ -22,11 +32,10 @@ import {
 import { findMember, roleOf, upsertMembership } from "../db/repositories/memberships";
 import { findProject } from "../db/repositories/projects";
 import { findUserByEmail, insertUser } from "../db/repositories/users";
-import { currentProject, currentUser, projectAccess } from "../http/auth";
 import { HttpError } from "../http/errors";
 import { hashPassword } from "../http/password-hash";
+import { anyone, project, routeGroup, type RouteGroup } from "../http/route-group";
 import { setSessionCookie, signSession } from "../http/session";
-import { validate } from "../http/validate";
 import type { Mailer } from "../mail/mailer";
 
 const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
@@ -46,88 +55,95 @@ function siteOrigin(req: Request, publicUrl: string | undefined): string {
   return publicUrl ? new URL(publicUrl).origin : `${req.protocol}://${req.get("host")}`;
 }
 
-export function projectInvitationsRouter(deps: InvitationDeps): Router {
+export function projectInvitationsRoutes(deps: InvitationDeps): RouteGroup {
   const { db } = deps;
-  const router = Router({ mergeParams: true });
+  const routes = routeGroup({ mountPath: "/projects/:projectId/invitations", tag: "invitations", db });
 
-  router.get("/", projectAccess(db, "project:manage"), async (req, res) => {
-    res.json({ data: await listPendingInvitations(db, currentProject(req).id) });
+  routes.get("/", {
+    summary: "List the project's pending invitations",
+    access: project("project:manage"),
+    params: ProjectParams,
+    response: z.array(InvitationSchema),
+    handler: ({ project }) => listPendingInvitations(db, project.id),
   });
 
-  router.post("/", projectAccess(db, "project:manage"), validate({ body: CreateInvitationBody }), async (req, res) => {
-    const body = req.body as { email: string; role: ProjectRole };
-    const project = currentProject(req);
-    const actor = currentUser(req);
-    const existing = await findUserByEmail(db, body.email);
-    if (existing && (await roleOf(db, project.id, existing.id))) {
-      throw new HttpError(409, "ALREADY_MEMBER", `${body.email} is already a member of this project`);
-    }
-    const { token, tokenHash } = newInvitationToken();
-    const link = `${siteOrigin(req, deps.publicUrl)}/invitations/${token}`;
-    // Sending inside the transaction: if the mail cannot be handed over, no invitation is left behind.
-    const invitation = await db.transaction(async (trx) => {
-      await revokePendingFor(trx, project.id, body.email);
-      const inv = await insertInvitation(trx, {
-        projectId: project.id,
-        email: body.email,
-        role: body.role,
-        tokenHash,
-        invitedBy: actor.id,
-        expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
-      });
-      await recordAudit(trx, {
-        projectId: project.id,
-        actorId: actor.id,
-        action: "invitation.create",
-        target: body.email,
-        details: { role: body.role },
-      });
-      try {
-        await deps.mailer.send({
-          to: body.email,
-          subject: `${actor.displayName} invited you to "${project.name}" on Emulant`,
-          text:
-            `${actor.displayName} invited you to join the project "${project.name}" on Emulant as ${article(body.role)} ${body.role}.\n\n` +
-            `Accept the invitation here (the link works once, until ${new Date(inv.expiresAt).toUTCString()}):\n\n${link}\n\n` +
-            `If you did not expect this, ignore this message.\n`,
-        });
-      } catch (err) {
-        deps.log.error({ err }, "invitation mail could not be sent");
-        throw new HttpError(
-          502,
-          "MAIL_FAILED",
-          "The invitation e-mail could not be sent; nothing was saved. Try again later.",
-        );
+  routes.post("/", {
+    summary: "Invite someone by e-mail; the link in the mail works once, for seven days",
+    access: project("project:manage"),
+    params: ProjectParams,
+    body: CreateInvitationBody,
+    response: InvitationSchema,
+    status: 201,
+    async handler({ body, project, user: actor, req }) {
+      const existing = await findUserByEmail(db, body.email);
+      if (existing && (await roleOf(db, project.id, existing.id))) {
+        throw new HttpError(409, "ALREADY_MEMBER", `${body.email} is already a member of this project`);
       }
-      return inv;
-    });
-    res.status(201).json({ data: publicInvitation(invitation) });
+      const { token, tokenHash } = newInvitationToken();
+      const link = `${siteOrigin(req, deps.publicUrl)}/invitations/${token}`;
+      // Sending inside the transaction: if the mail cannot be handed over, no invitation is left behind.
+      const invitation = await db.transaction(async (trx) => {
+        await revokePendingFor(trx, project.id, body.email);
+        const inv = await insertInvitation(trx, {
+          projectId: project.id,
+          email: body.email,
+          role: body.role,
+          tokenHash,
+          invitedBy: actor.id,
+          expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
+        });
+        await recordAudit(trx, {
+          projectId: project.id,
+          actorId: actor.id,
+          action: "invitation.create",
+          target: body.email,
+          details: { role: body.role },
+        });
+        try {
+          await deps.mailer.send({
+            to: body.email,
+            subject: `${actor.displayName} invited you to "${project.name}" on Emulant`,
+            text:
+              `${actor.displayName} invited you to join the project "${project.name}" on Emulant as ${article(body.role)} ${body.role}.\n\n` +
+              `Accept the invitation here (the link works once, until ${new Date(inv.expiresAt).toUTCString()}):\n\n${link}\n\n` +
+              `If you did not expect this, ignore this message.\n`,
+          });
+        } catch (err) {
+          deps.log.error({ err }, "invitation mail could not be sent");
+          throw new HttpError(
+            502,
+            "MAIL_FAILED",
+            "The invitation e-mail could not be sent; nothing was saved. Try again later.",
+          );
+        }
+        return inv;
+      });
+      return publicInvitation(invitation);
+    },
   });
 
-  router.delete(
-    "/:invitationId",
-    projectAccess(db, "project:manage"),
-    validate({ params: InvitationParams }),
-    async (req, res) => {
-      const { invitationId } = req.params as { invitationId: string };
-      const project = currentProject(req);
-      const invitation = await findInvitation(db, project.id, invitationId);
+  routes.delete("/:invitationId", {
+    summary: "Withdraw a pending invitation",
+    access: project("project:manage"),
+    params: InvitationParams,
+    status: 204,
+    async handler({ params, project, user }) {
+      const invitation = await findInvitation(db, project.id, params.invitationId);
       if (!invitation || invitation.acceptedAt || invitation.revokedAt)
         throw new HttpError(404, "NOT_FOUND", "No pending invitation with that id");
       await db.transaction(async (trx) => {
         await revokeInvitation(trx, invitation.id);
         await recordAudit(trx, {
           projectId: project.id,
-          actorId: currentUser(req).id,
+          actorId: user.id,
           action: "invitation.revoke",
           target: invitation.email,
         });
       });
-      res.status(204).end();
     },
-  );
+  });
 
-  return router;
+  return routes;
 }
 
 function publicInvitation(i: Invitation) {
@@ -164,86 +180,98 @@ function usable(invitation: Invitation | null): Invitation {
   return invitation;
 }
 
-export function invitationsRouter(deps: InvitationDeps): Router {
+export function invitationsRoutes(deps: InvitationDeps): RouteGroup {
   const { db } = deps;
-  const router = Router();
+  const routes = routeGroup({ mountPath: "/invitations", tag: "invitations", db });
 
-  router.get("/:token", validate({ params: TokenParams }), async (req, res) => {
-    const { token } = req.params as { token: string };
-    const invitation = usable(await findInvitationByTokenHash(db, hashInvitationToken(token), { lock: false }));
-    const project = await findProject(db, invitation.projectId);
-    if (!project)
-      throw new HttpError(
-        404,
-        "INVITATION_INVALID",
-        "This invitation link is not valid. Ask the project owner for a new one.",
+  routes.get("/:token", {
+    summary: "What an invitation link offers, before accepting it",
+    access: anyone,
+    params: TokenParams,
+    response: InvitationPreview,
+    async handler({ params }) {
+      const invitation = usable(
+        await findInvitationByTokenHash(db, hashInvitationToken(params.token), { lock: false }),
       );
-    res.json({
-      data: {
+      const project = await findProject(db, invitation.projectId);
+      if (!project)
+        throw new HttpError(
+          404,
+          "INVITATION_INVALID",
+          "This invitation link is not valid. Ask the project owner for a new one.",
+        );
+      return {
         projectName: project.name,
         email: invitation.email,
         role: invitation.role,
         invitedByName: invitation.invitedByName,
         expiresAt: invitation.expiresAt,
         accountExists: (await findUserByEmail(db, invitation.email)) !== null,
-      },
-    });
+      };
+    },
   });
 
-  router.post("/:token/accept", validate({ params: TokenParams, body: AcceptInvitationBody }), async (req, res) => {
-    const { token } = req.params as { token: string };
-    const body = req.body as AcceptInvitationBody;
-    const result = await db.transaction(async (trx) => {
-      const invitation = usable(await findInvitationByTokenHash(trx, hashInvitationToken(token), { lock: true }));
-      let user = await findUserByEmail(trx, invitation.email);
-      let isNewAccount = false;
-      if (user) {
-        if (!req.user)
-          throw new HttpError(401, "SIGN_IN_REQUIRED", `Sign in as ${invitation.email} to accept this invitation`);
-        if (req.user.id !== user.id)
-          throw new HttpError(
-            403,
-            "WRONG_ACCOUNT",
-            `This invitation is for ${invitation.email}; sign out and sign in as that address`,
-          );
-      } else {
-        if (req.user)
-          throw new HttpError(
-            403,
-            "WRONG_ACCOUNT",
-            `This invitation is for ${invitation.email}; sign out first to create that account`,
-          );
-        if (!body.displayName || !body.password) {
-          throw new HttpError(400, "INVALID_INPUT", "Choose your name and a password to create your account", [
-            ...(body.displayName ? [] : [{ field: "body.displayName", message: "Enter a name" }]),
-            ...(body.password ? [] : [{ field: "body.password", message: "Choose a password" }]),
-          ]);
+  routes.post("/:token/accept", {
+    summary: "Accept an invitation: join the project, creating the account when the address has none",
+    access: anyone,
+    params: TokenParams,
+    body: AcceptInvitationBody,
+    response: AcceptedInvitation,
+    async handler({ params, body, user: caller, req, res }) {
+      const result = await db.transaction(async (trx) => {
+        const invitation = usable(
+          await findInvitationByTokenHash(trx, hashInvitationToken(params.token), { lock: true }),
+        );
+        let user = await findUserByEmail(trx, invitation.email);
+        let isNewAccount = false;
+        if (user) {
+          if (!caller)
+            throw new HttpError(401, "SIGN_IN_REQUIRED", `Sign in as ${invitation.email} to accept this invitation`);
+          if (caller.id !== user.id)
+            throw new HttpError(
+              403,
+              "WRONG_ACCOUNT",
+              `This invitation is for ${invitation.email}; sign out and sign in as that address`,
+            );
+        } else {
+          if (caller)
+            throw new HttpError(
+              403,
+              "WRONG_ACCOUNT",
+              `This invitation is for ${invitation.email}; sign out first to create that account`,
+            );
+          if (!body.displayName || !body.password) {
+            throw new HttpError(400, "INVALID_INPUT", "Choose your name and a password to create your account", [
+              ...(body.displayName ? [] : [{ field: "body.displayName", message: "Enter a name" }]),
+              ...(body.password ? [] : [{ field: "body.password", message: "Choose a password" }]),
+            ]);
+          }
+          user = await insertUser(trx, {
+            email: invitation.email,
+            displayName: body.displayName,
+            passwordHash: await hashPassword(body.password),
+          });
+          isNewAccount = true;
         }
-        user = await insertUser(trx, {
-          email: invitation.email,
-          displayName: body.displayName,
-          passwordHash: await hashPassword(body.password),
+        // Someone already in the project keeps their role: an invitation must not demote an owner.
+        const member = await findMember(trx, invitation.projectId, user.id);
+        const role = member?.role ?? invitation.role;
+        if (!member) await upsertMembership(trx, invitation.projectId, user.id, role);
+        await markAccepted(trx, invitation.id, user.id);
+        await recordAudit(trx, {
+          projectId: invitation.projectId,
+          actorId: user.id,
+          action: "invitation.accept",
+          target: user.email,
+          details: { role },
         });
-        isNewAccount = true;
-      }
-      // Someone already in the project keeps their role: an invitation must not demote an owner.
-      const member = await findMember(trx, invitation.projectId, user.id);
-      const role = member?.role ?? invitation.role;
-      if (!member) await upsertMembership(trx, invitation.projectId, user.id, role);
-      await markAccepted(trx, invitation.id, user.id);
-      await recordAudit(trx, {
-        projectId: invitation.projectId,
-        actorId: user.id,
-        action: "invitation.accept",
-        target: user.email,
-        details: { role },
+        return { user, isNewAccount, projectId: invitation.projectId, role };
       });
-      return { user, isNewAccount, projectId: invitation.projectId, role };
-    });
-    if (result.isNewAccount)
-      setSessionCookie(req, res, await signSession(deps.sessionSecret, result.user.id, result.user.sessionVersion));
-    res.json({ data: { projectId: result.projectId, role: result.role } });
+      if (result.isNewAccount)
+        setSessionCookie(req, res, await signSession(deps.sessionSecret, result.user.id, result.user.sessionVersion));
+      return { projectId: result.projectId, role: result.role };
+    },
   });
 
-  return router;
+  return routes;
 }

@@ -1,7 +1,7 @@
 // `coarse-grain <file> --observe A,B [--time t] --json`: do the observed nodes predict themselves t steps ahead? When they
 // do, the certificate of the coarse-grained network; either way the size of the coarsest grouping of states that
 // refines the observables and is compatible with the dynamics.
-import { mergeShards, searchShard } from "../../reductions/search-plan";
+import { mergeShards, searchShard } from "../../services/reductions/search-plan";
 import { integerOption, parseCommandArgs, printJson, readModelFile, runCommand, UsageError } from "../cli-io";
 
 export const summary = "coarse-grain <file> --observe A,B [--time t] --json: coarse-graining onto observed nodes";

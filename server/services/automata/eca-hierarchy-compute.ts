@@ -2,7 +2,7 @@
 // witness, plus the closure's composed pairs whose composed witness the engine's verifier confirmed.
 import { ecaHierarchy, type EcaHierarchy } from "@shared/engine/block-emulation";
 import { HierarchyRunResult, type HierarchyPairWithWitness, type HierarchyParameters } from "@shared/schemas/automata";
-import type { FinishedHierarchyRun, HierarchyRecord } from "../db/repositories/eca-hierarchies";
+import type { FinishedHierarchyRun, HierarchyRecord } from "../../db/repositories/eca-hierarchies";
 
 export function hierarchyPairsFromEngine(h: EcaHierarchy): {
   pairs: HierarchyPairWithWitness[];

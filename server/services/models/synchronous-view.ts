@@ -5,7 +5,7 @@ import type { BooleanNetwork } from "@shared/engine/network";
 import { phenotypeLabel } from "@shared/engine/phenotype";
 import { analyseSynchronous, attractorsAsText } from "@shared/engine/state-graph";
 import type { AttractorRow, SynchronousResult } from "@shared/schemas/models";
-import { HttpError } from "../http/errors";
+import { HttpError } from "../../http/errors";
 
 function markerIndices(nodes: readonly string[], markers: readonly string[]): number[] {
   return markers.map((m) => {

@@ -3,7 +3,7 @@
 import { EngineError } from "@shared/engine/errors";
 import type { BooleanNetwork } from "@shared/engine/network";
 import { perturbNetwork } from "@shared/engine/perturbation";
-import { HttpError } from "../http/errors";
+import { HttpError } from "../../http/errors";
 
 export interface NamedPerturbation {
   knockOut: readonly string[];

@@ -3,8 +3,8 @@
 import { EngineError, ParseError } from "@shared/engine/errors";
 import { compileDefinition, parseRuleText, variablesOf, type ModelDefinition } from "@shared/engine/rules";
 import type { BooleanNetwork } from "@shared/engine/network";
-import type { ParseIssue } from "@shared/schemas/models";
-import { HttpError } from "../http/errors";
+import type { ParseIssue, ValidateResult } from "@shared/schemas/models";
+import { HttpError } from "../../http/errors";
 
 export interface ReadModel {
   definition: ModelDefinition;
@@ -73,6 +73,17 @@ export function ruleTextIssues(text: string): { issues: ParseIssue[]; nodes: str
     if (!issue) throw e;
     return { issues: [issue], nodes, read: null };
   }
+}
+
+/** The editor's live check: the nodes read so far and every problem, without storing anything. */
+export function validateRuleText(text: string): ValidateResult {
+  const { issues, nodes, read } = ruleTextIssues(text);
+  return {
+    ok: issues.length === 0,
+    nodeCount: read ? read.network.names.length : nodes.length,
+    nodes: read ? [...read.network.names] : nodes,
+    errors: issues,
+  };
 }
 
 export function readRules(text: string): ReadModel {

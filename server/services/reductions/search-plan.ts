@@ -7,7 +7,6 @@ import {
   embeddingCertificate,
   networkFromCertificate,
   networkToCertificate,
-  type CertificateNetwork,
 } from "@shared/engine/certificates";
 import { coarseGrain, nodeObservable } from "@shared/engine/coarse-graining";
 import {
@@ -18,7 +17,6 @@ import {
   mergeEmulationShards,
   searchBlockEmulation,
   shardRange,
-  type BlockEmulationWitness,
   type DiscoverShardResult,
   type EmulationSearchResult,
   type SearchControl,
@@ -33,14 +31,11 @@ import type {
   SearchBody,
   SearchFinding,
 } from "@shared/schemas/reductions";
+import type { ReductionSearchPartial, SearchShard } from "@shared/schemas/run-tasks";
 
 /** Discover keeps the best-ranked targets as findings; the rest are counted, not stored. */
 export const MAX_DISCOVER_FINDINGS = 40;
 const MAX_SHARDS = 8;
-
-export interface SearchShard {
-  range: { start: number; end: number } | null;
-}
 
 export function compileRuleText(ruleText: string): BooleanNetwork {
   return compileDefinition(readRuleText(ruleText));
@@ -71,26 +66,12 @@ export function planSearch(p: ReductionSearchParams): SearchShard[] {
   return Array.from({ length: count }, (_, i) => ({ range: shardRange(total, i, count) }));
 }
 
-interface DiscoverPartialTarget {
-  key: string;
-  target: CertificateNetwork;
-  witness: BlockEmulationWitness;
-  times: number[];
-  encodings: number;
-  flags: string[];
-  trivial: boolean;
-  interactions: number;
-  firstUnit: number;
-}
-
-export type ShardPartial =
-  | { mode: "given-target"; emulation: EmulationSearchResult }
-  | { mode: "embedding"; time: number; map: number[] | null }
-  | { mode: "discover"; shard: Omit<DiscoverShardResult, "targets"> & { targets: DiscoverPartialTarget[] } }
-  | { mode: "coarse-grain"; certificate: SearchFinding["certificate"] | null; groups: number; closes: boolean };
-
 /** One shard's work. `resumeFrom` continues an interrupted shard: every unit before it is known to hold nothing. */
-export function runSearchShard(p: ReductionSearchParams, shard: SearchShard, control: SearchControl): ShardPartial {
+export function runSearchShard(
+  p: ReductionSearchParams,
+  shard: SearchShard,
+  control: SearchControl,
+): ReductionSearchPartial {
   const target = p.targetRuleText ? compileRuleText(p.targetRuleText) : null;
   return searchShard(compileRuleText(p.sourceRuleText), target, p.search, shard, control);
 }
@@ -102,7 +83,7 @@ export function searchShard(
   s: SearchBody,
   shard: SearchShard,
   control: SearchControl,
-): ShardPartial {
+): ReductionSearchPartial {
   if (s.mode === "coarse-grain") {
     const observables = s.observe.map((name) => {
       const i = source.names.indexOf(name);
@@ -146,7 +127,7 @@ export function searchShard(
 }
 
 /** Merge shard results (in shard order) into the run's result: findings with self-contained certificates. */
-export function mergeSearch(p: ReductionSearchParams, partials: ShardPartial[]): ReductionSearchResult {
+export function mergeSearch(p: ReductionSearchParams, partials: ReductionSearchPartial[]): ReductionSearchResult {
   const target = p.targetRuleText ? compileRuleText(p.targetRuleText) : null;
   return mergeShards(compileRuleText(p.sourceRuleText), target, p.search, partials);
 }
@@ -156,7 +137,7 @@ export function mergeShards(
   source: BooleanNetwork,
   target: BooleanNetwork | null,
   s: SearchBody,
-  partials: ShardPartial[],
+  partials: ReductionSearchPartial[],
 ): ReductionSearchResult {
   const base = { bounds: { ...s }, reductionIds: [] as string[] };
   const first = partials[0];
@@ -193,9 +174,7 @@ export function mergeShards(
     };
   }
   if (first.mode === "given-target") {
-    const merged = mergeEmulationShards(
-      partials.map((x) => (x as Extract<ShardPartial, { mode: "given-target" }>).emulation),
-    );
+    const merged = mergeEmulationShards(partials.flatMap((x) => (x.mode === "given-target" ? [x.emulation] : [])));
     const findings =
       merged.found && merged.witness && target
         ? [
@@ -216,17 +195,11 @@ export function mergeShards(
     };
   }
   const merged = mergeDiscoverShards(
-    partials.map((x) => {
-      const shard = (x as Extract<ShardPartial, { mode: "discover" }>).shard;
-      return {
-        ...shard,
-        targets: shard.targets.map((t) => ({
-          ...t,
-          target: networkFromCertificate(t.target),
-          flags: t.flags as never,
-        })),
-      };
-    }),
+    partials.flatMap((x) =>
+      x.mode === "discover"
+        ? [{ ...x.shard, targets: x.shard.targets.map((t) => ({ ...t, target: networkFromCertificate(t.target) })) }]
+        : [],
+    ),
   );
   const findings = merged.targets.slice(0, MAX_DISCOVER_FINDINGS).map((t, rank) => ({
     certificate: blockEmulationCertificate(source, t.target, t.witness) as SearchFinding["certificate"],

@@ -3,9 +3,9 @@
 import type { Knex } from "knex";
 import type { BooleanNetwork } from "@shared/engine/network";
 import { compileDefinition } from "@shared/engine/rules";
-import { findRevision } from "../db/repositories/model-revisions";
-import { findModel } from "../db/repositories/models";
-import { HttpError } from "../http/errors";
+import { findRevision } from "../../db/repositories/model-revisions";
+import { findModel } from "../../db/repositories/models";
+import { HttpError } from "../../http/errors";
 
 export interface RevisionNetwork {
   modelId: string;

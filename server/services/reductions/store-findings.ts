@@ -2,10 +2,9 @@
 // written in the transaction that marks the run succeeded, so a run never succeeds with its reductions missing.
 import type { Knex } from "knex";
 import { ReductionSearchParams, ReductionSearchResult } from "@shared/schemas/reductions";
-import { recordAudit } from "../db/repositories/audit-log";
-import { insertReduction, setVerification } from "../db/repositories/reductions";
+import { recordAudit } from "../../db/repositories/audit-log";
 import { checkCertificate } from "./check-certificate";
-import { statementKey } from "./statement-key";
+import { proposeReduction } from "./propose-reduction";
 
 export interface FinishedRun {
   id: string;
@@ -23,25 +22,22 @@ export async function storeSearchFindings(
   const result = ReductionSearchResult.parse(rawResult);
   const ids: string[] = [];
   for (const f of result.findings) {
-    // Only a given-target search proves something about a stored target model.
-    const targetRevisionId = result.mode === "given-target" ? params.targetRevisionId : null;
-    const stored = await insertReduction(trx, {
-      projectId: run.projectId,
-      sourceRevisionId: params.sourceRevisionId,
-      targetRevisionId,
-      notion: f.certificate.notion,
-      timeScale: f.certificate.time,
-      certificate: f.certificate,
-      targetKey: statementKey(f.certificate, targetRevisionId),
-      flags: f.flags,
-      foundBy: run.startedBy,
-      foundInRunId: run.id,
-      rank: f.rank,
-    });
-    // The independent verifier re-checks every finding before anyone sees it, so a search bug cannot vouch for itself.
-    if (stored.isNew) {
-      await setVerification(trx, stored.id, checkCertificate(f.certificate, null, " when found"));
-    }
+    const stored = await proposeReduction(
+      trx,
+      {
+        projectId: run.projectId,
+        sourceRevisionId: params.sourceRevisionId,
+        // Only a given-target search proves something about a stored target model.
+        targetRevisionId: result.mode === "given-target" ? params.targetRevisionId : null,
+        certificate: f.certificate,
+        flags: f.flags,
+        foundBy: run.startedBy,
+        foundInRunId: run.id,
+        rank: f.rank,
+      },
+      // The independent verifier re-checks every finding before anyone sees it, so a search bug cannot vouch for itself.
+      () => checkCertificate(f.certificate, null, " when found"),
+    );
     ids.push(stored.id);
   }
   if (ids.length) {

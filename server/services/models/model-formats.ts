@@ -5,7 +5,7 @@ import { modelFormatOf } from "@shared/formats/read-model";
 import { readSbmlQual, writeSbmlQual } from "@shared/formats/sbml-qual";
 import { parseTruthTableCsv, writeTruthTableCsv } from "@shared/formats/truth-table-csv";
 import type { ExportFormat, ModelSource } from "@shared/schemas/models";
-import { HttpError } from "../http/errors";
+import { HttpError } from "../../http/errors";
 import { compileOrFail, issueOf, parseFailure, readRules, type ReadModel } from "./model-reading";
 
 export interface UploadedModel extends ReadModel {

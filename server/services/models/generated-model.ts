@@ -5,7 +5,7 @@ import { EngineError } from "@shared/engine/errors";
 import { cellularAutomaton, nkNetwork, thresholdNetwork } from "@shared/engine/generators";
 import { networkToDefinition } from "@shared/engine/rules";
 import type { GeneratorParams } from "@shared/schemas/models";
-import { HttpError } from "../http/errors";
+import { HttpError } from "../../http/errors";
 import { compileOrFail, type ReadModel } from "./model-reading";
 
 export function generatedModel(spec: GeneratorParams): ReadModel {

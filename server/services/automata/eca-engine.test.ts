@@ -24,17 +24,15 @@ describe("witnessChecks", () => {
   it("witnessChecks reports the verifier's verdict exactly when all eight displayed rows agree", () => {
     const word = (k: number) =>
       fc.array(fc.constantFrom("0", "1"), { minLength: k, maxLength: k }).map((a) => a.join(""));
-    const arb = fc
-      .integer({ min: 1, max: 5 })
-      .chain((k) =>
-        fc.record({
-          source: fc.integer({ min: 0, max: 255 }),
-          target: fc.integer({ min: 0, max: 255 }),
-          u0: word(k),
-          u1: word(k),
-          time: fc.integer({ min: 1, max: k }),
-        }),
-      );
+    const arb = fc.integer({ min: 1, max: 5 }).chain((k) =>
+      fc.record({
+        source: fc.integer({ min: 0, max: 255 }),
+        target: fc.integer({ min: 0, max: 255 }),
+        u0: word(k),
+        u1: word(k),
+        time: fc.integer({ min: 1, max: k }),
+      }),
+    );
     fc.assert(
       fc.property(arb, ({ source, target, u0, u1, time }) => {
         fc.pre(u0 !== u1);

@@ -1,8 +1,11 @@
 // The project's model hierarchy: approved reductions between stored models, closed under composition. A composed
 // edge F -> H (from F -> G and G -> H) is shown only when its composed certificate passes the independent verifier,
 // so the drawing never claims more than can be re-checked.
+import type { Knex } from "knex";
 import { composeCertificates, verifyCertificate, type ReductionCertificate } from "@shared/engine/certificates";
 import type { Certificate, HierarchyGraph, ReductionNotion } from "@shared/schemas/reductions";
+import { listModels } from "../../db/repositories/models";
+import { approvedModelEdges } from "../../db/repositories/reductions";
 
 export interface ApprovedEdge {
   id: string;
@@ -83,4 +86,15 @@ export function composeHierarchy(models: HierarchyGraph["nodes"], approved: Appr
     frontier = next;
   }
   return { nodes: models, edges: [...edges.values()] };
+}
+
+/** The hierarchy of a project: its models (at their latest revision) joined by its approved reductions. */
+export async function projectModelHierarchy(db: Knex, projectId: string): Promise<HierarchyGraph> {
+  const models = (await listModels(db, projectId)).map((m) => ({
+    modelId: m.id,
+    name: m.name,
+    nodeCount: m.nodeCount,
+    revision: m.latestRevision,
+  }));
+  return composeHierarchy(models, await approvedModelEdges(db, projectId));
 }
