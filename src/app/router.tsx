@@ -3,7 +3,7 @@ import { createBrowserRouter, RouterProvider } from "react-router-dom";
 import { AppShell } from "@/components/layout/app-shell";
 import { RequireSignIn } from "@/features/accounts/components/require-sign-in";
 import { UserMenu } from "@/features/accounts/components/user-menu";
-import { NotificationBell } from "@/features/runs/components/notification-bell";
+import { NotificationBell } from "@/features/runs";
 import { AcceptInvitationRoute } from "./routes/accept-invitation";
 import { AutomataRoute } from "./routes/automata";
 import { AutomataRuleRoute } from "./routes/automata-rule";
