@@ -17,8 +17,6 @@ import {
   mergeEmulationShards,
   searchBlockEmulation,
   shardRange,
-  type DiscoverShardResult,
-  type EmulationSearchResult,
   type SearchControl,
 } from "@shared/engine/emulation";
 import { searchDynamicalEmbedding } from "@shared/engine/embedding";

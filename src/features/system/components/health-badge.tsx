@@ -1,4 +1,5 @@
-import { useHealth } from "@/features/system/api/get-health";
+// The footer's status: whether the server and its database answer (polled through the health endpoint).
+import { useHealth } from "../api/get-health";
 
 export function HealthBadge() {
   const { data, isError } = useHealth();
