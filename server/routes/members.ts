@@ -2,14 +2,9 @@
 import type { Knex } from "knex";
 import { z } from "zod";
 import { ChangeRoleBody, Member, MemberParams, ProjectParams } from "@shared/schemas/projects";
-import { recordAudit } from "../db/repositories/audit-log";
-import { deleteMembership, findMember, listMembers, lockOwners, setRole } from "../db/repositories/memberships";
-import { HttpError } from "../http/errors";
+import { listMembers } from "../db/repositories/memberships";
 import { project, routeGroup, type RouteGroup } from "../http/route-group";
-
-const lastOwner = () =>
-  new HttpError(409, "LAST_OWNER", "A project needs at least one owner: make someone else owner first");
-const notAMember = () => new HttpError(404, "NOT_FOUND", "That person is not a member of this project");
+import { changeRole, removeMember } from "../services/projects/memberships";
 
 export function membersRoutes(deps: { db: Knex }): RouteGroup {
   const { db } = deps;
@@ -30,22 +25,7 @@ export function membersRoutes(deps: { db: Knex }): RouteGroup {
     body: ChangeRoleBody,
     response: Member,
     handler: ({ params, body, project, user }) =>
-      db.transaction(async (trx) => {
-        const owners = await lockOwners(trx, project.id);
-        const before = await findMember(trx, project.id, params.userId);
-        if (!before) throw notAMember();
-        if (before.role === body.role) return before;
-        if (before.role === "owner" && owners.length === 1) throw lastOwner();
-        await setRole(trx, project.id, params.userId, body.role);
-        await recordAudit(trx, {
-          projectId: project.id,
-          actorId: user.id,
-          action: "member.role",
-          target: before.email,
-          details: { from: before.role, to: body.role },
-        });
-        return { ...before, role: body.role };
-      }),
+      changeRole(db, { projectId: project.id, actorId: user.id }, params.userId, body.role),
   });
 
   routes.delete("/:userId", {
@@ -54,20 +34,7 @@ export function membersRoutes(deps: { db: Knex }): RouteGroup {
     params: MemberParams,
     status: 204,
     handler: ({ params, project, user }) =>
-      db.transaction(async (trx) => {
-        const owners = await lockOwners(trx, project.id);
-        const member = await findMember(trx, project.id, params.userId);
-        if (!member) throw notAMember();
-        if (member.role === "owner" && owners.length === 1) throw lastOwner();
-        await deleteMembership(trx, project.id, params.userId);
-        await recordAudit(trx, {
-          projectId: project.id,
-          actorId: user.id,
-          action: "member.remove",
-          target: member.email,
-          details: { role: member.role },
-        });
-      }),
+      removeMember(db, { projectId: project.id, actorId: user.id }, params.userId),
   });
 
   return routes;

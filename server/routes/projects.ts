@@ -12,12 +12,11 @@ import {
   type Project,
 } from "@shared/schemas/projects";
 import { capabilitiesOf } from "@shared/types/roles";
-import { recordAudit } from "../db/repositories/audit-log";
-import { upsertMembership } from "../db/repositories/memberships";
-import { deleteProject, findProject, insertProject, listProjectsFor, updateProject } from "../db/repositories/projects";
+import { deleteProject, findProject, listProjectsFor } from "../db/repositories/projects";
 import type { AuthUser, ProjectContext } from "../http/auth";
 import { HttpError } from "../http/errors";
 import { project, routeGroup, signedIn, type RouteGroup } from "../http/route-group";
+import { changeProject, createProject } from "../services/projects/project-settings";
 
 /** A project as the caller sees it: with their role and what it lets them do, so the client can hide the rest. */
 function asSeenBy(p: Project, access: ProjectContext, user: AuthUser): ProjectDetail {
@@ -41,15 +40,7 @@ export function projectsRoutes(deps: { db: Knex; log: Logger }): RouteGroup {
     body: CreateProjectBody,
     response: ProjectListItem,
     status: 201,
-    async handler({ body, user }) {
-      const created = await db.transaction(async (trx) => {
-        const p = await insertProject(trx, { name: body.name, description: body.description, createdBy: user.id });
-        await upsertMembership(trx, p.id, user.id, "owner");
-        await recordAudit(trx, { projectId: p.id, actorId: user.id, action: "project.create", target: p.name });
-        return p;
-      });
-      return { ...created, role: "owner" as const, memberCount: 1 };
-    },
+    handler: ({ body, user }) => createProject(db, user.id, body),
   });
 
   routes.get("/:projectId", {
@@ -70,32 +61,8 @@ export function projectsRoutes(deps: { db: Knex; log: Logger }): RouteGroup {
     params: ProjectParams,
     body: UpdateProjectBody,
     response: ProjectDetail,
-    async handler({ body, project, user }) {
-      const updated = await db.transaction(async (trx) => {
-        const p = await updateProject(trx, project.id, body);
-        if (body.name !== undefined && body.name !== project.name) {
-          await recordAudit(trx, {
-            projectId: project.id,
-            actorId: user.id,
-            action: "project.rename",
-            target: body.name,
-            details: { from: project.name },
-          });
-        }
-        if (body.description !== undefined)
-          await recordAudit(trx, { projectId: project.id, actorId: user.id, action: "project.describe" });
-        if (body.archived !== undefined && body.archived !== project.archived) {
-          await recordAudit(trx, {
-            projectId: project.id,
-            actorId: user.id,
-            action: body.archived ? "project.archive" : "project.restore",
-            target: p.name,
-          });
-        }
-        return p;
-      });
-      return asSeenBy(updated, project, user);
-    },
+    handler: async ({ body, project, user }) =>
+      asSeenBy(await changeProject(db, user.id, project, body), project, user),
   });
 
   routes.delete("/:projectId", {
