@@ -15,8 +15,8 @@ import {
 import { HttpError } from "../../http/errors";
 import { checkCertificate } from "./check-certificate";
 
-/** Who reviews: the audit log and the verification record name them. */
-export interface Reviewer {
+/** Who acts on a project's reductions: the audit log and the verification records name them. */
+export interface ReductionActor {
   projectId: string;
   user: { id: string; displayName: string };
 }
@@ -30,7 +30,7 @@ export async function reductionOf(db: Knex, projectId: string, reductionId: stri
 /** Approval puts the reduction into the model hierarchy, so its certificate must still verify at that moment. */
 export async function decideReduction(
   db: Knex,
-  by: Reviewer,
+  by: ReductionActor,
   reductionId: string,
   decision: z.output<typeof DecisionBody>,
 ): Promise<ReductionDetail> {
@@ -64,7 +64,7 @@ export async function decideReduction(
   return reductionOf(db, by.projectId, r.id);
 }
 
-export async function reverifyReduction(db: Knex, by: Reviewer, reductionId: string): Promise<ReductionDetail> {
+export async function reverifyReduction(db: Knex, by: ReductionActor, reductionId: string): Promise<ReductionDetail> {
   const r = await reductionOf(db, by.projectId, reductionId);
   const verification = checkCertificate(r.certificate, by.user);
   await db.transaction(async (trx) => {
@@ -89,7 +89,7 @@ export async function reverifyReduction(db: Knex, by: Reviewer, reductionId: str
 
 export async function commentOnReduction(
   db: Knex,
-  by: Reviewer,
+  by: ReductionActor,
   reductionId: string,
   comment: z.output<typeof CommentBody>,
 ): Promise<ReductionDetail> {

@@ -9,11 +9,11 @@ import { recordAudit } from "../../db/repositories/audit-log";
 import { setTargetRevision } from "../../db/repositories/reductions";
 import { HttpError } from "../../http/errors";
 import { insertModelWithFirstRevision } from "../models/new-model";
-import { reductionOf, type Reviewer } from "./review";
+import { reductionOf, type ReductionActor } from "./review";
 
 export async function saveTargetAsModel(
   db: Knex,
-  by: Reviewer,
+  by: ReductionActor,
   reductionId: string,
   name: string,
 ): Promise<ReductionDetail> {

@@ -1,7 +1,6 @@
 // A search is a run of kind "reduction-search" on the source's latest revision. The networks are fixed at
 // submission (their rule text goes into the run's parameters), so a later edit of either model cannot change what
 // the run proves. What zod cannot check (sizes the engine accepts, node names of the source) is checked here.
-import type { Knex } from "knex";
 import type { z } from "zod";
 import type { SearchBody } from "@shared/schemas/reductions";
 import type { Run } from "@shared/schemas/runs";
@@ -44,7 +43,7 @@ function checkSearch(search: Search, source: RevisionNetwork, target: RevisionNe
 }
 
 export async function startSearch(
-  deps: LifecycleDeps & { db: Knex },
+  deps: LifecycleDeps,
   by: { projectId: string; userId: string },
   search: Search,
 ): Promise<{ run: Run; reused: boolean }> {

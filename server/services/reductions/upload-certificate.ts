@@ -10,7 +10,7 @@ import { HttpError } from "../../http/errors";
 import { checkCertificate } from "./check-certificate";
 import { proposeReduction } from "./propose-reduction";
 import { latestRevisionNetwork, type RevisionNetwork } from "./revision-network";
-import { reductionOf, type Reviewer } from "./review";
+import { reductionOf, type ReductionActor } from "./review";
 import { MAX_TARGET_NODES } from "./search-limits";
 
 export interface CertificateUpload {
@@ -24,7 +24,7 @@ const isNetworkOf = (stored: RevisionNetwork, sent: Certificate["source"]) =>
 
 export async function uploadCertificate(
   db: Knex,
-  by: Reviewer,
+  by: ReductionActor,
   upload: CertificateUpload,
 ): Promise<{ reduction: ReductionDetail; isNew: boolean }> {
   const { certificate } = upload;
