@@ -16,6 +16,8 @@ log "building the client for browser tests"
 npx vite build --logLevel warn
 log "typechecking"
 npx tsc --noEmit -p tsconfig.json
+log "linting (ESLint, then Prettier's check)"
+npm run -s lint
 status=0
 npx vitest run --reporter=default --reporter=json --outputFile=test-report.json "$@" || status=$?
 node -e '

@@ -1,33 +1,24 @@
 import type { Knex } from "knex";
-import { cellularAutomaton } from "@shared/engine/generators";
-import {
-  compileDefinition,
-  networkToDefinition,
-  printRuleText,
-  readRuleText,
-  type ModelDefinition,
-} from "@shared/engine/rules";
-import type { ModelSource } from "@shared/schemas/models";
-import { networkSummary } from "../server/models/network-summary";
+import type { GeneratorParams } from "@shared/schemas/models";
+import { findModel } from "../server/db/repositories/models";
+import { createModelFromRules, generateModel } from "../server/services/models/new-model";
+import { reviseModel } from "../server/services/models/new-revision";
 
 // Demo models of the invented Glimmerfin alga (organism, genes and story are ours; every model says it is demo
-// data). Fixed ids so the seed can run twice; revisions are inserted only when missing (they are immutable).
+// data), created through the same services as the API, so they are read, checked and audited like any other.
+// Fixed ids so the seed can run twice; missing revisions are added as edits (revisions are immutable).
 const DEMO_PROJECT_ID = "00000000-0000-4000-8000-000000000001";
 const DEMO_NOTE = "Demo data: the Glimmerfin alga and its genes are invented.";
 
-interface DemoRevision {
-  ruleText?: string;
-  definition?: ModelDefinition;
-  message?: string;
-  source: ModelSource;
-  generator?: Record<string, unknown>;
-}
+/** Revision 1 from rule text or a generator; later revisions are edits of the rule text. */
+type FirstRevision = { ruleText: string } | { generator: GeneratorParams };
 interface DemoModel {
   id: string;
   name: string;
   description: string;
   author: string;
-  revisions: DemoRevision[];
+  first: FirstRevision;
+  edits?: { ruleText: string; message: string }[];
 }
 
 const BLOOM_V1 = `# Glimmerfin bloom switch: light and nitrate decide between blooming and the dormant cyst.
@@ -106,7 +97,7 @@ Pig1' = UV | Pig1 & !Grw1
 Dorm1' = Cyst1 & !Apo1
 `;
 
-const CILIA_RING = { kind: "eca", rule: 110, radius: 1, cells: 12 } as const;
+const CILIA_RING: GeneratorParams = { kind: "eca", rule: 110, radius: 1, cells: 12 };
 
 export const DEMO_MODELS: DemoModel[] = [
   {
@@ -114,60 +105,50 @@ export const DEMO_MODELS: DemoModel[] = [
     name: "Glimmerfin bloom switch",
     description: `${DEMO_NOTE} Light and nitrate decide between blooming (GlfA/GlfB, luminescence) and the dormant cyst (DrmK/DrmS).`,
     author: "modeler@demo.emulant.test",
-    revisions: [
-      { ruleText: BLOOM_V1, source: "rules" },
-      { ruleText: BLOOM_V2, source: "edit", message: "Add the light pigment Pig" },
-    ],
+    first: { ruleText: BLOOM_V1 },
+    edits: [{ ruleText: BLOOM_V2, message: "Add the light pigment Pig" }],
   },
   {
     id: "00000000-0000-4000-8000-000000000302",
     name: "Glimmerfin tide clock",
     description: `${DEMO_NOTE} Contains a three-gene repressor ring encoded in two-node blocks (Tk1a/Tk1b, Tk2a/Tk2b, Tk3a/Tk3b) plus lunar context and reporters: a known smaller circuit for reductions to find.`,
     author: "modeler@demo.emulant.test",
-    revisions: [{ ruleText: TIDE_CLOCK, source: "rules" }],
+    first: { ruleText: TIDE_CLOCK },
   },
   {
     id: "00000000-0000-4000-8000-000000000303",
     name: "Glimmerfin division cycle (threshold)",
     description: `${DEMO_NOTE} A weighted-sum model of the division cycle, in the style of threshold cell-cycle models.`,
     author: "owner@demo.emulant.test",
-    revisions: [{ ruleText: DIVISION, source: "rules" }],
+    first: { ruleText: DIVISION },
   },
   {
     id: "00000000-0000-4000-8000-000000000304",
     name: "Glimmerfin cilia ring (rule 110, 12 cells)",
     description: `${DEMO_NOTE} The ring of cilia cells around the eyespot, modelled as elementary cellular automaton rule 110 on 12 cells.`,
     author: "modeler@demo.emulant.test",
-    revisions: [
-      {
-        definition: networkToDefinition(cellularAutomaton(CILIA_RING)),
-        source: "generator",
-        generator: { ...CILIA_RING },
-      },
-    ],
+    first: { generator: CILIA_RING },
   },
   {
     id: "00000000-0000-4000-8000-000000000306",
     name: "Glimmerfin tide ring (3 genes)",
     description: `${DEMO_NOTE} The three-gene repressor ring the tide clock was built around, written on its own.`,
     author: "modeler@demo.emulant.test",
-    revisions: [
-      { ruleText: "# Each tide gene represses the next.\nTk1' = !Tk3\nTk2' = !Tk1\nTk3' = !Tk2\n", source: "rules" },
-    ],
+    first: { ruleText: "# Each tide gene represses the next.\nTk1' = !Tk3\nTk2' = !Tk1\nTk3' = !Tk2\n" },
   },
   {
     id: "00000000-0000-4000-8000-000000000307",
     name: "Glimmerfin tide pulse (1 gene)",
     description: `${DEMO_NOTE} A single self-repressing gene: the smallest oscillator, on at every other step.`,
     author: "modeler@demo.emulant.test",
-    revisions: [{ ruleText: "Pulse' = !Pulse\n", source: "rules" }],
+    first: { ruleText: "Pulse' = !Pulse\n" },
   },
   {
     id: "00000000-0000-4000-8000-000000000305",
     name: "Glimmerfin stress-response atlas",
     description: `${DEMO_NOTE} 24 genes; heat, salt and UV pathways converging on growth arrest and encystment. Its exact attractor analysis runs as a background run.`,
     author: "owner@demo.emulant.test",
-    revisions: [{ ruleText: STRESS, source: "rules" }],
+    first: { ruleText: STRESS },
   },
 ];
 
@@ -176,37 +157,15 @@ export async function seed(knex: Knex): Promise<void> {
   if (!project) return; // the accounts seed creates the demo project; without it there is nowhere to put models
   for (const m of DEMO_MODELS) {
     const author = (await knex("users").where({ email: m.author }).first("id")) as { id: string } | undefined;
-    const authorId = author?.id ?? null;
-    await knex("models")
-      .insert({
-        id: m.id,
-        project_id: DEMO_PROJECT_ID,
-        name: m.name,
-        description: m.description,
-        created_by: authorId,
-        latest_revision: m.revisions.length,
-      })
-      .onConflict("id")
-      .merge(["name", "description"]);
-    for (const [i, r] of m.revisions.entries()) {
-      const definition = r.definition ?? readRuleText(r.ruleText!);
-      const network = compileDefinition(definition);
-      const summary = networkSummary(definition, network);
-      await knex("model_revisions")
-        .insert({
-          model_id: m.id,
-          revision: i + 1,
-          definition: JSON.stringify(definition),
-          rule_text: r.ruleText ?? printRuleText(definition),
-          network_summary: JSON.stringify(summary),
-          node_count: summary.nodes.length,
-          source: r.source,
-          generator: r.generator ? JSON.stringify(r.generator) : null,
-          message: r.message ?? "",
-          created_by: authorId,
-        })
-        .onConflict(["model_id", "revision"])
-        .ignore();
+    if (!author) throw new Error(`demo seed: the accounts seed did not create ${m.author}`);
+    const by = { projectId: DEMO_PROJECT_ID, userId: author.id };
+    const fields = { id: m.id, name: m.name, description: m.description };
+    let latest = (await findModel(knex, DEMO_PROJECT_ID, m.id))?.latestRevision;
+    if (latest === undefined) {
+      if ("generator" in m.first) await generateModel(knex, by, { ...fields, generator: m.first.generator });
+      else await createModelFromRules(knex, by, { ...fields, ruleText: m.first.ruleText });
+      latest = 1;
     }
+    for (const edit of (m.edits ?? []).slice(latest - 1)) await reviseModel(knex, by, m.id, edit);
   }
 }

@@ -3,14 +3,15 @@ import { blockEmulationCertificate } from "@shared/engine/certificates";
 import { searchBlockEmulation } from "@shared/engine/emulation";
 import { compileDefinition } from "@shared/engine/rules";
 import type { Certificate } from "@shared/schemas/reductions";
-import { insertReduction, setVerification } from "../server/db/repositories/reductions";
-import { checkCertificate } from "../server/reductions/check-certificate";
-import { statementKey } from "../server/reductions/statement-key";
+import { checkCertificate } from "../server/services/reductions/check-certificate";
+import { proposeReduction } from "../server/services/reductions/propose-reduction";
+import { decideReduction } from "../server/services/reductions/review";
 
 // Demo reductions between the invented Glimmerfin models, found by the engine itself when the seed runs (nothing
 // is hand-written): the tide clock emulates its three-gene ring, the ring emulates the one-gene pulse (all three
 // genes in one block), and the clock emulates the pulse directly. The first two are approved, so the model
-// hierarchy shows them and their composition; the third waits for the demo reviewer. Safe to run twice.
+// hierarchy shows them and their composition; the third waits for the demo reviewer. They are stored and approved
+// through the same services as the API (verified when found, re-verified on approval). Safe to run twice.
 const DEMO_PROJECT_ID = "00000000-0000-4000-8000-000000000001";
 const TIDE_CLOCK = "00000000-0000-4000-8000-000000000302";
 const TIDE_RING = "00000000-0000-4000-8000-000000000306";
@@ -39,8 +40,8 @@ export async function seed(knex: Knex): Promise<void> {
     (
       (await knex("users")
         .whereIn("email", ["modeler@demo.emulant.test", "reviewer@demo.emulant.test"])
-        .select("id", "email")) as { id: string; email: string }[]
-    ).map((u) => [u.email, u.id]),
+        .select("id", "email", "display_name")) as { id: string; email: string; display_name: string }[]
+    ).map((u) => [u.email, { id: u.id, displayName: u.display_name }]),
   );
   const modeler = users.get("modeler@demo.emulant.test") ?? null;
   const reviewer = users.get("reviewer@demo.emulant.test") ?? null;
@@ -53,32 +54,26 @@ export async function seed(knex: Knex): Promise<void> {
     const found = searchBlockEmulation(sourceNet, targetNet, { maxTime: 1, maxBlock: 6 });
     if (!found.witness) throw new Error(`demo seed: expected a block emulation for ${s.source} -> ${s.target}`);
     const certificate = blockEmulationCertificate(sourceNet, targetNet, found.witness) as Certificate;
-    await knex.transaction(async (trx) => {
-      const stored = await insertReduction(trx, {
-        projectId: DEMO_PROJECT_ID,
-        sourceRevisionId: source.id,
-        targetRevisionId: target.id,
-        notion: "block-emulation",
-        timeScale: certificate.time,
-        certificate,
-        targetKey: statementKey(certificate, target.id),
-        flags: [],
-        foundBy: modeler,
-        foundInRunId: null,
+    const stored = await knex.transaction((trx) =>
+      proposeReduction(
+        trx,
+        {
+          projectId: DEMO_PROJECT_ID,
+          sourceRevisionId: source.id,
+          targetRevisionId: target.id,
+          certificate,
+          flags: [],
+          foundBy: modeler?.id ?? null,
+          foundInRunId: null,
+        },
+        () => checkCertificate(certificate, null, " when found"),
+      ),
+    );
+    if (stored.isNew && s.approve && reviewer) {
+      await decideReduction(knex, { projectId: DEMO_PROJECT_ID, user: reviewer }, stored.id, {
+        decision: "approve",
+        comment: s.approve,
       });
-      if (!stored.isNew) return;
-      await setVerification(trx, stored.id, checkCertificate(certificate, null, " when found"));
-      if (s.approve && reviewer) {
-        await trx("reductions")
-          .where({ id: stored.id })
-          .update({ review_state: "approved", decided_by: reviewer, decided_at: trx.fn.now() });
-        await trx("reduction_events").insert({
-          reduction_id: stored.id,
-          actor_id: reviewer,
-          kind: "approve",
-          comment: s.approve,
-        });
-      }
-    });
+    }
   }
 }

@@ -7,28 +7,29 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 import type { Logger } from "pino";
 import type { Config } from "./config";
-import { errorHandler, notFound } from "./http/errors";
-import { requestLog } from "./http/request-log";
-import { healthRouter } from "./routes/health";
-import { automataRouter } from "./routes/automata";
 import { authenticate } from "./http/auth";
+import { errorHandler, notFound } from "./http/errors";
 import { originCheck } from "./http/origin-check";
 import { defaultSignInLimits, type SignInLimits } from "./http/rate-limits";
-import { createMailer, type Mailer } from "./mail/mailer";
-import { auditRouter } from "./routes/audit";
-import { authRouter } from "./routes/auth";
-import { invitationsRouter, projectInvitationsRouter } from "./routes/invitations";
-import { mailboxRouter } from "./routes/mailbox";
-import { membersRouter } from "./routes/members";
-import { projectsRouter } from "./routes/projects";
-import { usersRouter } from "./routes/users";
-import { modelsRouter } from "./routes/models";
+import { requestLog } from "./http/request-log";
+import { attachRouteRegistry, RouteRegistry } from "./http/route-registry";
 import { lazyRunQueue, type RunQueue } from "./jobs/run-queue";
 import { loadRunSettings } from "./jobs/run-settings";
-import { notificationsRouter } from "./routes/notifications";
-import { runsRouter } from "./routes/runs";
-import { modelHierarchyRouter } from "./routes/model-hierarchy";
-import { reductionsRouter } from "./routes/reductions";
+import { createMailer, type Mailer } from "./mail/mailer";
+import { auditRoutes } from "./routes/audit";
+import { authRoutes } from "./routes/auth";
+import { automataRoutes } from "./routes/automata";
+import { healthRoutes } from "./routes/health";
+import { invitationsRoutes, projectInvitationsRoutes } from "./routes/invitations";
+import { mailboxRoutes } from "./routes/mailbox";
+import { membersRoutes } from "./routes/members";
+import { modelHierarchyRoutes } from "./routes/model-hierarchy";
+import { modelsRoutes } from "./routes/models";
+import { notificationsRoutes } from "./routes/notifications";
+import { projectsRoutes } from "./routes/projects";
+import { reductionsRoutes } from "./routes/reductions";
+import { runsRoutes } from "./routes/runs";
+import { usersRoutes } from "./routes/users";
 
 export interface AppDeps {
   db: Knex;
@@ -68,7 +69,6 @@ export function createApp(deps: AppDeps): Express {
   api.use(express.json({ limit: "5mb" }));
   api.use(originCheck(deps.config.publicUrl));
   api.use(authenticate(deps.db, deps.config.sessionSecret));
-  api.use("/health", healthRouter(deps));
   const mailer = deps.mailer ?? createMailer(deps.config, deps.db, deps.log);
   const accounts = {
     db: deps.db,
@@ -77,27 +77,31 @@ export function createApp(deps: AppDeps): Express {
     sessionSecret: deps.config.sessionSecret,
     publicUrl: deps.config.PUBLIC_URL,
   };
-  api.use("/auth", authRouter({ ...accounts, signInLimits: deps.signInLimits ?? defaultSignInLimits }));
-  api.use("/users", usersRouter(accounts));
-  api.use("/mailbox", mailboxRouter(accounts));
-  api.use("/invitations", invitationsRouter(accounts));
-  api.use("/projects", projectsRouter(accounts));
-  api.use("/projects/:projectId/members", membersRouter(accounts));
-  api.use("/projects/:projectId/invitations", projectInvitationsRouter(accounts));
-  api.use("/projects/:projectId/audit", auditRouter(accounts));
-  api.use("/projects/:projectId/models", modelsRouter(deps));
-  const runQueue = deps.runQueue ?? lazyRunQueue(deps.config.DATABASE_URL, deps.log);
-  api.use(
-    "/projects/:projectId/runs",
-    runsRouter({ db: deps.db, queue: runQueue, queueCap: loadRunSettings().queueCap }),
-  );
-  api.use("/notifications", notificationsRouter(deps));
-  api.use(
-    "/projects/:projectId/reductions",
-    reductionsRouter({ db: deps.db, queue: runQueue, queueCap: loadRunSettings().queueCap }),
-  );
-  api.use("/projects/:projectId/model-hierarchy", modelHierarchyRouter(deps));
-  api.use("/automata", automataRouter(deps));
+  const runs = {
+    db: deps.db,
+    queue: deps.runQueue ?? lazyRunQueue(deps.config.DATABASE_URL, deps.log),
+    queueCap: loadRunSettings().queueCap,
+  };
+  // Every API route is declared in a route group and mounted through the registry, which keeps their records.
+  const registry = new RouteRegistry("/api");
+  for (const group of [
+    healthRoutes(deps),
+    authRoutes({ ...accounts, signInLimits: deps.signInLimits ?? defaultSignInLimits }),
+    usersRoutes(accounts),
+    mailboxRoutes(accounts),
+    invitationsRoutes(accounts),
+    projectsRoutes(accounts),
+    membersRoutes(accounts),
+    projectInvitationsRoutes(accounts),
+    auditRoutes(accounts),
+    modelsRoutes(deps),
+    runsRoutes(runs),
+    notificationsRoutes(deps),
+    reductionsRoutes(runs),
+    modelHierarchyRoutes(deps),
+    automataRoutes(deps),
+  ])
+    registry.mount(api, group);
   api.use(notFound);
   app.use("/api", api);
 
@@ -109,5 +113,6 @@ export function createApp(deps: AppDeps): Express {
   }
   app.use(notFound);
   app.use(errorHandler(deps.log));
+  attachRouteRegistry(app, registry);
   return app;
 }

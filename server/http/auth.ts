@@ -1,7 +1,7 @@
 // Who is calling and what may they do. `authenticate` runs on every API request and sets req.user from the
 // session cookie; routes then ask for the least they need: requireUser, requireSiteAdmin, or projectAccess(db,
 // capability), which also hides projects the caller is not in behind a 404 so their existence does not leak.
-import type { Request, RequestHandler } from "express";
+import type { RequestHandler } from "express";
 import type { Knex } from "knex";
 import { can, type Capability, type ProjectRole, type SiteRole } from "@shared/types/roles";
 import { roleOf } from "../db/repositories/memberships";
@@ -108,16 +108,4 @@ export function projectAccess(db: Knex, capability: Capability): RequestHandler 
     req.project = { id: project.id, name: project.name, archived: project.archived, role };
     next();
   };
-}
-
-/** The signed-in user in a handler behind requireUser or projectAccess. */
-export function currentUser(req: Request): AuthUser {
-  if (!req.user) throw new HttpError(401, "UNAUTHENTICATED", "Sign in to continue");
-  return req.user;
-}
-
-/** The project in a handler behind projectAccess. */
-export function currentProject(req: Request): ProjectContext {
-  if (!req.project) throw new Error("currentProject() used on a route without projectAccess()");
-  return req.project;
 }

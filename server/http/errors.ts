@@ -1,12 +1,15 @@
-// One error shape for the whole API: { error: { code, message, details? } }.
+// One error shape for the whole API: { error: { code, message, details? } }. Everything a handler throws ends here:
+// HttpError as it is, a refused run request (RunRequestError) and PostgreSQL errors translated, the rest a logged 500.
 import type { ErrorRequestHandler, RequestHandler } from "express";
 import type { Logger } from "pino";
+import type { ApiErrorBody, ApiErrorCode } from "@shared/schemas/api-error";
 import { translateDatabaseError } from "../db/database-errors";
+import { RunRequestError } from "../jobs/run-errors";
 
 export class HttpError extends Error {
   constructor(
     readonly status: number,
-    readonly code: string,
+    readonly code: ApiErrorCode,
     message: string,
     readonly details?: unknown,
   ) {
@@ -25,22 +28,25 @@ interface BodyParserError {
   expose?: boolean;
 }
 
+/** The HTTP answer for a known kind of failure, or null for one that is our fault. */
+function knownError(err: unknown): HttpError | null {
+  if (err instanceof HttpError) return err;
+  if (err instanceof RunRequestError) return new HttpError(err.status, err.code, err.message);
+  const bp = err as BodyParserError | undefined;
+  if (bp?.type === "entity.parse.failed")
+    return new HttpError(400, "INVALID_JSON", "The request body is not valid JSON");
+  if (bp?.type === "entity.too.large") return new HttpError(413, "TOO_LARGE", "The request body is too large");
+  return translateDatabaseError(err);
+}
+
 export function errorHandler(log: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
-    let httpError: HttpError | null = err instanceof HttpError ? err : translateDatabaseError(err);
-    const bp = err as BodyParserError;
-    if (!httpError && bp?.type === "entity.parse.failed")
-      httpError = new HttpError(400, "INVALID_JSON", "The request body is not valid JSON");
-    if (!httpError && bp?.type === "entity.too.large")
-      httpError = new HttpError(413, "TOO_LARGE", "The request body is too large");
+    let httpError = knownError(err);
     if (!httpError) {
       log.error({ err, requestId: req.id }, "unhandled error");
       httpError = new HttpError(500, "INTERNAL", `Something went wrong on our side (request ${req.id ?? "unknown"})`);
     }
-    const body: { code: string; message: string; details?: unknown } = {
-      code: httpError.code,
-      message: httpError.message,
-    };
+    const body: ApiErrorBody["error"] = { code: httpError.code, message: httpError.message };
     if (httpError.details !== undefined) body.details = httpError.details;
     res.status(httpError.status).json({ error: body });
   };

@@ -41,7 +41,9 @@ export function signInRateLimits(limits: SignInLimits): RequestHandler[] {
     limit: limits.perAccount,
     identifier: "sign-in-account",
     keyGenerator: (req) => {
-      const email = (req.body as { email?: unknown } | undefined)?.email;
+      // Runs before validation, on the raw body.
+      const body: unknown = req.body;
+      const email = typeof body === "object" && body !== null && "email" in body ? body.email : undefined;
       return `account:${typeof email === "string" ? email.trim().toLowerCase().slice(0, 254) : ""}`;
     },
   });

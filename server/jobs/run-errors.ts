@@ -1,8 +1,11 @@
-// Refusals of a run request (bad parameters, full queue); the runs router turns them into HTTP errors.
+// Refusals of a run request (bad parameters, full queue, nothing to cancel). Jobs know nothing of HTTP, so they throw
+// this; the API's error handler (server/http/errors.ts) answers it with its status and code.
+import type { ApiErrorCode } from "@shared/schemas/api-error";
+
 export class RunRequestError extends Error {
   constructor(
     readonly status: number,
-    readonly code: string,
+    readonly code: ApiErrorCode,
     message: string,
   ) {
     super(message);

@@ -1,8 +1,10 @@
-// Starting, cancelling, retrying and deleting runs: each spans the runs and shards tables and the queue, so it
-// lives here rather than in the router. Workers notice cancellation and deletion at their next heartbeat.
+// Starting, cancelling, retrying and deleting runs: each spans the runs and shards tables, the queue and the audit
+// log, so it lives here rather than in the router. Workers notice cancellation and deletion at their next heartbeat.
+// Refusals are RunRequestErrors, which the API's error handler answers with their status and code.
 import { createHash } from "node:crypto";
 import type { Knex } from "knex";
 import type { Run, StartRunBody } from "@shared/schemas/runs";
+import { recordAudit } from "../db/repositories/audit-log";
 import { setShardJob } from "../db/repositories/run-shards";
 import {
   countUnfinishedRuns,
@@ -42,10 +44,22 @@ export function paramsHash(params: unknown): string {
     .digest("hex");
 }
 
-export async function submitRun(
-  deps: LifecycleDeps,
-  req: { projectId: string; startedBy: string | null; body: StartRunBody },
-): Promise<{ run: Run; reused: boolean }> {
+/** Who asks for a lifecycle step; the audit log names them. */
+export interface RunActor {
+  id: string;
+  displayName: string;
+}
+
+export interface RunRequest {
+  projectId: string;
+  /** The starter's user id (null for runs the system starts, as in tests and benchmarks). */
+  startedBy: string | null;
+  body: StartRunBody;
+  /** The audit entry a new run is recorded with (a reused result records nothing). */
+  audit?: { action: string; details: Record<string, unknown> };
+}
+
+export async function submitRun(deps: LifecycleDeps, req: RunRequest): Promise<{ run: Run; reused: boolean }> {
   const kind = runKind(req.body.kind);
   if (!kind) throw new RunRequestError(400, "UNKNOWN_KIND", `There is no run kind "${req.body.kind}"`);
   const parsed = kind.params.safeParse(req.body.params);
@@ -88,6 +102,10 @@ export async function submitRun(
     shardInputs,
   });
   await enqueueShards(deps, run.id, shardIds);
+  if (req.audit) {
+    const { action, details } = req.audit;
+    await recordAudit(deps.db, { projectId: req.projectId, actorId: req.startedBy, action, target: run.id, details });
+  }
   return { run, reused: false };
 }
 
@@ -99,7 +117,7 @@ async function enqueueShards(deps: LifecycleDeps, runId: string, shardIds: strin
   }
 }
 
-export async function cancelRun(deps: LifecycleDeps, run: Run, by: { displayName: string }): Promise<Run> {
+export async function cancelRun(deps: LifecycleDeps, run: Run, by: RunActor): Promise<Run> {
   const cancelled = await finishRun(deps.db, run.id, "cancelled", {
     error: { code: "CANCELLED", message: `Cancelled by ${by.displayName}` },
   });
@@ -109,18 +127,25 @@ export async function cancelRun(deps: LifecycleDeps, run: Run, by: { displayName
       "RUN_FINISHED",
       `This run has already ${run.state === "succeeded" ? "succeeded" : "ended"}; there is nothing to cancel`,
     );
+  await recordRunAudit(deps, run, by, "run.cancel", { kind: run.kind });
   return (await getRun(deps.db, run.id)) ?? cancelled;
 }
 
-export async function retryRun(deps: LifecycleDeps, run: Run): Promise<Run> {
+export async function retryRun(deps: LifecycleDeps, run: Run, by: RunActor): Promise<Run> {
   const shardIds = await resetRunForRetry(deps.db, run.id);
   if (!shardIds) throw new RunRequestError(409, "RUN_NOT_RETRYABLE", "Only a failed or cancelled run can be retried");
   // Every shard was already done (cancelled just before its merge): a worker's reaper merges a running run.
   if (shardIds.length === 0) await tryStartRun(deps.db, run.id, Number.MAX_SAFE_INTEGER);
   await enqueueShards(deps, run.id, shardIds);
+  await recordRunAudit(deps, run, by, "run.retry", { kind: run.kind });
   return (await getRun(deps.db, run.id))!;
 }
 
-export async function removeRun(deps: LifecycleDeps, run: Run): Promise<void> {
+export async function removeRun(deps: LifecycleDeps, run: Run, by: RunActor): Promise<void> {
   await deleteRun(deps.db, run.id);
+  await recordRunAudit(deps, run, by, "run.delete", { kind: run.kind, state: run.state });
+}
+
+function recordRunAudit(deps: LifecycleDeps, run: Run, by: RunActor, action: string, details: Record<string, unknown>) {
+  return recordAudit(deps.db, { projectId: run.projectId, actorId: by.id, action, target: run.id, details });
 }

@@ -1,16 +1,19 @@
 // A project's audit log, newest first.
-import { Router } from "express";
 import type { Knex } from "knex";
-import { AuditQuery } from "@shared/schemas/projects";
+import { z } from "zod";
+import { AuditEntry, AuditQuery, ProjectParams } from "@shared/schemas/projects";
 import { listAudit } from "../db/repositories/audit-log";
-import { currentProject, projectAccess } from "../http/auth";
-import { validate } from "../http/validate";
+import { project, routeGroup, type RouteGroup } from "../http/route-group";
 
-export function auditRouter(deps: { db: Knex }): Router {
-  const router = Router({ mergeParams: true });
-  router.get("/", projectAccess(deps.db, "project:read"), validate({ query: AuditQuery }), async (req, res) => {
-    const query = req.query as unknown as { limit: number; before?: string };
-    res.json({ data: await listAudit(deps.db, currentProject(req).id, query) });
+export function auditRoutes(deps: { db: Knex }): RouteGroup {
+  const routes = routeGroup({ mountPath: "/projects/:projectId/audit", tag: "projects", db: deps.db });
+  routes.get("/", {
+    summary: "The project's audit log, newest first; page back with `before`",
+    access: project("project:read"),
+    params: ProjectParams,
+    query: AuditQuery,
+    response: z.array(AuditEntry),
+    handler: ({ project, query }) => listAudit(deps.db, project.id, query),
   });
-  return router;
+  return routes;
 }

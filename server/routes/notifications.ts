@@ -1,28 +1,32 @@
 // The signed-in person's in-app notifications (the bell in the header): list with the unread count, mark read.
-import { Router } from "express";
 import type { Knex } from "knex";
-import { MarkNotificationsReadBody } from "@shared/schemas/runs";
-import type { z } from "zod";
+import { MarkNotificationsReadBody, MarkNotificationsReadResult, NotificationList } from "@shared/schemas/runs";
 import { listNotifications, markNotificationsRead } from "../db/repositories/notifications";
-import { currentUser, requireUser } from "../http/auth";
 import { HttpError } from "../http/errors";
-import { validate } from "../http/validate";
+import { routeGroup, signedIn, type RouteGroup } from "../http/route-group";
 
-export function notificationsRouter(deps: { db: Knex }): Router {
+export function notificationsRoutes(deps: { db: Knex }): RouteGroup {
   const { db } = deps;
-  const router = Router();
+  const routes = routeGroup({ mountPath: "/notifications", tag: "notifications", db });
 
-  router.get("/", requireUser, async (req, res) => {
-    res.json({ data: await listNotifications(db, currentUser(req).id) });
+  routes.get("/", {
+    summary: "The caller's notifications, newest first, with the unread count",
+    access: signedIn,
+    response: NotificationList,
+    handler: ({ user }) => listNotifications(db, user.id),
   });
 
-  router.post("/read", requireUser, validate({ body: MarkNotificationsReadBody }), async (req, res) => {
-    const body = req.body as z.infer<typeof MarkNotificationsReadBody>;
-    if (!body.all && !body.ids?.length)
-      throw new HttpError(400, "INVALID_INPUT", "Give the ids to mark read, or all: true");
-    const marked = await markNotificationsRead(db, currentUser(req).id, body.all ? "all" : body.ids!);
-    res.json({ data: { marked } });
+  routes.post("/read", {
+    summary: "Mark some notifications (ids) or all of them read",
+    access: signedIn,
+    body: MarkNotificationsReadBody,
+    response: MarkNotificationsReadResult,
+    async handler({ body, user }) {
+      if (body.all) return { marked: await markNotificationsRead(db, user.id, "all") };
+      if (!body.ids?.length) throw new HttpError(400, "INVALID_INPUT", "Give the ids to mark read, or all: true");
+      return { marked: await markNotificationsRead(db, user.id, body.ids) };
+    },
   });
 
-  return router;
+  return routes;
 }

@@ -1,14 +1,11 @@
 // A project's runs: start (or reuse a stored result), list with filters, read one, cancel, retry, delete.
 // The work itself happens in worker processes; these handlers only write rows and send queue jobs.
-import { Router, type Request } from "express";
 import type { Knex } from "knex";
-import { RunListQuery, RunParamsPath, StartRunBody, type Run } from "@shared/schemas/runs";
-import { recordAudit } from "../db/repositories/audit-log";
+import { ProjectParams } from "@shared/schemas/projects";
+import { RunList, RunListQuery, RunParamsPath, Run, StartRunBody, StartRunResponse } from "@shared/schemas/runs";
 import { getRun, listRuns } from "../db/repositories/runs";
-import { currentProject, currentUser, projectAccess } from "../http/auth";
 import { HttpError } from "../http/errors";
-import { validate } from "../http/validate";
-import { RunRequestError } from "../jobs/run-errors";
+import { project, reply, routeGroup, type RouteGroup } from "../http/route-group";
 import { cancelRun, removeRun, retryRun, submitRun } from "../jobs/run-lifecycle";
 import type { RunQueue } from "../jobs/run-queue";
 
@@ -18,108 +15,83 @@ export interface RunsRouterDeps {
   queueCap: number;
 }
 
-const asHttp = (err: unknown) =>
-  err instanceof RunRequestError ? new HttpError(err.status, err.code, err.message) : err;
-
-export function runsRouter(deps: RunsRouterDeps): Router {
+export function runsRoutes(deps: RunsRouterDeps): RouteGroup {
   const { db } = deps;
-  const router = Router({ mergeParams: true });
+  const routes = routeGroup({ mountPath: "/projects/:projectId/runs", tag: "runs", db });
 
-  const runOf = async (req: Request): Promise<Run> => {
-    const { runId } = req.params as { runId: string };
-    const run = await getRun(db, runId, currentProject(req).id);
+  const runOf = async (projectId: string, runId: string) => {
+    const run = await getRun(db, runId, projectId);
     if (!run) throw new HttpError(404, "NOT_FOUND", "No such run in this project");
     return run;
   };
 
-  router.post("/", projectAccess(db, "run:start"), validate({ body: StartRunBody }), async (req, res) => {
-    const project = currentProject(req);
-    const user = currentUser(req);
-    const body = req.body as StartRunBody;
-    // Its parameters (revision ids, rule texts) are trusted by the merge step, so only the server may assemble them.
-    if (body.kind === "reduction-search") {
-      throw new HttpError(
-        400,
-        "INVALID_INPUT",
-        "body.kind: start reduction searches with POST /api/projects/:projectId/reductions/searches",
-        [{ field: "body.kind", message: "use the reductions searches endpoint" }],
-      );
-    }
-    const out = await submitRun(deps, { projectId: project.id, startedBy: user.id, body }).catch((err) => {
-      throw asHttp(err);
-    });
-    if (!out.reused) {
-      await recordAudit(db, {
+  routes.post("/", {
+    summary: "Start a run, or answer the stored run of the same kind, revision and parameters",
+    access: project("run:start"),
+    params: ProjectParams,
+    body: StartRunBody,
+    response: StartRunResponse,
+    status: [201, 200],
+    async handler({ body, project, user }) {
+      // Its parameters (revision ids, rule texts) are trusted by the merge step, so only the server may assemble them.
+      if (body.kind === "reduction-search") {
+        throw new HttpError(
+          400,
+          "INVALID_INPUT",
+          "body.kind: start reduction searches with POST /api/projects/:projectId/reductions/searches",
+          [{ field: "body.kind", message: "use the reductions searches endpoint" }],
+        );
+      }
+      const out = await submitRun(deps, {
         projectId: project.id,
-        actorId: user.id,
-        action: "run.start",
-        target: out.run.id,
-        details: { kind: out.run.kind },
+        startedBy: user.id,
+        body,
+        audit: { action: "run.start", details: { kind: body.kind } },
       });
-    }
-    res.status(out.reused ? 200 : 201).json({ data: { ...out.run, reused: out.reused } });
-  });
-
-  router.get("/", projectAccess(db, "project:read"), validate({ query: RunListQuery }), async (req, res) => {
-    res.json({ data: await listRuns(db, currentProject(req).id, req.query as unknown as RunListQuery) });
-  });
-
-  router.get("/:runId", projectAccess(db, "project:read"), validate({ params: RunParamsPath }), async (req, res) => {
-    res.json({ data: await runOf(req) });
-  });
-
-  router.post(
-    "/:runId/cancel",
-    projectAccess(db, "run:start"),
-    validate({ params: RunParamsPath }),
-    async (req, res) => {
-      const run = await runOf(req);
-      const cancelled = await cancelRun(deps, run, currentUser(req)).catch((err) => {
-        throw asHttp(err);
-      });
-      await recordAudit(db, {
-        projectId: run.projectId,
-        actorId: currentUser(req).id,
-        action: "run.cancel",
-        target: run.id,
-        details: { kind: run.kind },
-      });
-      res.json({ data: cancelled });
+      return reply(out.reused ? 200 : 201, { ...out.run, reused: out.reused });
     },
-  );
-
-  router.post(
-    "/:runId/retry",
-    projectAccess(db, "run:start"),
-    validate({ params: RunParamsPath }),
-    async (req, res) => {
-      const run = await runOf(req);
-      const retried = await retryRun(deps, run).catch((err) => {
-        throw asHttp(err);
-      });
-      await recordAudit(db, {
-        projectId: run.projectId,
-        actorId: currentUser(req).id,
-        action: "run.retry",
-        target: run.id,
-        details: { kind: run.kind },
-      });
-      res.json({ data: retried });
-    },
-  );
-
-  router.delete("/:runId", projectAccess(db, "run:start"), validate({ params: RunParamsPath }), async (req, res) => {
-    const run = await runOf(req);
-    await removeRun(deps, run);
-    await recordAudit(db, {
-      projectId: run.projectId,
-      actorId: currentUser(req).id,
-      action: "run.delete",
-      target: run.id,
-      details: { kind: run.kind, state: run.state },
-    });
-    res.status(204).end();
   });
 
-  return router;
+  routes.get("/", {
+    summary: "List the project's runs, newest first",
+    access: project("project:read"),
+    params: ProjectParams,
+    query: RunListQuery,
+    response: RunList,
+    handler: ({ project, query }) => listRuns(db, project.id, query),
+  });
+
+  routes.get("/:runId", {
+    summary: "Read one run with its progress, result or error",
+    access: project("project:read"),
+    params: RunParamsPath,
+    response: Run,
+    handler: ({ params }) => runOf(params.projectId, params.runId),
+  });
+
+  routes.post("/:runId/cancel", {
+    summary: "Cancel a queued or running run",
+    access: project("run:start"),
+    params: RunParamsPath,
+    response: Run,
+    handler: async ({ params, user }) => cancelRun(deps, await runOf(params.projectId, params.runId), user),
+  });
+
+  routes.post("/:runId/retry", {
+    summary: "Run a failed or cancelled run again, resuming its shards from their checkpoints",
+    access: project("run:start"),
+    params: RunParamsPath,
+    response: Run,
+    handler: async ({ params, user }) => retryRun(deps, await runOf(params.projectId, params.runId), user),
+  });
+
+  routes.delete("/:runId", {
+    summary: "Delete a run and its stored result",
+    access: project("run:start"),
+    params: RunParamsPath,
+    status: 204,
+    handler: async ({ params, user }) => removeRun(deps, await runOf(params.projectId, params.runId), user),
+  });
+
+  return routes;
 }

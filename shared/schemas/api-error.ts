@@ -1,7 +1,58 @@
+// The one error shape every API route answers with, and the stable codes it carries. The server may only send a
+// code listed here (HttpError and RunRequestError take an ApiErrorCode), and the client switches on the same list.
 import { z } from "zod";
 
-/** The one error shape every API route answers with. */
+export const API_ERROR_CODES = [
+  // Requests the server cannot read or accept as they are.
+  "INVALID_INPUT", // a field fails its schema or a check zod cannot express; details list { field, message }
+  "INVALID_JSON",
+  "PARSE_ERROR", // model text or file with mistakes; details list { line, column, message }
+  "UNSUPPORTED_FORMAT",
+  "TOO_LARGE",
+  "UNKNOWN_NODE",
+  "UNKNOWN_KIND",
+  "CONFIRMATION_MISMATCH",
+  // Who is calling and what they may do.
+  "UNAUTHENTICATED",
+  "INVALID_CREDENTIALS",
+  "WRONG_PASSWORD",
+  "SIGN_IN_REQUIRED",
+  "WRONG_ACCOUNT",
+  "FORBIDDEN",
+  "BAD_ORIGIN",
+  "RATE_LIMITED",
+  // Things that do not exist, or no longer can be used.
+  "NOT_FOUND",
+  "INVITATION_INVALID",
+  "INVITATION_USED",
+  "INVITATION_REVOKED",
+  "INVITATION_EXPIRED",
+  "HIERARCHY_NOT_COMPUTED",
+  "NO_EMULATION",
+  // Requests that conflict with what is stored.
+  "CONFLICT",
+  "EMAIL_TAKEN",
+  "ALREADY_MEMBER",
+  "LAST_OWNER",
+  "PROJECT_ARCHIVED",
+  "ALREADY_SAVED",
+  "SOURCE_MISMATCH",
+  "TARGET_MISMATCH",
+  "INVALID_CERTIFICATE",
+  "NEEDS_RUN", // the analysis is too large for a request; details name the run kind to start
+  "QUEUE_FULL",
+  "RUN_FINISHED",
+  "RUN_NOT_RETRYABLE",
+  // Our side.
+  "MAIL_FAILED",
+  "DATABASE_UNAVAILABLE",
+  "INTERNAL",
+] as const;
+
+export const ApiErrorCode = z.enum(API_ERROR_CODES);
+export type ApiErrorCode = z.infer<typeof ApiErrorCode>;
+
 export const ApiErrorBody = z.object({
-  error: z.object({ code: z.string(), message: z.string(), details: z.unknown().optional() }),
+  error: z.object({ code: ApiErrorCode, message: z.string(), details: z.unknown().optional() }),
 });
 export type ApiErrorBody = z.infer<typeof ApiErrorBody>;

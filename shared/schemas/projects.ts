@@ -11,6 +11,9 @@ export const ProjectName = z
 
 export const ProjectRoleSchema = z.enum(PROJECT_ROLES);
 
+/** Every route under /api/projects/:projectId. */
+export const ProjectParams = z.object({ projectId: z.string().uuid() });
+
 export const MemberParams = z.object({
   projectId: z.string().uuid(),
   userId: z.string().uuid({ message: "Not a member id" }),

@@ -103,3 +103,4 @@ export const MarkNotificationsReadBody = z.object({
   ids: z.array(z.uuid()).max(500).optional(),
   all: z.boolean().optional(),
 });
+export const MarkNotificationsReadResult = z.object({ marked: z.number().int() });

@@ -3,7 +3,8 @@ import { createBrowserRouter, RouterProvider } from "react-router-dom";
 import { AppShell } from "@/components/layout/app-shell";
 import { RequireSignIn } from "@/features/accounts/components/require-sign-in";
 import { UserMenu } from "@/features/accounts/components/user-menu";
-import { NotificationBell } from "@/features/runs/components/notification-bell";
+import { NotificationBell } from "@/features/runs";
+import { HealthBadge } from "@/features/system/components/health-badge";
 import { AcceptInvitationRoute } from "./routes/accept-invitation";
 import { AutomataRoute } from "./routes/automata";
 import { AutomataRuleRoute } from "./routes/automata-rule";
@@ -30,7 +31,9 @@ import { SignUpRoute } from "./routes/sign-up";
 
 export const routes = [
   {
-    element: <AppShell accountSlot={<UserMenu />} notificationSlot={<NotificationBell />} />,
+    element: (
+      <AppShell accountSlot={<UserMenu />} notificationSlot={<NotificationBell />} statusSlot={<HealthBadge />} />
+    ),
     errorElement: <RouteErrorBoundary />,
     children: [
       { index: true, element: <HomeRoute /> },

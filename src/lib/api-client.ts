@@ -1,12 +1,15 @@
 // Every server call goes through here: JSON in, { data } out, parsed with the shared zod schema;
-// failures become ApiError carrying the server's stable code so the UI can switch on it.
+// failures become ApiError carrying the server's stable code (shared/schemas/api-error.ts) so the UI can switch on it.
 import type { z } from "zod";
-import { ApiErrorBody } from "@shared/schemas/api-error";
+import { ApiErrorBody, type ApiErrorCode } from "@shared/schemas/api-error";
+
+/** Failures found on this side: no answer at all, an answer not in the shared shape, or an unreadable error. */
+export type ClientErrorCode = "NETWORK" | "BAD_RESPONSE" | `HTTP_${number}`;
 
 export class ApiError extends Error {
   constructor(
     readonly status: number,
-    readonly code: string,
+    readonly code: ApiErrorCode | ClientErrorCode,
     message: string,
     readonly details?: unknown,
   ) {
@@ -52,7 +55,7 @@ export async function apiRequest<S extends z.ZodType>(
     const parsed = ApiErrorBody.safeParse(json);
     if (parsed.success)
       throw new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.details);
-    throw new ApiError(res.status, "HTTP_" + res.status, `The server answered ${res.status}`);
+    throw new ApiError(res.status, `HTTP_${res.status}`, `The server answered ${res.status}`);
   }
   const data = (json as { data?: unknown } | null)?.data;
   const parsed = schema.safeParse(data);

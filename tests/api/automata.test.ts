@@ -4,7 +4,7 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ecaRule } from "@shared/engine/automata";
 import { verifyEmulation } from "@shared/engine/block-emulation";
-import { computeHierarchyRecord } from "../../server/automata/eca-hierarchy-compute";
+import { computeHierarchyRecord } from "../../server/services/automata/eca-hierarchy-compute";
 import {
   deleteHierarchy,
   findHierarchy,

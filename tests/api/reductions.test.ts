@@ -297,16 +297,14 @@ describe("POST /reductions/searches (searches as background runs)", () => {
   });
 
   it("reports a search that finds nothing as a succeeded run with no findings, within its bounds", async () => {
-    const res = await modeler
-      .post(`${base}/reductions/searches`)
-      .send({
-        mode: "given-target",
-        notion: "block-emulation",
-        sourceModelId: modelIds.G,
-        targetModelId: modelIds.F,
-        maxTime: 1,
-        maxBlock: 1,
-      });
+    const res = await modeler.post(`${base}/reductions/searches`).send({
+      mode: "given-target",
+      notion: "block-emulation",
+      sourceModelId: modelIds.G,
+      targetModelId: modelIds.F,
+      maxTime: 1,
+      maxBlock: 1,
+    });
     const run = await finishedRun(res.body.data.id);
     expect(run.state).toBe("succeeded");
     expect(run.result).toMatchObject({ found: false, findings: [], bounds: { maxTime: 1, maxBlock: 1 } });

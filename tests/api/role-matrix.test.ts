@@ -6,9 +6,10 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { newInvitationToken } from "../../server/db/repositories/invitations";
 import { hashPassword } from "../../server/http/password-hash";
+import { routeRegistry } from "../../server/http/route-registry";
 import { SESSION_COOKIE, signSession } from "../../server/http/session";
 import { insertReduction } from "../../server/db/repositories/reductions";
-import { statementKey } from "../../server/reductions/statement-key";
+import { statementKey } from "../../server/services/reductions/statement-key";
 import { blockEmulationCertificate } from "@shared/engine/certificates";
 import { compileDefinition, readRuleText } from "@shared/engine/rules";
 import type { Certificate } from "@shared/schemas/reductions";
@@ -59,6 +60,7 @@ const PASSWORD = "matrix-password-1";
 
 // anonymous, non-member, viewer, reviewer, modeler, owner, admin
 const rows: Row[] = [
+  { method: "get", path: "/api/health", expected: [200, 200, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/auth/session", expected: [200, 200, 200, 200, 200, 200, 200] },
   {
     method: "post",
@@ -418,15 +420,13 @@ async function insertMatrixModel(projectId: string): Promise<string> {
     })
     .returning("id");
   const bytes = Buffer.from("A' = !B\nB' = !A\n");
-  await t
-    .db("model_files")
-    .insert({
-      revision_id: (revision as { id: string }).id,
-      file_name: "toggle.rules",
-      media_type: "text/plain",
-      bytes,
-      size_bytes: bytes.length,
-    });
+  await t.db("model_files").insert({
+    revision_id: (revision as { id: string }).id,
+    file_name: "toggle.rules",
+    media_type: "text/plain",
+    bytes,
+    size_bytes: bytes.length,
+  });
   return modelId;
 }
 
@@ -486,6 +486,40 @@ describe("role matrix", () => {
   it("has exactly one row per method and path", () => {
     const keys = rows.map((r) => `${r.method} ${r.path}`);
     expect(new Set(keys).size).toBe(keys.length);
+  });
+
+  // The registry lists every route the app serves, with the access it declares: the table must cover them all.
+  const declared = routeRegistry(t.app).routes.map((r) => ({
+    ...r,
+    pattern: new RegExp(`^${r.openApiPath.replace(/\{\w+\}/g, "[^/]+")}$`),
+  }));
+  const declaredFor = (row: Row) =>
+    declared.find((r) => r.method === row.method && r.pattern.test(row.path.split("?")[0]!));
+
+  it("has a row for every route in the route registry, and no row for a route it does not list", () => {
+    const missing = declared.filter(
+      (r) => !rows.some((row) => row.method === r.method && r.pattern.test(row.path.split("?")[0]!)),
+    );
+    expect(missing.map((r) => `${r.method.toUpperCase()} ${r.openApiPath}`)).toEqual([]);
+    expect(rows.filter((row) => !declaredFor(row)).map((row) => `${row.method} ${row.path}`)).toEqual([]);
+  });
+
+  it("answers anonymous callers and non-members as each route's declared access says", () => {
+    // Public routes let both in; signed-in routes stop only the anonymous; admin routes refuse members with 403;
+    // project routes hide the project from non-members behind a 404.
+    const firstTwo = { user: [401, null], "site-admin": [401, 403], project: [401, 404] } as const;
+    for (const row of rows) {
+      const access = declaredFor(row)!.access.kind;
+      const [anonymous, nonMember] = row.expected;
+      if (access === "public") {
+        expect([anonymous, nonMember], `${row.method} ${row.path}`).not.toContain(401);
+        continue;
+      }
+      const [a, m] = firstTwo[access];
+      expect(anonymous, `${row.method} ${row.path}`).toBe(a);
+      if (m !== null) expect(nonMember, `${row.method} ${row.path}`).toBe(m);
+      else expect(nonMember, `${row.method} ${row.path}`).not.toBe(401);
+    }
   });
 
   for (const row of rows) {

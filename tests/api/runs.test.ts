@@ -1,7 +1,7 @@
 // The runs API against the real PostgreSQL and pg-boss, with one in-process worker where a run must finish.
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { computeHierarchyRecord } from "../../server/automata/eca-hierarchy-compute";
+import { computeHierarchyRecord } from "../../server/services/automata/eca-hierarchy-compute";
 import { getRun } from "../../server/db/repositories/runs";
 import { loadRunSettings } from "../../server/jobs/run-settings";
 import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";

@@ -63,7 +63,7 @@ async function measureChild(kind: string, a: number, b: number): Promise<void> {
   };
   const t0 = performance.now();
   const cpu0 = process.cpuUsage();
-  let pairs = 0;
+  let pairs: number;
   let relations: number | undefined;
   let rules: number | undefined;
   if (kind === "fast") {

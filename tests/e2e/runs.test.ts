@@ -66,15 +66,13 @@ describe("runs in the browser", () => {
     const { page } = browser;
     const owner = await server.db("users").where({ email: "owner@demo.emulant.test" }).first();
     const title = `Your sleep-count run finished (${randomUUID().slice(0, 6)})`;
-    await server
-      .db("notifications")
-      .insert({
-        user_id: owner.id,
-        kind: "run.succeeded",
-        title,
-        body: "The run you started finished after 2 min.",
-        link: `/projects/${projectId}/runs`,
-      });
+    await server.db("notifications").insert({
+      user_id: owner.id,
+      kind: "run.succeeded",
+      title,
+      body: "The run you started finished after 2 min.",
+      link: `/projects/${projectId}/runs`,
+    });
     await page.goto(`${server.baseUrl}/projects/${projectId}/runs`);
     await expect
       .poll(async () => Number(await page.getByTestId("notification-count").textContent()))

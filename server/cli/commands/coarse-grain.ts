@@ -7,7 +7,7 @@ import { coarseGrainingCertificate } from "@shared/engine/certificates";
 import { coarseGrainBySat, MAX_SAT_COARSE_GRAINING_TIME, nodeObservable } from "@shared/engine/coarse-graining";
 import { MAX_TABULATED_NODES } from "@shared/engine/emulation";
 import type { BooleanNetwork } from "@shared/engine/network";
-import { mergeShards, searchShard } from "../../reductions/search-plan";
+import { mergeShards, searchShard } from "../../services/reductions/search-plan";
 import {
   CommandError,
   integerOption,

@@ -1,6 +1,6 @@
 // `discover <file> --max-target-nodes m [--time t] [--max-block b] --json`: every smaller network (1..m nodes) the model
 // block-emulates within the bounds, up to renaming and codeword swaps, ranked, trivial ones flagged.
-import { mergeShards, searchShard } from "../../reductions/search-plan";
+import { mergeShards, searchShard } from "../../services/reductions/search-plan";
 import { integerOption, parseCommandArgs, printJson, readModelFile, runCommand } from "../cli-io";
 
 export const summary =

@@ -1,6 +1,6 @@
 // `embed --source F --target G [--time t] --json`: is there a one-to-one map e with F^t(e(x)) = e(G(x)) for some time
 // scale 1..t? Exact for sources up to 20 nodes. Same output shape as `emulate`.
-import { mergeShards, searchShard } from "../../reductions/search-plan";
+import { mergeShards, searchShard } from "../../services/reductions/search-plan";
 import { integerOption, parseCommandArgs, printJson, readModelFile, runCommand } from "../cli-io";
 
 export const summary = "embed --source F --target G [--time t] --json: dynamical embedding of G into F";

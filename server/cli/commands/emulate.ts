@@ -1,6 +1,6 @@
 // `emulate --source F --target G [--time t] [--max-block b] [--no-context] --json`: does F block-emulate G at some time
 // scale 1..t with blocks of at most b nodes? Prints {"found":true,"witness":certificate} or {"found":false,"bounds":{...}}.
-import { mergeShards, searchShard } from "../../reductions/search-plan";
+import { mergeShards, searchShard } from "../../services/reductions/search-plan";
 import { integerOption, parseCommandArgs, printJson, readModelFile, runCommand } from "../cli-io";
 
 export const summary =

@@ -74,10 +74,12 @@ export async function findModel(db: Knex, projectId: string, modelId: string): P
 
 export async function insertModel(
   trx: Knex,
-  input: { projectId: string; name: string; description: string; createdBy: string },
+  input: { id?: string; projectId: string; name: string; description: string; createdBy: string },
 ): Promise<string> {
   const [row] = await trx("models")
     .insert({
+      // The demo seed gives its models fixed ids; everything else lets the database choose.
+      ...(input.id ? { id: input.id } : {}),
       project_id: input.projectId,
       name: input.name,
       description: input.description,

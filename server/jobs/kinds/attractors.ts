@@ -1,14 +1,15 @@
 // "attractors": exact synchronous attractors and basins of one network (one shard: the state space is walked
 // once as a whole, see shared/engine/state-graph).
+import { attractorsTask } from "@shared/schemas/run-tasks";
 import { AttractorsParams } from "@shared/schemas/runs";
-import { ruleTextIssues } from "../../models/model-reading";
+import { ruleTextIssues } from "../../services/models/model-reading";
 import { RunRequestError } from "../run-errors";
-import { taskFile, type RunKindDefinition } from "../run-kind";
+import { defineRunKind, taskFile } from "../run-kind";
 
-export const attractorsKind: RunKindDefinition<AttractorsParams> = {
+export const attractorsKind = defineRunKind({
   kind: "attractors",
   params: AttractorsParams,
-  taskFile: taskFile("attractors"),
+  task: { ...attractorsTask, file: taskFile("attractors") },
   timeLimitSeconds: 3600,
   plan(p, revision) {
     const ruleText = p.ruleText ?? revision?.ruleText;
@@ -27,4 +28,4 @@ export const attractorsKind: RunKindDefinition<AttractorsParams> = {
     return [{ ruleText }];
   },
   merge: (partials) => partials[0],
-};
+});

@@ -3,27 +3,23 @@
 // file it in eca_hierarchies the first time someone asks for that hierarchy.
 import { hierarchyUnits } from "@shared/engine/block-emulation";
 import { HierarchyRunParameters } from "@shared/schemas/automata";
-import type { EcaHierarchyShard } from "../../workers/tasks/eca-hierarchy";
-import { taskFile, type RunKindDefinition } from "../run-kind";
+import { ecaHierarchyTask } from "@shared/schemas/run-tasks";
+import { defineRunKind, taskFile } from "../run-kind";
 
 /** Enough shards to keep a few machines busy; units are dealt round-robin so shards cost about the same. */
 const MAX_SHARDS = 8;
 
-export const ecaHierarchyKind: RunKindDefinition<HierarchyRunParameters> = {
+export const ecaHierarchyKind = defineRunKind({
   kind: "eca-hierarchy",
   params: HierarchyRunParameters,
-  taskFile: taskFile("eca-hierarchy"),
+  task: { ...ecaHierarchyTask, file: taskFile("eca-hierarchy") },
   mergeTaskFile: taskFile("eca-hierarchy-merge"),
   timeLimitSeconds: 6 * 3600,
   plan(p) {
     const shardCount = Math.min(MAX_SHARDS, hierarchyUnits(p.maxBlock).length);
-    return Array.from({ length: shardCount }, (_, shardIndex): EcaHierarchyShard => ({
-      maxBlock: p.maxBlock,
-      shardIndex,
-      shardCount,
-    }));
+    return Array.from({ length: shardCount }, (_, shardIndex) => ({ maxBlock: p.maxBlock, shardIndex, shardCount }));
   },
   merge() {
     throw new Error("eca-hierarchy merges in a worker thread (mergeTaskFile)");
   },
-};
+});

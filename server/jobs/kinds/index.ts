@@ -5,13 +5,9 @@ import { ecaHierarchyKind } from "./eca-hierarchy";
 import { reductionSearchKind } from "./reduction-search";
 import { sleepCountKind } from "./sleep-count";
 
-const kinds = new Map<string, RunKindDefinition<never>>(
-  [sleepCountKind, ecaHierarchyKind, attractorsKind, reductionSearchKind].map((k) => [
-    k.kind,
-    k as unknown as RunKindDefinition<never>,
-  ]),
-);
+const all: RunKindDefinition[] = [sleepCountKind, ecaHierarchyKind, attractorsKind, reductionSearchKind];
+const kinds = new Map(all.map((k) => [k.kind, k]));
 
-export function runKind(kind: string): RunKindDefinition<unknown> | undefined {
-  return kinds.get(kind) as RunKindDefinition<unknown> | undefined;
+export function runKind(kind: string): RunKindDefinition | undefined {
+  return kinds.get(kind);
 }

@@ -1,11 +1,8 @@
 import fc from "fast-check";
 import { MessageChannel } from "node:worker_threads";
 import { describe, expect, it } from "vitest";
-import sleepCountTask, {
-  itemValue,
-  type SleepCountPartial,
-  type SleepCountShard,
-} from "../../workers/tasks/sleep-count";
+import type { SleepCountPartial, SleepCountShard } from "@shared/schemas/run-tasks";
+import sleepCountTask, { itemValue } from "../../workers/tasks/sleep-count";
 import { paramsHash } from "../run-lifecycle";
 import { sleepCountKind } from "./sleep-count";
 
@@ -35,7 +32,7 @@ async function runShard(
   });
   port1.close();
   if (!out.ok) throw new Error(out.error.message);
-  return out.partial as SleepCountPartial;
+  return out.partial;
 }
 
 const params = fc.record({
@@ -48,7 +45,7 @@ describe("sleep-count run kind", () => {
   it("plan(params) splits [0, itemCount) into contiguous, non-empty shards covering every item once", () => {
     fc.assert(
       fc.property(params, (p) => {
-        const shards = sleepCountKind.plan(p, null) as SleepCountShard[];
+        const shards = sleepCountKind.plan(p, null);
         expect(shards.length).toBe(Math.min(p.shardCount, p.itemCount));
         expect(shards[0]!.from).toBe(0);
         expect(shards.at(-1)!.to).toBe(p.itemCount);
@@ -64,7 +61,7 @@ describe("sleep-count run kind", () => {
   it("merge(shard results) equals one loop over all items, whatever the shard count", async () => {
     await fc.assert(
       fc.asyncProperty(params, async (p) => {
-        const shards = sleepCountKind.plan(p, null) as SleepCountShard[];
+        const shards = sleepCountKind.plan(p, null);
         const partials = await Promise.all(shards.map((s) => runShard(s, null, null)));
         expect(sleepCountKind.merge(partials, p)).toEqual(reference(0, p.itemCount));
       }),

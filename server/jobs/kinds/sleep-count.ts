@@ -1,13 +1,13 @@
 // "sleep-count": the deterministic, sharded demonstration kind used by tests and the benchmark. It splits
 // [0, itemCount) into contiguous shards; merging adds the shards' counts, so a lost or doubled shard shows.
+import { sleepCountTask, type SleepCountShard } from "@shared/schemas/run-tasks";
 import { SleepCountParams, type SleepCountResult } from "@shared/schemas/runs";
-import type { SleepCountPartial, SleepCountShard } from "../../workers/tasks/sleep-count";
-import { taskFile, type RunKindDefinition } from "../run-kind";
+import { defineRunKind, taskFile } from "../run-kind";
 
-export const sleepCountKind: RunKindDefinition<SleepCountParams> = {
+export const sleepCountKind = defineRunKind({
   kind: "sleep-count",
   params: SleepCountParams,
-  taskFile: taskFile("sleep-count"),
+  task: { ...sleepCountTask, file: taskFile("sleep-count") },
   timeLimitSeconds: 3600,
   plan(p) {
     const shardCount = Math.min(p.shardCount, p.itemCount);
@@ -23,11 +23,11 @@ export const sleepCountKind: RunKindDefinition<SleepCountParams> = {
   },
   merge(partials): SleepCountResult {
     const out: SleepCountResult = { itemCount: 0, sum: 0, oddCount: 0 };
-    for (const p of partials as SleepCountPartial[]) {
+    for (const p of partials) {
       out.itemCount += p.itemCount;
       out.sum += p.sum;
       out.oddCount += p.oddCount;
     }
     return out;
   },
-};
+});

@@ -2,26 +2,19 @@
 // by the independent verifier) in a pool thread, since assembly of large block sizes takes a while.
 import { assembleEcaHierarchy, mergeHierarchyParts } from "@shared/engine/block-emulation";
 import { EngineError } from "@shared/engine/errors";
-import type { HierarchyRunParameters } from "@shared/schemas/automata";
-import { runResultFromEngine } from "../../automata/eca-hierarchy-compute";
-import type { MergeTaskInput } from "../../jobs/run-kind";
-import type { EcaHierarchyPartial } from "./eca-hierarchy";
+import { HierarchyRunParameters } from "@shared/schemas/automata";
+import { EcaHierarchyPartial } from "@shared/schemas/run-tasks";
+import { runResultFromEngine } from "../../services/automata/eca-hierarchy-compute";
+import { mergeTask } from "../task-context";
 
-export default function ecaHierarchyMergeTask(input: MergeTaskInput) {
-  try {
-    const started = performance.now();
-    const partials = input.partials as EcaHierarchyPartial[];
-    const params = input.params as HierarchyRunParameters;
-    const hierarchy = assembleEcaHierarchy(mergeHierarchyParts(partials.map((p) => p.part)));
-    if (hierarchy.maxBlock !== params.maxBlock)
-      throw new EngineError(
-        "BAD_PARTS",
-        `shards computed block size ${hierarchy.maxBlock}, the run asked for ${params.maxBlock}`,
-      );
-    const computeMs = partials.reduce((s, p) => s + p.computeMs, 0) + performance.now() - started;
-    return { ok: true as const, result: runResultFromEngine(hierarchy, computeMs) };
-  } catch (err) {
-    if (err instanceof EngineError) return { ok: false as const, error: { code: err.code, message: err.message } };
-    throw err;
-  }
-}
+export default mergeTask({ params: HierarchyRunParameters, partial: EcaHierarchyPartial }, (partials, params) => {
+  const started = performance.now();
+  const hierarchy = assembleEcaHierarchy(mergeHierarchyParts(partials.map((p) => p.part)));
+  if (hierarchy.maxBlock !== params.maxBlock)
+    throw new EngineError(
+      "BAD_PARTS",
+      `shards computed block size ${hierarchy.maxBlock}, the run asked for ${params.maxBlock}`,
+    );
+  const computeMs = partials.reduce((s, p) => s + p.computeMs, 0) + performance.now() - started;
+  return runResultFromEngine(hierarchy, computeMs);
+});

@@ -15,7 +15,6 @@ import {
   type AttractorCensus,
   type AttractorMethod,
   type CensusAttractor,
-  type CensusScope,
 } from "./attractor-census";
 
 export const METHOD = {

@@ -1,6 +1,6 @@
 // Model page: one revision of a model with its wiring diagram, synchronous attractors (table, basin chart,
 // phenotype labels), trajectory raster, perturbation comparison, downloads, rule editing and revision history.
-import { useEffect, useState } from "react";
+import { useState } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { Alert } from "@/components/ui/alert";
 import { useProjectOutlet } from "./project-layout";
@@ -119,10 +119,14 @@ function EditRules({
 }) {
   const save = useCreateRevision(projectId, modelId);
   const [, setSearch] = useSearchParams();
-  const [text, setText] = useState(baseText);
+  // When the base text changes (another revision is shown), the editor starts again from it: the state is adjusted
+  // while rendering, as React recommends, rather than in an effect after a render with the stale text.
+  const [draft, setDraft] = useState({ base: baseText, text: baseText });
+  if (draft.base !== baseText) setDraft({ base: baseText, text: baseText });
+  const text = draft.base === baseText ? draft.text : baseText;
+  const setText = (next: string) => setDraft({ base: baseText, text: next });
   const [message, setMessage] = useState("");
   const [submitted, setSubmitted] = useState<string | null>(null);
-  useEffect(() => setText(baseText), [baseText]);
   const serverErrors = submitted === text ? issuesOf(save.error) : [];
   return (
     <form
@@ -173,9 +177,12 @@ export function ModelDetailRoute() {
   const revision = detail.data?.revision.revision ?? 0;
   const structure = useStructure(projectId, modelId, revision, revision > 0);
   const [markers, setMarkers] = useState<string[]>([]);
-  const [selected, setSelected] = useState<number | null>(null);
+  // Another revision starts with no attractor selected (adjusted while rendering, not in an effect).
+  const [selection, setSelection] = useState<{ revision: number; index: number | null }>({ revision, index: null });
+  if (selection.revision !== revision) setSelection({ revision, index: null });
+  const selected = selection.revision === revision ? selection.index : null;
+  const setSelected = (index: number | null) => setSelection({ revision, index });
   const attractorsForState = useAttractors(projectId, modelId, revision, markers, revision > 0);
-  useEffect(() => setSelected(null), [revision]);
 
   if (detail.isPending) return <p className="text-sm text-slate-500">Loading model…</p>;
   if (detail.error) return <Alert>{detail.error.message}</Alert>;

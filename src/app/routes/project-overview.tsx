@@ -6,7 +6,7 @@ import { can } from "@shared/types/roles";
 import { useModelList } from "@/features/models/api/list-models";
 import { ProjectSettings } from "@/features/projects/components/project-settings";
 import { useReductions } from "@/features/reductions/api/list-reductions";
-import { useRunList } from "@/features/runs/api/list-runs";
+import { useRunList } from "@/features/runs";
 import { useProjectOutlet } from "./project-layout";
 
 function Stat({ to, value, label, testId }: { to: string; value: ReactNode; label: string; testId: string }) {

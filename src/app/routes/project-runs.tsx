@@ -2,10 +2,7 @@
 import { useNavigate, useParams, useSearchParams } from "react-router-dom";
 import { can } from "@shared/types/roles";
 import { Alert } from "@/components/ui/alert";
-import { useRunList } from "@/features/runs/api/list-runs";
-import { RunFilters } from "@/features/runs/components/run-filters";
-import { RunsTable } from "@/features/runs/components/runs-table";
-import { StartRunForm } from "@/features/runs/components/start-run-form";
+import { RunFilters, RunsTable, StartRunForm, useRunList } from "@/features/runs";
 import { useProjectOutlet } from "./project-layout";
 
 export function ProjectRunsRoute() {

@@ -2,10 +2,7 @@
 import { Link, useParams } from "react-router-dom";
 import { can } from "@shared/types/roles";
 import { Alert } from "@/components/ui/alert";
-import { useRun } from "@/features/runs/api/get-run";
-import { RunActions } from "@/features/runs/components/run-actions";
-import { RunProgress } from "@/features/runs/components/run-progress";
-import { RunStateBadge } from "@/features/runs/components/run-state-badge";
+import { RunActions, RunProgress, RunStateBadge, useRun } from "@/features/runs";
 import { ApiError } from "@/lib/api-client";
 import { useProjectOutlet } from "./project-layout";
 

@@ -139,8 +139,12 @@ function Behaviours({
   const registerEvents = useRegisterEvents<NodeAttrs, EdgeAttrs>();
   const setSettings = useSetSettings<NodeAttrs, EdgeAttrs>();
   const loops = useMemo(() => scene.edges.filter(isSelfLoop), [scene]);
+  // The loop layer draws on sigma's render events, outside React: it reads the latest focus and loops from a ref
+  // that this effect keeps current (it runs before the settings effect below, whose change triggers the redraw).
   const state = useRef({ focus, loops });
-  state.current = { focus, loops };
+  useEffect(() => {
+    state.current = { focus, loops };
+  }, [focus, loops]);
 
   useEffect(() => {
     registerEvents({

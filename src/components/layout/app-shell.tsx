@@ -1,8 +1,7 @@
 // The frame every screen sits in: a skip link (the first thing Tab reaches), header with product name, navigation,
-// the account slot, and the footer status.
+// the account slot, and the footer status. It knows no feature: the router fills the slots.
 import { useState, type ReactNode } from "react";
 import { NavLink, Outlet } from "react-router-dom";
-import { HealthBadge } from "./health-badge";
 
 export interface NavItem {
   to: string;
@@ -19,7 +18,14 @@ function navClass({ isActive }: { isActive: boolean }) {
   return `rounded-md px-3 py-2 text-sm font-medium ${isActive ? "bg-brand-700 text-white" : "text-slate-200 hover:bg-brand-800 hover:text-white"}`;
 }
 
-export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: ReactNode; notificationSlot?: ReactNode }) {
+export interface AppShellProps {
+  accountSlot?: ReactNode;
+  notificationSlot?: ReactNode;
+  /** Shown at the right of the footer. */
+  statusSlot?: ReactNode;
+}
+
+export function AppShell({ accountSlot, notificationSlot, statusSlot }: AppShellProps) {
   const [isMenuOpen, setMenuOpen] = useState(false);
   return (
     <div className="flex min-h-screen flex-col">
@@ -85,7 +91,7 @@ export function AppShell({ accountSlot, notificationSlot }: { accountSlot?: Reac
             Reductions are statements about models, not about cells. Models are research aids, not clinical or safety
             advice.
           </span>
-          <HealthBadge />
+          {statusSlot}
         </div>
       </footer>
     </div>

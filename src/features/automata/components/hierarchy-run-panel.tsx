@@ -2,26 +2,23 @@
 // progress, and reload the hierarchy once the run has stored it.
 import { useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
-import type { HierarchyParameters } from "@shared/schemas/automata";
-import { useHierarchyRuns } from "../api/get-hierarchy-runs";
-import { useRun } from "../api/get-run";
+import { HierarchyRunParameters, type HierarchyParameters } from "@shared/schemas/automata";
+import { RunProgress, useRun, useRunList, useStartRun } from "@/features/runs";
 import { useRunnableProjects } from "../api/get-runnable-projects";
 import { automataKeys } from "../api/keys";
-import { useStartHierarchyRun } from "../api/start-hierarchy-run";
-import { RunProgress } from "./run-progress";
 
 export function HierarchyRunPanel({ params }: { params: HierarchyParameters }) {
   const projects = useRunnableProjects(true);
-  const start = useStartHierarchyRun();
+  const start = useStartRun();
   const queryClient = useQueryClient();
   const [projectId, setProjectId] = useState<string>("");
   const [started, setStarted] = useState<{ projectId: string; runId: string } | null>(null);
   const chosen = projectId || projects.data?.[0]?.id || "";
   const startedRun = useRun(started?.projectId ?? null, started?.runId ?? null);
   // a run for these parameters started earlier (another visit, another member) is followed instead of a new one
-  const earlier = useHierarchyRuns(started ? null : chosen);
+  const earlier = useRunList(started ? null : chosen, { kind: "eca-hierarchy" });
   const matching = earlier.data?.find(
-    (r) => (r.params as { maxBlock?: number } | null)?.maxBlock === params.maxBlock && r.state !== "cancelled",
+    (r) => HierarchyRunParameters.safeParse(r.params).data?.maxBlock === params.maxBlock && r.state !== "cancelled",
   );
   const run = started ? startedRun.data : matching;
 
@@ -54,8 +51,13 @@ export function HierarchyRunPanel({ params }: { params: HierarchyParameters }) {
         className="flex flex-wrap items-end gap-3"
         onSubmit={(e) => {
           e.preventDefault();
+          const body = {
+            kind: "eca-hierarchy" as const,
+            modelRevisionId: null,
+            params: { maxBlock: params.maxBlock, timeMode: params.timeMode, radius: 1 as const },
+          };
           start.mutate(
-            { projectId: chosen, params: { maxBlock: params.maxBlock, timeMode: params.timeMode, radius: 1 } },
+            { projectId: chosen, body },
             { onSuccess: (r) => setStarted({ projectId: chosen, runId: r.id }) },
           );
         }}
@@ -87,7 +89,15 @@ export function HierarchyRunPanel({ params }: { params: HierarchyParameters }) {
           {start.error.message}
         </p>
       )}
-      {run && <RunProgress run={run} />}
+      {run && (
+        <div className="space-y-1" data-testid="hierarchy-run-progress" data-state={run.state}>
+          <RunProgress run={run} label="Hierarchy run progress" />
+          {run.state === "succeeded" && (
+            <p className="text-sm text-brand-700">Done: the hierarchy is stored and shown below once reloaded.</p>
+          )}
+          {run.error && <p className="text-sm text-red-700">{run.error.message}</p>}
+        </div>
+      )}
     </div>
   );
 }

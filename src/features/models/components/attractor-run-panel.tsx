@@ -3,11 +3,8 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
-import { ProgressBar } from "@/components/ui/progress-bar";
-import { useCancelRun } from "../api/cancel-run";
-import { useRun } from "../api/get-run";
+import { RunProgress, useCancelRun, useRun, useStartRun } from "@/features/runs";
 import { modelKeys } from "../api/keys";
-import { useStartAttractorRun } from "../api/start-attractor-run";
 
 export interface AttractorRunPanelProps {
   projectId: string;
@@ -27,8 +24,8 @@ export function AttractorRunPanel({
   canStart,
 }: AttractorRunPanelProps) {
   const qc = useQueryClient();
-  const start = useStartAttractorRun(projectId);
-  const cancel = useCancelRun(projectId);
+  const start = useStartRun();
+  const cancel = useCancelRun();
   const [runId, setRunId] = useState<string | null>(null);
   const run = useRun(projectId, runId);
   const state = run.data?.state;
@@ -37,6 +34,12 @@ export function AttractorRunPanel({
     if (state === "succeeded")
       void qc.invalidateQueries({ queryKey: modelKeys.revision(projectId, modelId, revision) });
   }, [state, qc, projectId, modelId, revision]);
+
+  const startRun = () =>
+    start.mutate(
+      { projectId, body: { kind: "attractors", modelRevisionId: revisionId, params: {} } },
+      { onSuccess: (r) => setRunId(r.id) },
+    );
 
   return (
     <div
@@ -48,11 +51,7 @@ export function AttractorRunPanel({
         runs in the background; the result is stored with revision {revision} and reused afterwards.
       </p>
       {!runId && canStart && (
-        <Button
-          data-testid="start-attractor-run"
-          disabled={start.isPending}
-          onClick={() => start.mutate(revisionId, { onSuccess: (r) => setRunId(r.id) })}
-        >
+        <Button data-testid="start-attractor-run" disabled={start.isPending} onClick={startRun}>
           Compute attractors
         </Button>
       )}
@@ -63,25 +62,18 @@ export function AttractorRunPanel({
         </p>
       )}
       {run.data && (state === "queued" || state === "running") && (
-        <div className="space-y-1">
-          <ProgressBar fraction={run.data.progressFraction} label="Attractor analysis progress" />
-          <div className="flex items-center justify-between text-xs text-slate-600">
-            <span>
-              {state === "queued"
-                ? "Waiting for a worker…"
-                : `${run.data.progressPhase} · ${Math.round(run.data.progressFraction * 100)}%`}
-            </span>
-            {canStart && (
-              <Button
-                variant="secondary"
-                size="sm"
-                disabled={cancel.isPending}
-                onClick={() => cancel.mutate(run.data!.id)}
-              >
-                Cancel
-              </Button>
-            )}
-          </div>
+        <div className="space-y-2">
+          <RunProgress run={run.data} label="Attractor analysis progress" />
+          {canStart && (
+            <Button
+              variant="secondary"
+              size="sm"
+              disabled={cancel.isPending}
+              onClick={() => run.data && cancel.mutate(run.data)}
+            >
+              Cancel
+            </Button>
+          )}
         </div>
       )}
       {(state === "failed" || state === "cancelled") && (

@@ -1,18 +1,13 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { Run } from "@shared/schemas/runs";
 import { apiRequest } from "@/lib/api-client";
-import { runKeys, runPath } from "./keys";
+import { runPath } from "./keys";
+import { storeRun } from "./run-cache";
 
-export const cancelRun = (projectId: string, runId: string) =>
-  apiRequest(`${runPath(projectId, runId)}/cancel`, Run, { method: "POST" });
+export const cancelRun = (run: Pick<Run, "id" | "projectId">) =>
+  apiRequest(`${runPath(run.projectId, run.id)}/cancel`, Run, { method: "POST" });
 
-export function useCancelRun(projectId: string, runId: string) {
+export function useCancelRun() {
   const qc = useQueryClient();
-  return useMutation({
-    mutationFn: () => cancelRun(projectId, runId),
-    onSuccess: (run) => {
-      qc.setQueryData(runKeys.detail(projectId, runId), run);
-      return qc.invalidateQueries({ queryKey: [...runKeys.project(projectId), "list"] });
-    },
-  });
+  return useMutation({ mutationFn: cancelRun, onSuccess: (run) => storeRun(qc, run) });
 }

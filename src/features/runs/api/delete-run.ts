@@ -1,18 +1,14 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
+import type { Run } from "@shared/schemas/runs";
 import { apiRequest } from "@/lib/api-client";
-import { runKeys, runPath } from "./keys";
+import { runPath } from "./keys";
+import { forgetRun } from "./run-cache";
 
-export const deleteRun = (projectId: string, runId: string) =>
-  apiRequest(runPath(projectId, runId), z.unknown(), { method: "DELETE" });
+export const deleteRun = (run: Pick<Run, "id" | "projectId">) =>
+  apiRequest(runPath(run.projectId, run.id), z.unknown(), { method: "DELETE" });
 
-export function useDeleteRun(projectId: string, runId: string) {
+export function useDeleteRun() {
   const qc = useQueryClient();
-  return useMutation({
-    mutationFn: () => deleteRun(projectId, runId),
-    onSuccess: () => {
-      qc.removeQueries({ queryKey: runKeys.detail(projectId, runId) });
-      return qc.invalidateQueries({ queryKey: [...runKeys.project(projectId), "list"] });
-    },
-  });
+  return useMutation({ mutationFn: deleteRun, onSuccess: (_answer, run) => forgetRun(qc, run) });
 }

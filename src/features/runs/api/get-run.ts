@@ -5,7 +5,7 @@ import { runKeys, runPath } from "./keys";
 
 export const getRun = (projectId: string, runId: string) => apiRequest(runPath(projectId, runId), Run);
 
-/** Polls once a second while the run is live; stops as soon as it has finished. */
+/** Polls once a second while the run is queued or running (or not loaded yet); stops once it has finished. */
 export const runQuery = (projectId: string, runId: string) =>
   queryOptions({
     queryKey: runKeys.detail(projectId, runId),
@@ -13,6 +13,7 @@ export const runQuery = (projectId: string, runId: string) =>
     refetchInterval: (q) => (q.state.data && isRunFinished(q.state.data.state) ? false : 1000),
   });
 
-export function useRun(projectId: string, runId: string) {
-  return useQuery(runQuery(projectId, runId));
+/** One run; nothing is fetched while either id is null (no run started yet). */
+export function useRun(projectId: string | null, runId: string | null) {
+  return useQuery({ ...runQuery(projectId ?? "", runId ?? ""), enabled: projectId !== null && runId !== null });
 }

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { RunList, isRunFinished, type Run } from "@shared/schemas/runs";
+import { RunList, isRunFinished } from "@shared/schemas/runs";
 import { apiRequest } from "@/lib/api-client";
 import { runKeys, runsPath, type RunFilter } from "./keys";
 
@@ -16,9 +16,10 @@ export const runListQuery = (projectId: string, filter: RunFilter) =>
   queryOptions({
     queryKey: runKeys.list(projectId, filter),
     queryFn: () => listRuns(projectId, filter),
-    refetchInterval: (q) => ((q.state.data as Run[] | undefined)?.some((r) => !isRunFinished(r.state)) ? 2000 : false),
+    refetchInterval: (q) => (q.state.data?.some((r) => !isRunFinished(r.state)) ? 2000 : false),
   });
 
-export function useRunList(projectId: string, filter: RunFilter) {
-  return useQuery(runListQuery(projectId, filter));
+/** A project's runs; nothing is fetched while the project is not chosen (null or ""). */
+export function useRunList(projectId: string | null, filter: RunFilter = {}) {
+  return useQuery({ ...runListQuery(projectId ?? "", filter), enabled: Boolean(projectId) });
 }

@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { z } from "zod";
+import { MarkNotificationsReadResult, type MarkNotificationsReadBody } from "@shared/schemas/runs";
+import type { z } from "zod";
 import { apiRequest } from "@/lib/api-client";
 import { runKeys } from "./keys";
 
-export const markNotificationsRead = (body: { ids?: string[]; all?: boolean }) =>
-  apiRequest("/notifications/read", z.object({ marked: z.number() }), { method: "POST", body });
+export const markNotificationsRead = (body: z.input<typeof MarkNotificationsReadBody>) =>
+  apiRequest("/notifications/read", MarkNotificationsReadResult, { method: "POST", body });
 
 export function useMarkNotificationsRead() {
   const qc = useQueryClient();

@@ -1,18 +1,13 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { Run } from "@shared/schemas/runs";
 import { apiRequest } from "@/lib/api-client";
-import { runKeys, runPath } from "./keys";
+import { runPath } from "./keys";
+import { storeRun } from "./run-cache";
 
-export const retryRun = (projectId: string, runId: string) =>
-  apiRequest(`${runPath(projectId, runId)}/retry`, Run, { method: "POST" });
+export const retryRun = (run: Pick<Run, "id" | "projectId">) =>
+  apiRequest(`${runPath(run.projectId, run.id)}/retry`, Run, { method: "POST" });
 
-export function useRetryRun(projectId: string, runId: string) {
+export function useRetryRun() {
   const qc = useQueryClient();
-  return useMutation({
-    mutationFn: () => retryRun(projectId, runId),
-    onSuccess: (run) => {
-      qc.setQueryData(runKeys.detail(projectId, runId), run);
-      return qc.invalidateQueries({ queryKey: [...runKeys.project(projectId), "list"] });
-    },
-  });
+  return useMutation({ mutationFn: retryRun, onSuccess: (run) => storeRun(qc, run) });
 }

@@ -9,13 +9,13 @@ import { useRetryRun } from "../api/retry-run";
 
 export function RunActions({ run }: { run: Run }) {
   const navigate = useNavigate();
-  const cancel = useCancelRun(run.projectId, run.id);
-  const retry = useRetryRun(run.projectId, run.id);
-  const remove = useDeleteRun(run.projectId, run.id);
+  const cancel = useCancelRun();
+  const retry = useRetryRun();
+  const remove = useDeleteRun();
   const error = cancel.error ?? retry.error ?? remove.error;
   const onDelete = () => {
     if (!window.confirm("Delete this run and its stored result?")) return;
-    remove.mutate(undefined, { onSuccess: () => navigate(`/projects/${run.projectId}/runs`) });
+    remove.mutate(run, { onSuccess: () => navigate(`/projects/${run.projectId}/runs`) });
   };
   return (
     <div className="space-y-2">
@@ -23,7 +23,7 @@ export function RunActions({ run }: { run: Run }) {
         {!isRunFinished(run.state) && (
           <Button
             variant="secondary"
-            onClick={() => cancel.mutate()}
+            onClick={() => cancel.mutate(run)}
             disabled={cancel.isPending}
             data-testid="cancel-run"
           >
@@ -31,7 +31,7 @@ export function RunActions({ run }: { run: Run }) {
           </Button>
         )}
         {(run.state === "failed" || run.state === "cancelled") && (
-          <Button onClick={() => retry.mutate()} disabled={retry.isPending} data-testid="retry-run">
+          <Button onClick={() => retry.mutate(run)} disabled={retry.isPending} data-testid="retry-run">
             Retry
           </Button>
         )}

@@ -1,4 +1,5 @@
-// The live part of a run page: the bar, the phase, and elapsed / remaining time ticking every second between polls.
+// The progress of one run wherever a run is shown (its page, a model's background analysis, the automaton
+// hierarchy): the bar, the phase, and elapsed / remaining time ticking every second between polls.
 import { useEffect, useState } from "react";
 import { isRunFinished, type Run } from "@shared/schemas/runs";
 import { ProgressBar } from "@/components/ui/progress-bar";
@@ -14,13 +15,13 @@ function useNow(isLive: boolean): number {
   return now;
 }
 
-export function RunProgress({ run }: { run: Run }) {
+export function RunProgress({ run, label = "Run progress" }: { run: Run; label?: string }) {
   const isLive = !isRunFinished(run.state);
   const now = useNow(isLive);
   const { elapsedMs, remainingMs } = timeEstimate(run, now);
   const tone = run.state === "failed" ? "danger" : run.state === "cancelled" ? "muted" : "brand";
   return (
-    <div className="space-y-2" data-testid="run-progress" data-fraction={run.progressFraction}>
+    <div className="space-y-2" data-testid="run-progress" data-state={run.state} data-fraction={run.progressFraction}>
       <div className="flex flex-wrap items-baseline justify-between gap-2 text-sm">
         <span className="font-medium text-slate-800">
           {Math.round(run.progressFraction * 100)}%{" "}
@@ -33,7 +34,7 @@ export function RunProgress({ run }: { run: Run }) {
             (remainingMs === null ? " · estimating time left…" : ` · about ${formatDuration(remainingMs)} left`)}
         </span>
       </div>
-      <ProgressBar fraction={run.progressFraction} label="Run progress" tone={tone} />
+      <ProgressBar fraction={run.progressFraction} label={label} tone={tone} />
       <p className="text-xs text-slate-500">
         {run.shardsDone} of {run.shardCount} shard{run.shardCount === 1 ? "" : "s"} done
       </p>

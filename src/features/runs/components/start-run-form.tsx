@@ -16,7 +16,7 @@ export function StartRunForm({
   projectId: string;
   onStarted(runId: string, reused: boolean): void;
 }) {
-  const start = useStartRun(projectId);
+  const start = useStartRun();
   const [kind, setKind] = useState<"sleep-count" | "eca-hierarchy" | "attractors">("sleep-count");
   const [maxBlock, setMaxBlock] = useState(12);
   const [itemCount, setItemCount] = useState(2000);
@@ -32,7 +32,7 @@ export function StartRunForm({
         : kind === "eca-hierarchy"
           ? { kind, params: { maxBlock, timeMode: "block" as const, radius: 1 as const } }
           : { kind, params: { ruleText } };
-    start.mutate(body, { onSuccess: (run) => onStarted(run.id, run.reused) });
+    start.mutate({ projectId, body }, { onSuccess: (run) => onStarted(run.id, run.reused) });
   };
 
   return (

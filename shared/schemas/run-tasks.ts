@@ -1,0 +1,124 @@
+// What each run kind's worker tasks receive and hand back (server/workers/tasks): the input a shard was planned with,
+// the partial result it returns or checkpoints, and the cursor it resumes from. Shards cross the database as JSON, so
+// the worker parses every input and stored partial with these schemas before the engine sees it.
+//
+// Where a partial is the engine's own result (a search's units, the automaton hierarchy's units), the engine's type
+// is the contract: the schema checks its outline and leaves the fields to the engine functions that read them, so the
+// engine's shapes are not written twice.
+import { z } from "zod";
+import type { HierarchyPart } from "../engine/block-emulation";
+import type { CertificateNetwork } from "../engine/certificates";
+import type {
+  BlockEmulationWitness,
+  DiscoverShardResult,
+  EmulationSearchResult,
+  TargetFlag,
+} from "../engine/emulation";
+import { Certificate, ReductionSearchParams } from "./reductions";
+
+/** A task's resume point: the position in its shard's units (or items) where the next attempt continues. */
+export const ShardCursor = z.number().int().min(0);
+
+/** An engine result kept as JSON: an object with the named fields, typed by the engine. */
+function engineResult<T>(what: string, fields: readonly string[]) {
+  return z.custom<T>(
+    (v) => typeof v === "object" && v !== null && fields.every((f) => f in v),
+    `must be ${what} (an object with ${fields.join(", ")})`,
+  );
+}
+
+/** The schemas of one task: what a shard is planned as, and what it returns. */
+export interface ShardTaskSchemas<I extends z.ZodType = z.ZodType, P extends z.ZodType = z.ZodType> {
+  input: I;
+  partial: P;
+}
+
+// --- sleep-count: a deterministic demonstration kind for tests and the run benchmark ---
+
+export const SleepCountShard = z.object({
+  from: z.number().int().min(0),
+  to: z.number().int().min(0),
+  delayMsPerItem: z.number().min(0),
+});
+export type SleepCountShard = z.infer<typeof SleepCountShard>;
+export const SleepCountPartial = z.object({ itemCount: z.number(), sum: z.number(), oddCount: z.number() });
+export type SleepCountPartial = z.infer<typeof SleepCountPartial>;
+export const sleepCountTask = { input: SleepCountShard, partial: SleepCountPartial } satisfies ShardTaskSchemas;
+
+// --- attractors: exact synchronous attractors of one network, in one shard ---
+
+export const AttractorsShard = z.object({ ruleText: z.string().min(1) });
+export type AttractorsShard = z.infer<typeof AttractorsShard>;
+/** Also the run's result, which the models API serves as the revision's attractors once the run has succeeded. */
+export const AttractorsResult = z.object({
+  nodeNames: z.array(z.string()),
+  stateCount: z.number().int(),
+  maxTransient: z.number().int(),
+  meanTransient: z.number(),
+  attractors: z.array(z.object({ length: z.number().int(), basin: z.number().int(), states: z.array(z.string()) })),
+});
+export type AttractorsResult = z.infer<typeof AttractorsResult>;
+export const attractorsTask = { input: AttractorsShard, partial: AttractorsResult } satisfies ShardTaskSchemas;
+
+// --- eca-hierarchy: a share of the automaton hierarchy's search units ---
+
+export const EcaHierarchyShard = z.object({
+  maxBlock: z.number().int().min(1),
+  shardIndex: z.number().int().min(0),
+  shardCount: z.number().int().min(1),
+});
+export type EcaHierarchyShard = z.infer<typeof EcaHierarchyShard>;
+export const EcaHierarchyPartial = z.object({
+  part: engineResult<HierarchyPart>("a hierarchy part", ["maxBlock", "units"]),
+  /** Compute time of the shard so far, summed over its attempts. */
+  computeMs: z.number(),
+});
+export type EcaHierarchyPartial = z.infer<typeof EcaHierarchyPartial>;
+export const ecaHierarchyTask = { input: EcaHierarchyShard, partial: EcaHierarchyPartial } satisfies ShardTaskSchemas;
+
+// --- reduction-search: one shard of a given-target, discover or coarse-graining search ---
+
+export const SearchShard = z.object({
+  /** A range of the engine's search units, or null for the notions that do not split. */
+  range: z.object({ start: z.number().int().min(0), end: z.number().int().min(0) }).nullable(),
+});
+export type SearchShard = z.infer<typeof SearchShard>;
+export const ReductionSearchShard = z.object({ params: ReductionSearchParams, shard: SearchShard });
+export type ReductionSearchShard = z.infer<typeof ReductionSearchShard>;
+
+/** A discovered target as a shard stores it: the network in certificate form, so that it survives JSON. */
+export interface DiscoverPartialTarget {
+  key: string;
+  target: CertificateNetwork;
+  witness: BlockEmulationWitness;
+  times: number[];
+  encodings: number;
+  flags: TargetFlag[];
+  trivial: boolean;
+  interactions: number;
+  firstUnit: number;
+}
+type DiscoverPartialShard = Omit<DiscoverShardResult, "targets"> & { targets: DiscoverPartialTarget[] };
+
+export const ReductionSearchPartial = z.discriminatedUnion("mode", [
+  z.object({
+    mode: z.literal("given-target"),
+    emulation: engineResult<EmulationSearchResult>("a block-emulation search result", ["found", "witness", "range"]),
+  }),
+  z.object({ mode: z.literal("embedding"), time: z.number().int(), map: z.array(z.number().int()).nullable() }),
+  z.object({
+    mode: z.literal("discover"),
+    shard: engineResult<DiscoverPartialShard>("a discover shard result", ["range", "targets"]),
+  }),
+  z.object({
+    mode: z.literal("coarse-grain"),
+    certificate: Certificate.nullable(),
+    groups: z.number().int(),
+    closes: z.boolean(),
+  }),
+]);
+export type ReductionSearchPartial = z.infer<typeof ReductionSearchPartial>;
+export const reductionSearchTask = {
+  input: ReductionSearchShard,
+  partial: ReductionSearchPartial,
+} satisfies ShardTaskSchemas;
