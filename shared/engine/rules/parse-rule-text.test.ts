@@ -20,39 +20,32 @@ describe("parseRuleText", () => {
     expect(readRuleText(text)).toEqual({
       nodes: [
         { name: "A", rule: { kind: "not", arg: v("B") } },
-        { name: "B", rule: { kind: "and", left: { kind: "not", arg: v("A") }, right: v("C") } },
+        { name: "B", rule: { kind: "and", args: [{ kind: "not", arg: v("A") }, v("C")] } },
         { name: "C", rule: v("C") },
       ],
     });
   });
 
   it("readRuleText binds not tighter than and, and tighter than xor, and xor tighter than or", () => {
-    expect(rhs("A | B & C")).toEqual({ kind: "or", left: v("A"), right: { kind: "and", left: v("B"), right: v("C") } });
-    expect(rhs("A ^ B | C")).toEqual({ kind: "or", left: { kind: "xor", left: v("A"), right: v("B") }, right: v("C") });
-    expect(rhs("A & B ^ C")).toEqual({
-      kind: "xor",
-      left: { kind: "and", left: v("A"), right: v("B") },
-      right: v("C"),
-    });
-    expect(rhs("!A & B")).toEqual({ kind: "and", left: { kind: "not", arg: v("A") }, right: v("B") });
+    expect(rhs("A | B & C")).toEqual({ kind: "or", args: [v("A"), { kind: "and", args: [v("B"), v("C")] }] });
+    expect(rhs("A ^ B | C")).toEqual({ kind: "or", args: [{ kind: "xor", args: [v("A"), v("B")] }, v("C")] });
+    expect(rhs("A & B ^ C")).toEqual({ kind: "xor", args: [{ kind: "and", args: [v("A"), v("B")] }, v("C")] });
+    expect(rhs("!A & B")).toEqual({ kind: "and", args: [{ kind: "not", arg: v("A") }, v("B")] });
     expect(rhs("A xor b or C".replace("b", "B"))).toEqual(rhs("(A ^ B) | C"));
   });
 
-  it("readRuleText groups equal operators from the left and accepts the words in any case", () => {
-    expect(rhs("A & B & C")).toEqual({
-      kind: "and",
-      left: { kind: "and", left: v("A"), right: v("B") },
-      right: v("C"),
-    });
-    expect(rhs("A Or NOT b".replace("b", "B"))).toEqual({
-      kind: "or",
-      left: v("A"),
-      right: { kind: "not", arg: v("B") },
-    });
+  it("readRuleText keeps a chain of one operator as one node and a parenthesised chain as its own", () => {
+    expect(rhs("A & B & C")).toEqual({ kind: "and", args: [v("A"), v("B"), v("C")] });
+    expect(rhs("(A & B) & C")).toEqual({ kind: "and", args: [{ kind: "and", args: [v("A"), v("B")] }, v("C")] });
+    expect(rhs("A & (B & C)")).toEqual({ kind: "and", args: [v("A"), { kind: "and", args: [v("B"), v("C")] }] });
+    expect(rhs("((A))")).toEqual(v("A"));
+    expect(rhs("A Or NOT b".replace("b", "B"))).toEqual({ kind: "or", args: [v("A"), { kind: "not", arg: v("B") }] });
     expect(rhs("1 & (0 | A)")).toEqual({
       kind: "and",
-      left: { kind: "const", value: 1 },
-      right: { kind: "or", left: { kind: "const", value: 0 }, right: v("A") },
+      args: [
+        { kind: "const", value: 1 },
+        { kind: "or", args: [{ kind: "const", value: 0 }, v("A")] },
+      ],
     });
   });
 

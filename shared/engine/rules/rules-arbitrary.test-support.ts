@@ -17,8 +17,11 @@ export function exprArb(names: readonly string[], depth = 4): fc.Arbitrary<Expr>
     {
       weight: 3,
       arbitrary: fc
-        .tuple(fc.constantFrom("and", "or", "xor") as fc.Arbitrary<"and" | "or" | "xor">, sub, sub)
-        .map(([kind, left, right]): Expr => ({ kind, left, right })),
+        .tuple(
+          fc.constantFrom("and", "or", "xor") as fc.Arbitrary<"and" | "or" | "xor">,
+          fc.array(sub, { minLength: 2, maxLength: 4 }),
+        )
+        .map(([kind, args]): Expr => ({ kind, args })),
     },
   );
 }

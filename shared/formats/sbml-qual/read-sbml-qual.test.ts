@@ -129,7 +129,7 @@ describe("readSbmlQual", () => {
 
   it("readSbmlQual refuses a multi-valued species and names it", () => {
     expect(() => readSbmlQual(fixture("multivalued.libsbml.sbml"))).toThrow(
-      /species Kinase has maxLevel 2; Emulant reads Boolean models only \(maxLevel 1\), so multi-valued species must be made Boolean first \(line 9\)$/,
+      /species Kinase has maxLevel 2; Emulant reads Boolean models only \(maxLevel 1\), so multi-valued species must be made Boolean first \(line 9, column 7\)$/,
     );
   });
 
@@ -201,7 +201,7 @@ describe("readSbmlQual", () => {
     const species = sp("A") + sp("B");
     expect(() =>
       readSbmlQual(wrap(species, tr("tB", "B", term(1, `<apply><plus/>${ci("A")}${cn(1)}</apply>`)))),
-    ).toThrow(/transition tB: MathML <plus> is not part of the Boolean subset Emulant reads \(line 11\)$/);
+    ).toThrow(/transition tB: MathML <plus> is not part of the Boolean subset Emulant reads \(line 11, column 165\)$/);
     expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, rel("eq", ci("Z"), cn(1))))))).toThrow(
       /transition tB: <ci>Z<\/ci> names neither/,
     );
