@@ -28,8 +28,14 @@ export function printExpr(e: Expr): string {
         return { text: inner.precedence < precedence ? `!(${inner.text})` : `!${inner.text}`, precedence };
       }
       default: {
-        const parts = args.map((o) => (o.precedence <= precedence ? `(${o.text})` : o.text));
-        return { text: parts.join(SYMBOL[x.kind]), precedence };
+        // Concatenation, not join: join copies each operand's text into a new flat string, which made a tree
+        // nested 100,000 levels deep print in quadratic time; concatenation builds ropes and copies once at the end.
+        let text = "";
+        args.forEach((o, i) => {
+          const part = o.precedence <= precedence ? `(${o.text})` : o.text;
+          text = i === 0 ? part : text + SYMBOL[x.kind] + part;
+        });
+        return { text, precedence };
       }
     }
   }).text;

@@ -2,8 +2,11 @@
 // reorder or hide text are written as \uXXXX escapes (the JavaScript and JSON notation), and long text is cut, so a
 // message can neither garble a terminal or a page nor grow with the input.
 
-/** Code points shown escaped: C0 and C1 controls, DEL, the line and paragraph separators, bidirectional controls. */
-const INVISIBLE = /[\u0000-\u001f\u007f-\u009f\u00ad\u061c\u200b-\u200f\u2028-\u202e\u2060-\u2069\ufeff\ufff9-\ufffb]/;
+/**
+ * Code points shown escaped: controls (C0, DEL, C1), format characters (Unicode category Cf: the bidirectional
+ * controls, zero-width characters, the byte order mark, tag characters) and the line and paragraph separators.
+ */
+const INVISIBLE = /^[\p{Cc}\p{Cf}\u2028\u2029]$/u;
 
 const hex4 = (code: number) => `\\u${code.toString(16).toUpperCase().padStart(4, "0")}`;
 
@@ -20,7 +23,8 @@ export function showInput(text: string, maxChars = 40): string {
     if (code >= 0xd800 && code <= 0xdbff) {
       const next = text.charCodeAt(i + 1);
       if (next >= 0xdc00 && next <= 0xdfff) {
-        out += text[i]! + text[i + 1]!;
+        const pair = text[i]! + text[i + 1]!;
+        out += INVISIBLE.test(pair) ? hex4(code) + hex4(next) : pair;
         i++;
       } else out += hex4(code);
     } else if (code >= 0xdc00 && code <= 0xdfff) out += hex4(code);

@@ -31,14 +31,12 @@ export interface Token {
 
 export type TokenizeResult = { ok: true; tokens: Token[] } | { ok: false; column: number; reason: string };
 
-/** A lexical error: where in the line and why. */
-export class TokenError extends Error {
+/** A lexical error: where in the line and why (not an Error, so throwing it captures no stack trace). */
+export class TokenError {
   constructor(
     readonly column: number,
     readonly reason: string,
-  ) {
-    super(reason);
-  }
+  ) {}
 }
 
 // Maps, not object literals: a word such as "constructor" must not find an inherited property.

@@ -249,7 +249,9 @@ function checkTables(tables: readonly Table[], errors: ErrorList): Map<string, n
       continue;
     }
     const missing = t.filled!.indexOf(0);
-    if (missing >= 0) {
+    if (missing >= 0 && t.regulators.length === 0)
+      errors.add(t.headerLine, 1, `the table of ${t.name} has no row; write its constant next value, 0 or 1`);
+    else if (missing >= 0) {
       let count = 0;
       for (const f of t.filled!) if (!f) count++;
       const values = t.regulators.map((r, j) => `${r.text}=${(missing >> j) & 1}`).join(", ");
