@@ -81,6 +81,7 @@ function scanMarkup(text: string, starts: number[]): void {
   const open: number[] = []; // start offsets of the open elements
   const names: string[] = [];
   let elements = 0;
+  let rootName = "";
   const endsEarly = (what: string): never => {
     const at = positionOf(starts, text.length);
     throw new ParseError(`the file ends early, ${what}; is it complete?`, at.line, at.column);
@@ -132,6 +133,15 @@ function scanMarkup(text: string, starts: number[]): void {
         endsEarly(
           `${quote ? "inside an attribute value of" : "inside"} the start tag <${showInput(name)}> that starts at ${where(i)}`,
         );
+      if (open.length === 0 && elements > 0) {
+        const at = positionOf(starts, i);
+        throw new ParseError(
+          `another element <${showInput(name)}> after the root element <${showInput(rootName)}> has ended; an XML document has exactly one root`,
+          at.line,
+          at.column,
+        );
+      }
+      if (elements === 0) rootName = name;
       if (++elements > MAX_XML_ELEMENTS) {
         const at = positionOf(starts, i);
         throw new ParseError(
@@ -185,10 +195,11 @@ export function parseXml(withBom: string): XmlElement {
     const at = positionOf(starts, doctype);
     throw new ParseError("DOCTYPE declarations are not accepted in model files", at.line, at.column);
   }
+  if (text.trim() === "") throw new ParseError("the file is empty; an SBML-qual file holds an <sbml> element", 1, 1);
   scanMarkup(text, starts);
   const valid = XMLValidator.validate(text);
   if (valid !== true)
-    throw new ParseError(`XML syntax error: ${showInput(valid.err.msg, 200)}`, valid.err.line, valid.err.col);
+    throw new ParseError(`XML syntax error: ${showInput(valid.err.msg, 200)}`, valid.err.line || 1, valid.err.col || 1);
   const parser = new XMLParser({
     preserveOrder: true,
     ignoreAttributes: false,

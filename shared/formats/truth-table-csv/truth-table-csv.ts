@@ -7,8 +7,11 @@ import { EngineError, ParseError } from "../../engine/errors";
 import { checkNetwork, type BooleanNetwork } from "../../engine/network";
 import {
   ErrorList,
+  MAX_NAME_CHARS,
   MAX_NODES,
   MAX_REGULATORS,
+  PROTOTYPE_KEY,
+  RESERVED_WORDS,
   firstErrorCounting,
   isValidNodeName,
   showInput,
@@ -28,6 +31,16 @@ export interface TruthTableCsvResult {
 interface Cell {
   readonly text: string;
   readonly column: number;
+}
+
+/** Why `name` cannot name a node, or null when it can (the rule-text rules; see isValidNodeName). */
+function nameProblem(name: string): string | null {
+  if (isValidNodeName(name)) return null;
+  if (name.length > MAX_NAME_CHARS)
+    return `a name of ${name.length} characters ("${showInput(name)}"); a node name may have at most ${MAX_NAME_CHARS}`;
+  if (name === PROTOTYPE_KEY) return `"${PROTOTYPE_KEY}" cannot name a node (JavaScript objects treat it specially)`;
+  if (RESERVED_WORDS.has(name.toLowerCase())) return `"${name}" is a reserved word and cannot name a node`;
+  return `"${showInput(name)}" is not a valid node name (letters, digits and _, not starting with a digit)`;
 }
 
 /** Number of comma-separated cells of a line, counted without building them. */
@@ -63,6 +76,8 @@ interface Table {
   rowLines: Int32Array | null;
   /** A fault in the node line or header: its rows are skipped, their errors would only repeat it. */
   broken: boolean;
+  /** A faulty row: the rows it leaves missing are not reported again. */
+  hasRowErrors: boolean;
 }
 
 const NODE_LINE = /^#\s*node\s*:(.*)$/i;
@@ -122,16 +137,13 @@ class TableReader {
       filled: null,
       rowLines: null,
       broken: false,
+      hasRowErrors: false,
     };
     this.current = t;
     this.tables.push(t);
-    if (!isValidNodeName(name)) {
-      this.errors.add(
-        lineNo,
-        column,
-        () =>
-          `"${showInput(name)}" is not a valid node name (letters, digits and _, not starting with a digit, at most 256 characters)`,
-      );
+    const problem = nameProblem(name);
+    if (problem) {
+      this.errors.add(lineNo, column, problem);
       t.broken = true;
     }
     return true;
@@ -162,8 +174,9 @@ class TableReader {
     const regs = cells.slice(0, -1);
     const seen = new Set<string>();
     for (const r of regs) {
-      if (!isValidNodeName(r.text)) {
-        this.errors.add(lineNo, r.column, () => `"${showInput(r.text)}" is not a valid regulator name`);
+      const problem = nameProblem(r.text);
+      if (problem) {
+        this.errors.add(lineNo, r.column, problem);
         return;
       }
       if (seen.has(r.text)) {
@@ -198,6 +211,7 @@ class TableReader {
     const k = t.regulators!.length;
     const count = cellCount(line);
     if (count !== k + 1) {
+      t.hasRowErrors = true;
       this.errors.add(lineNo, 1, `expected ${k + 1} cells (${k} regulators and ${t.name}'), found ${count}`);
       return;
     }
@@ -206,12 +220,14 @@ class TableReader {
     for (let j = 0; j <= k; j++) {
       const c = cells[j]!;
       if (c.text !== "0" && c.text !== "1") {
+        t.hasRowErrors = true;
         this.errors.add(lineNo, c.column, () => `expected 0 or 1, found "${showInput(c.text)}"`);
         return;
       }
       if (j < k && c.text === "1") row |= 1 << j;
     }
     if (t.filled![row]) {
+      t.hasRowErrors = true;
       this.errors.add(lineNo, 1, `this combination of regulator values was already given on line ${t.rowLines![row]}`);
       return;
     }
@@ -248,7 +264,7 @@ function checkTables(tables: readonly Table[], errors: ErrorList): Map<string, n
       errors.add(t.line, t.column, `the table of ${t.name} has no header row`);
       continue;
     }
-    const missing = t.filled!.indexOf(0);
+    const missing = t.hasRowErrors ? -1 : t.filled!.indexOf(0);
     if (missing >= 0 && t.regulators.length === 0)
       errors.add(t.headerLine, 1, `the table of ${t.name} has no row; write its constant next value, 0 or 1`);
     else if (missing >= 0) {
