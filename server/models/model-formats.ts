@@ -1,6 +1,12 @@
 // File formats at the edge of the models API: which reader an upload goes to (by file name) and how a revision is
 // written for download. The readers and writers themselves live in shared/formats and shared/engine/rules.
-import { compileDefinition, networkToDefinition, printRuleText, type ModelDefinition } from "@shared/engine/rules";
+import {
+  compileDefinition,
+  networkToDefinition,
+  printRuleText,
+  showInput,
+  type ModelDefinition,
+} from "@shared/engine/rules";
 import { decodeModelText, modelFormatOf } from "@shared/formats/read-model";
 import { readSbmlQual, writeSbmlQual } from "@shared/formats/sbml-qual";
 import { parseTruthTableCsv, writeTruthTableCsv } from "@shared/formats/truth-table-csv";
@@ -20,7 +26,7 @@ export function readUpload(fileName: string, bytes: Buffer): UploadedModel {
     throw new HttpError(
       415,
       "UNSUPPORTED_FORMAT",
-      `${fileName}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`,
+      `${showInput(fileName, 120)}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`,
     );
   let text: string;
   try {

@@ -4,7 +4,7 @@
 // Standard, table 3-7) and says where the first byte that is not UTF-8 is, instead of replacing it silently.
 import { EngineError, ParseError } from "../engine/errors";
 import type { BooleanNetwork } from "../engine/network";
-import { compileDefinition, networkToDefinition, readRuleText, type ModelDefinition } from "../engine/rules";
+import { compileDefinition, networkToDefinition, readRuleText, showInput, type ModelDefinition } from "../engine/rules";
 import { readSbmlQual } from "./sbml-qual";
 import { readTruthTableCsv } from "./truth-table-csv";
 
@@ -54,7 +54,7 @@ export function readModelText(fileName: string, text: string): ReadModelResult {
     default:
       throw new EngineError(
         "UNSUPPORTED_FORMAT",
-        `${fileName}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`,
+        `${showInput(fileName, 120)}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`,
       );
   }
 }

@@ -20,7 +20,7 @@ export function ruleRegulators(
     if (index === undefined) {
       throw new EngineError(
         "UNDEFINED_NODE",
-        `node ${name} is used in the rule of ${nodeName} but has no rule; add \`${name}' = ${name}\` to make it an input`,
+        `node ${showInput(name)} is used in the rule of ${showInput(nodeName)} but has no rule; add \`${showInput(name)}' = ${showInput(name)}\` to make it an input`,
       );
     }
     used.add(index);
@@ -81,7 +81,8 @@ export function truthTableOf(e: Expr, inputs: readonly string[]): Uint8Array {
     let v = patterns.get(name);
     if (!v) {
       const j = position.get(name);
-      if (j === undefined) throw new EngineError("UNDEFINED_NODE", `${name} is not among the inputs of the table`);
+      if (j === undefined)
+        throw new EngineError("UNDEFINED_NODE", `${showInput(name)} is not among the inputs of the table`);
       v = new Uint32Array(words);
       for (let w = 0; w < words; w++) v[w] = j < 5 ? LOW_PATTERNS[j]! : (w >> (j - 5)) & 1 ? 0xffffffff : 0;
       patterns.set(name, v);
@@ -189,10 +190,10 @@ export function checkDefinition(model: ModelDefinition): void {
         if (!Number.isSafeInteger(t.weight) || t.weight === 0)
           throw new EngineError(
             "BAD_RULE",
-            `the weight of ${t.node} in the rule of ${node.name} must be a non-zero integer`,
+            `the weight of ${showInput(t.node)} in the rule of ${node.name} must be a non-zero integer`,
           );
         if (terms.has(t.node))
-          throw new EngineError("BAD_RULE", `${t.node} has two weights in the rule of ${node.name}`);
+          throw new EngineError("BAD_RULE", `${showInput(t.node)} has two weights in the rule of ${node.name}`);
         terms.add(t.node);
       }
     }
