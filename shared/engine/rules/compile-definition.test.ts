@@ -130,6 +130,31 @@ describe("compileDefinition", () => {
     );
   });
 
+  it("compileDefinition refuses operators with fewer than two operands, and binary nodes stored before chains were flat, with BAD_RULE", () => {
+    const code = (rule: unknown) => {
+      try {
+        compileDefinition({ nodes: [{ name: "A", rule: rule as Expr }] });
+      } catch (e) {
+        return (e as { code?: string }).code;
+      }
+      return "compiled";
+    };
+    expect(code({ kind: "and", args: [] })).toBe("BAD_RULE");
+    expect(code({ kind: "not", arg: { kind: "or", args: [{ kind: "var", name: "A" }] } })).toBe("BAD_RULE");
+    expect(code({ kind: "xor", left: { kind: "var", name: "A" }, right: { kind: "const", value: 1 } })).toBe(
+      "BAD_RULE",
+    );
+    expect(
+      code({
+        kind: "xor",
+        args: [
+          { kind: "var", name: "A" },
+          { kind: "const", value: 1 },
+        ],
+      }),
+    ).toBe("compiled");
+  });
+
   it("compileDefinition rejects a rule that reads an undefined node, and duplicate or invalid names", () => {
     expect(() => compileDefinition({ nodes: [{ name: "A", rule: { kind: "var", name: "Z" } }] })).toThrow(
       /node Z is used in the rule of A but has no rule/,

@@ -5,7 +5,15 @@ import { EngineError } from "../errors";
 import { checkNetwork, type BooleanNetwork } from "../network";
 import { MAX_NESTING_DEPTH, MAX_NODES, MAX_REGULATORS } from "./limits";
 import { showInput } from "./show-input";
-import { firstTooDeep, isValidNodeName, variablesOf, type Expr, type ModelDefinition, type RuleSyntax } from "./syntax";
+import {
+  firstTooDeep,
+  forEachSubexpression,
+  isValidNodeName,
+  variablesOf,
+  type Expr,
+  type ModelDefinition,
+  type RuleSyntax,
+} from "./syntax";
 
 /** Regulators of one rule as node indices in model order; a threshold rule with tie "keep" also reads its own node. */
 export function ruleRegulators(
@@ -177,6 +185,14 @@ export function checkDefinition(model: ModelDefinition): void {
     if (seen.has(node.name)) throw new EngineError("DUPLICATE_NODE", `node ${node.name} has two rules`);
     seen.add(node.name);
     const rule = node.rule;
+    // The parser never builds an operator with fewer than two operands; a definition built or stored elsewhere
+    // might (or a binary node stored before chains were flat), and walking one would read operands that are not
+    // there. Checked before the depth, whose walk reads them.
+    if (rule.kind !== "threshold")
+      forEachSubexpression(rule, (e) => {
+        if ((e.kind === "and" || e.kind === "or" || e.kind === "xor") && !(Array.isArray(e.args) && e.args.length >= 2))
+          throw new EngineError("BAD_RULE", `an ${e.kind} in the rule of ${node.name} has fewer than two operands`);
+      });
     if (rule.kind !== "threshold" && firstTooDeep(rule, MAX_NESTING_DEPTH))
       throw new EngineError(
         "TOO_DEEP",
