@@ -1,7 +1,7 @@
 import type { Knex } from "knex";
 import { blockEmulationCertificate } from "@shared/engine/certificates";
 import { searchBlockEmulation } from "@shared/engine/emulation";
-import { compileDefinition } from "@shared/engine/rules";
+import { compileDefinition, upgradeDefinition } from "@shared/engine/rules";
 import type { Certificate } from "@shared/schemas/reductions";
 import { checkCertificate } from "../server/services/reductions/check-certificate";
 import { proposeReduction } from "../server/services/reductions/propose-reduction";
@@ -49,8 +49,9 @@ export async function seed(knex: Knex): Promise<void> {
     const source = await latestRevision(knex, s.source);
     const target = await latestRevision(knex, s.target);
     if (!source || !target) continue; // the models seed did not run
-    const sourceNet = compileDefinition(source.definition);
-    const targetNet = compileDefinition(target.definition);
+    // Rows from before operator chains were stored flat hold binary nodes: read both forms.
+    const sourceNet = compileDefinition(upgradeDefinition(source.definition));
+    const targetNet = compileDefinition(upgradeDefinition(target.definition));
     const found = searchBlockEmulation(sourceNet, targetNet, { maxTime: 1, maxBlock: 6 });
     if (!found.witness) throw new Error(`demo seed: expected a block emulation for ${s.source} -> ${s.target}`);
     const certificate = blockEmulationCertificate(sourceNet, targetNet, found.witness) as Certificate;

@@ -1,11 +1,17 @@
 // Request and response shapes of the models API (server validates with them, the client parses with them).
 import { z } from "zod";
+import { nodeRecord, PROTOTYPE_KEY_MESSAGE } from "./node-record";
 
 export const MODEL_UPLOAD_LIMIT_BYTES = 5 * 1024 * 1024;
 /** Above this many nodes the synchronous analysis is a run (a background job), not part of a request. */
 export const INLINE_ANALYSIS_MAX_NODES = 16;
 
-const nodeName = z.string().regex(/^[A-Za-z_][A-Za-z0-9_]*$/, "must be a node name");
+// `__proto__` is refused by name: as a key of a record (`fixed`) zod would otherwise drop it without a word, because
+// assigning it to a plain object sets the prototype instead of adding the key. Rule text refuses it too.
+const nodeName = z
+  .string()
+  .regex(/^[A-Za-z_][A-Za-z0-9_]*$/, "must be a node name")
+  .refine((name) => name !== "__proto__", PROTOTYPE_KEY_MESSAGE);
 
 export const ModelParams = z.object({ projectId: z.uuid(), modelId: z.uuid() });
 export const RevisionParams = ModelParams.extend({ revision: z.coerce.number().int().min(1).max(2_147_483_647) });
@@ -169,7 +175,7 @@ export const PerturbationBody = z.object({
   knockOut: z.array(nodeName).max(64).default([]),
   overExpress: z.array(nodeName).max(64).default([]),
   /** Fixed input conditions: node name to 0 or 1. */
-  fixed: z.record(nodeName, z.union([z.literal(0), z.literal(1)])).default({}),
+  fixed: nodeRecord(nodeName, z.union([z.literal(0), z.literal(1)])).default({}),
   markers: z.array(nodeName).max(64).default([]),
 });
 export type PerturbationBody = z.input<typeof PerturbationBody>;

@@ -1,9 +1,16 @@
 // Reductions: stored certificates and their review. The certificate schema is the edge check for JSON that comes
 // from outside (uploads, the CLI, stored rows); the engine's verifier then re-simulates it.
 import { z } from "zod";
+import { nodeRecord, PROTOTYPE_KEY_MESSAGE } from "./node-record";
 
 const bits = (what: string) => z.string().regex(/^[01]+$/, `${what} must be a string of 0 and 1`);
-const nodeName = z.string().min(1).max(120);
+// `__proto__` is refused by name: as a key of the context record zod would otherwise drop it without a word (assigning
+// it to a plain object sets the prototype instead of adding the key), and no reader accepts it as a node name.
+const nodeName = z
+  .string()
+  .min(1)
+  .max(120)
+  .refine((name) => name !== "__proto__", PROTOTYPE_KEY_MESSAGE);
 
 const CertificateNode = z
   .object({ name: nodeName, inputs: z.array(nodeName).max(20), table: bits("a truth table") })
@@ -36,7 +43,7 @@ export const Certificate = z.discriminatedUnion("notion", [
           }),
         )
         .min(1),
-      context: z.record(nodeName, z.union([z.literal(0), z.literal(1)])),
+      context: nodeRecord(nodeName, z.union([z.literal(0), z.literal(1)])),
     }),
   }),
   z.object({

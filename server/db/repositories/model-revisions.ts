@@ -1,6 +1,6 @@
 // Immutable revisions of a model (the table refuses updates): insert and read, never change.
 import type { Knex } from "knex";
-import type { ModelDefinition } from "@shared/engine/rules";
+import { upgradeDefinition, type ModelDefinition } from "@shared/engine/rules";
 import type { ModelSource, NetworkSummary, RevisionDetail, RevisionSummary } from "@shared/schemas/models";
 
 interface RevisionRow {
@@ -59,7 +59,8 @@ export async function findRevision(db: Knex, modelId: string, revision: number):
   return {
     ...toSummary(r),
     modelId: r.model_id,
-    definition: r.definition,
+    // Revisions written before operator chains were stored flat hold binary nodes; read both forms.
+    definition: upgradeDefinition(r.definition),
     ruleText: r.rule_text,
     network: r.network_summary,
     generator: r.generator,

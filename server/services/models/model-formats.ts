@@ -1,7 +1,13 @@
 // File formats at the edge of the models API: which reader an upload goes to (by file name) and how a revision is
 // written for download. The readers and writers themselves live in shared/formats and shared/engine/rules.
-import { compileDefinition, networkToDefinition, printRuleText, type ModelDefinition } from "@shared/engine/rules";
-import { modelFormatOf } from "@shared/formats/read-model";
+import {
+  compileDefinition,
+  networkToDefinition,
+  printRuleText,
+  showInput,
+  type ModelDefinition,
+} from "@shared/engine/rules";
+import { decodeModelText, modelFormatOf } from "@shared/formats/read-model";
 import { readSbmlQual, writeSbmlQual } from "@shared/formats/sbml-qual";
 import { parseTruthTableCsv, writeTruthTableCsv } from "@shared/formats/truth-table-csv";
 import type { ExportFormat, ModelSource } from "@shared/schemas/models";
@@ -20,9 +26,16 @@ export function readUpload(fileName: string, bytes: Buffer): UploadedModel {
     throw new HttpError(
       415,
       "UNSUPPORTED_FORMAT",
-      `${fileName}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`,
+      `${showInput(fileName, 120)}: use .sbml or .xml (SBML-qual), .rules or .txt (rule text), or .csv (truth tables)`,
     );
-  const text = bytes.toString("utf8");
+  let text: string;
+  try {
+    text = decodeModelText(bytes);
+  } catch (e) {
+    const issue = issueOf(e);
+    if (!issue) throw e;
+    throw parseFailure([issue], fileName);
+  }
   if (source === "rules") {
     const read = readRules(text);
     return { ...read, source, ruleText: text };
@@ -39,11 +52,12 @@ export function readUpload(fileName: string, bytes: Buffer): UploadedModel {
     const read = compileOrFail(sbml.definition, fileName);
     return { ...read, source, ruleText: printRuleText(sbml.definition), suggestedName: sbml.modelName ?? undefined };
   }
-  const { network, errors } = parseTruthTableCsv(text);
+  const { network, errors, moreErrors } = parseTruthTableCsv(text);
   if (!network)
     throw parseFailure(
       errors.map((e) => issueOf(e)!),
       fileName,
+      moreErrors,
     );
   const definition = networkToDefinition(network);
   return { definition, network: compileDefinition(definition), source, ruleText: printRuleText(definition) };

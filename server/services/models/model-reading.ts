@@ -45,33 +45,46 @@ function checkTableRows(
   }
 }
 
-export function parseFailure(issues: ParseIssue[], what = "The model"): HttpError {
+/** `issues` are the first problems (readers keep at most MAX_REPORTED_ERRORS); `moreIssues` counts the rest. */
+export function parseFailure(issues: ParseIssue[], what = "The model", moreIssues = 0): HttpError {
   const first = issues[0]!;
+  const more = issues.length - 1 + moreIssues;
+  const others = more > 0 ? ` and ${more} more problem${more === 1 ? "" : "s"}` : "";
   return new HttpError(
     400,
     "PARSE_ERROR",
-    `${what} could not be read: ${first.message} (line ${first.line}, column ${first.column})`,
+    `${what} could not be read: ${first.message} (line ${first.line}, column ${first.column})${others}`,
     issues,
   );
 }
 
-/** Every problem of a rule text (syntax, duplicates, undefined nodes, then compile checks), in line order. */
-export function ruleTextIssues(text: string): { issues: ParseIssue[]; nodes: string[]; read: ReadModel | null } {
+/**
+ * The first problems of a rule text (syntax, duplicates, undefined nodes, then compile checks) in line order, at
+ * most MAX_REPORTED_ERRORS of them, and how many more there were.
+ */
+export function ruleTextIssues(text: string): {
+  issues: ParseIssue[];
+  moreIssues: number;
+  nodes: string[];
+  read: ReadModel | null;
+} {
   const result = parseRuleText(text);
   const nodes = result.rules.map((r) => r.name);
-  if (!result.definition) return { issues: result.errors.map((e) => issueOf(e)!), nodes, read: null };
+  if (!result.definition)
+    return { issues: result.errors.map((e) => issueOf(e)!), moreIssues: result.moreErrors, nodes, read: null };
   try {
     const lines = new Map(result.rules.map((r) => [r.name, r.line] as const));
     checkTableRows(result.definition, (name) => lines.get(name));
     return {
       issues: [],
+      moreIssues: 0,
       nodes,
       read: { definition: result.definition, network: compileDefinition(result.definition) },
     };
   } catch (e) {
     const issue = issueOf(e);
     if (!issue) throw e;
-    return { issues: [issue], nodes, read: null };
+    return { issues: [issue], moreIssues: 0, nodes, read: null };
   }
 }
 
@@ -87,8 +100,8 @@ export function validateRuleText(text: string): ValidateResult {
 }
 
 export function readRules(text: string): ReadModel {
-  const { issues, read } = ruleTextIssues(text);
-  if (!read) throw parseFailure(issues, "The rule text");
+  const { issues, moreIssues, read } = ruleTextIssues(text);
+  if (!read) throw parseFailure(issues, "The rule text", moreIssues);
   return read;
 }
 

@@ -20,11 +20,11 @@ function referenceNext(model: ModelDefinition, i: number, state: number): number
       case "not":
         return !ev(e.arg);
       case "and":
-        return ev(e.left) && ev(e.right);
+        return e.args.every(ev);
       case "or":
-        return ev(e.left) || ev(e.right);
+        return e.args.some(ev);
       case "xor":
-        return ev(e.left) !== ev(e.right);
+        return e.args.filter(ev).length % 2 === 1;
     }
   };
   const rule: RuleSyntax = model.nodes[i]!.rule;
@@ -103,11 +103,11 @@ describe("compileDefinition", () => {
       .map(([name, neg]): Expr => (neg ? { kind: "not", arg: { kind: "var", name } } : { kind: "var", name }));
     const product = fc
       .array(literal, { minLength: 1, maxLength: 6 })
-      .map((ls) => ls.reduce((left, right): Expr => ({ kind: "and", left, right })));
+      .map((ls): Expr => (ls.length === 1 ? ls[0]! : { kind: "and", args: ls }));
     const operand = fc.oneof(product, exprArb(inputs, 3));
     const sum = fc
       .array(operand, { minLength: 1, maxLength: 12 })
-      .map((ps) => ps.reduce((left, right): Expr => ({ kind: "or", left, right })));
+      .map((ps): Expr => (ps.length === 1 ? ps[0]! : { kind: "or", args: ps }));
     fc.assert(
       fc.property(sum, fc.integer({ min: 1, max: 12 }), (expr, k) => {
         const used = new Set(inputs.slice(0, k));
@@ -120,7 +120,7 @@ describe("compileDefinition", () => {
               ? { kind: "not", arg: rename(e.arg) }
               : e.kind === "const"
                 ? e
-                : { kind: e.kind, left: rename(e.left), right: rename(e.right) };
+                : { kind: e.kind, args: e.args.map(rename) };
         const inK = rename(expr);
         const table = truthTableOf(inK, inputs.slice(0, k));
         for (let row = 0; row < 1 << k; row++)
@@ -128,6 +128,31 @@ describe("compileDefinition", () => {
       }),
       { seed: 4203, numRuns: 300 },
     );
+  });
+
+  it("compileDefinition refuses operators with fewer than two operands, and binary nodes stored before chains were flat, with BAD_RULE", () => {
+    const code = (rule: unknown) => {
+      try {
+        compileDefinition({ nodes: [{ name: "A", rule: rule as Expr }] });
+      } catch (e) {
+        return (e as { code?: string }).code;
+      }
+      return "compiled";
+    };
+    expect(code({ kind: "and", args: [] })).toBe("BAD_RULE");
+    expect(code({ kind: "not", arg: { kind: "or", args: [{ kind: "var", name: "A" }] } })).toBe("BAD_RULE");
+    expect(code({ kind: "xor", left: { kind: "var", name: "A" }, right: { kind: "const", value: 1 } })).toBe(
+      "BAD_RULE",
+    );
+    expect(
+      code({
+        kind: "xor",
+        args: [
+          { kind: "var", name: "A" },
+          { kind: "const", value: 1 },
+        ],
+      }),
+    ).toBe("compiled");
   });
 
   it("compileDefinition rejects a rule that reads an undefined node, and duplicate or invalid names", () => {

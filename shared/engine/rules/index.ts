@@ -1,6 +1,7 @@
 export type {
   Expr,
-  BinaryOp,
+  NaryOp,
+  NaryExpr,
   ThresholdRule,
   ThresholdTerm,
   RuleSyntax,
@@ -8,8 +9,27 @@ export type {
   ModelDefinition,
   SourcePos,
 } from "./syntax";
-export { RESERVED_WORDS, isValidNodeName, variablesOf, stripPositions, chainOperands } from "./syntax";
-export type { BinaryExpr } from "./syntax";
+export {
+  RESERVED_WORDS,
+  PROTOTYPE_KEY,
+  isValidNodeName,
+  variablesOf,
+  stripPositions,
+  forEachSubexpression,
+  firstTooDeep,
+  mapExpr,
+} from "./syntax";
+export {
+  MAX_RULE_TEXT_CHARS,
+  MAX_RULE_CHARS,
+  MAX_NODES,
+  MAX_REGULATORS,
+  MAX_NESTING_DEPTH,
+  MAX_NAME_CHARS,
+  MAX_REPORTED_ERRORS,
+} from "./limits";
+export { showInput } from "./show-input";
+export { ErrorList, firstErrorCounting } from "./error-list";
 export { tokenizeLine } from "./tokenizer";
 export type { Token, TokenKind } from "./tokenizer";
 export { parseRuleText, readRuleText } from "./parse-rule-text";
@@ -26,3 +46,5 @@ export {
 export { minimalSop } from "./minimal-sop";
 export type { Cube } from "./minimal-sop";
 export { networkToDefinition, tableToExpr } from "./network-to-definition";
+export { upgradeDefinition, upgradeExpr } from "./stored-definition";
+export type { StoredExpr } from "./stored-definition";

@@ -5,21 +5,22 @@ import { minimalSop, type Cube } from "./minimal-sop";
 import type { Expr, ModelDefinition } from "./syntax";
 
 function cubeToExpr(cube: Cube, names: readonly string[]): Expr {
-  let product: Expr | null = null;
+  const literals: Expr[] = [];
   for (let j = 0; j < names.length; j++) {
     if (!(cube.mask & (1 << j))) continue;
     const v: Expr = { kind: "var", name: names[j]! };
-    const literal: Expr = cube.value & (1 << j) ? v : { kind: "not", arg: v };
-    product = product ? { kind: "and", left: product, right: literal } : literal;
+    literals.push(cube.value & (1 << j) ? v : { kind: "not", arg: v });
   }
-  return product ?? { kind: "const", value: 1 };
+  if (literals.length === 0) return { kind: "const", value: 1 };
+  return literals.length === 1 ? literals[0]! : { kind: "and", args: literals };
 }
 
-/** The Boolean expression of one truth table over named inputs (row bit j = input j). */
+/** The Boolean expression of one truth table over named inputs (row bit j = input j): at most three levels deep. */
 export function tableToExpr(table: Uint8Array, inputNames: readonly string[]): Expr {
   const cubes = minimalSop(table, inputNames.length);
   if (cubes.length === 0) return { kind: "const", value: 0 };
-  return cubes.map((c) => cubeToExpr(c, inputNames)).reduce((left, right) => ({ kind: "or", left, right }));
+  if (cubes.length === 1) return cubeToExpr(cubes[0]!, inputNames);
+  return { kind: "or", args: cubes.map((c) => cubeToExpr(c, inputNames)) };
 }
 
 /** A model whose rules compute exactly the network's tables (regulators that never matter drop out). */

@@ -1,35 +1,44 @@
 // Printer for Emulant rule text: writes any model in canonical form (symbol operators, minimal parentheses,
 // threshold options in a fixed order) so that parsing the output gives back the same model.
-// Parenthesisation follows operator precedence and left associativity, as in the grammar of parse-rule-text.ts.
+// Parenthesisation follows operator precedence, as in the grammar of parse-rule-text.ts: an operand is put in
+// parentheses when it binds no tighter than its operator, so a nested chain of the same operator keeps its own node.
 import { EngineError } from "../errors";
-import { chainOperands, isValidNodeName, type Expr, type ModelDefinition, type RuleSyntax } from "./syntax";
+import { showInput } from "./show-input";
+import { isValidNodeName, mapExpr, type Expr, type ModelDefinition, type RuleSyntax } from "./syntax";
 
 const PRECEDENCE = { or: 1, xor: 2, and: 3, not: 4, const: 5, var: 5 } as const;
-const SYMBOL = { or: "|", xor: "^", and: "&" } as const;
+const SYMBOL = { or: " | ", xor: " ^ ", and: " & " } as const;
 
-/** Print a Boolean expression with the fewest parentheses that keep its tree. */
+interface Printed {
+  readonly text: string;
+  readonly precedence: number;
+}
+
+/** Print a Boolean expression with the fewest parentheses that keep its tree (no recursion: any depth prints). */
 export function printExpr(e: Expr): string {
-  switch (e.kind) {
-    case "const":
-      return String(e.value);
-    case "var":
-      return e.name;
-    case "not": {
-      const inner = printExpr(e.arg);
-      return PRECEDENCE[e.arg.kind] < PRECEDENCE.not ? `!(${inner})` : `!${inner}`;
+  return mapExpr<Printed>(e, (x, args) => {
+    const precedence = PRECEDENCE[x.kind];
+    switch (x.kind) {
+      case "const":
+        return { text: String(x.value), precedence };
+      case "var":
+        return { text: x.name, precedence };
+      case "not": {
+        const inner = args[0]!;
+        return { text: inner.precedence < precedence ? `!(${inner.text})` : `!${inner.text}`, precedence };
+      }
+      default: {
+        // Concatenation, not join: join copies each operand's text into a new flat string, which made a tree
+        // nested 100,000 levels deep print in quadratic time; concatenation builds ropes and copies once at the end.
+        let text = "";
+        args.forEach((o, i) => {
+          const part = o.precedence <= precedence ? `(${o.text})` : o.text;
+          text = i === 0 ? part : text + SYMBOL[x.kind] + part;
+        });
+        return { text, precedence };
+      }
     }
-    default: {
-      const p = PRECEDENCE[e.kind];
-      // Left-associative: the head of a chain never needs parentheses for the same operator; an operand on the
-      // right of equal precedence does.
-      return chainOperands(e)
-        .map((o, i) => {
-          const text = printExpr(o);
-          return PRECEDENCE[o.kind] < p || (i > 0 && PRECEDENCE[o.kind] === p) ? `(${text})` : text;
-        })
-        .join(` ${SYMBOL[e.kind]} `);
-    }
-  }
+  }).text;
 }
 
 /** Print the right side of a rule. */
@@ -46,7 +55,7 @@ export function printRuleText(model: ModelDefinition): string {
     if (!isValidNodeName(node.name)) {
       throw new EngineError(
         "BAD_NAME",
-        `node name "${node.name}" cannot be written as rule text (use letters, digits and _, not starting with a digit, not a reserved word)`,
+        `node name "${showInput(node.name)}" cannot be written as rule text (use letters, digits and _, not starting with a digit, not a reserved word)`,
       );
     }
   }

@@ -17,8 +17,11 @@ export function exprArb(names: readonly string[], depth = 4): fc.Arbitrary<Expr>
     {
       weight: 3,
       arbitrary: fc
-        .tuple(fc.constantFrom("and", "or", "xor") as fc.Arbitrary<"and" | "or" | "xor">, sub, sub)
-        .map(([kind, left, right]): Expr => ({ kind, left, right })),
+        .tuple(
+          fc.constantFrom("and", "or", "xor") as fc.Arbitrary<"and" | "or" | "xor">,
+          fc.array(sub, { minLength: 2, maxLength: 4 }),
+        )
+        .map(([kind, args]): Expr => ({ kind, args })),
     },
   );
 }
@@ -43,10 +46,10 @@ export function ruleArb(names: readonly string[]): fc.Arbitrary<RuleSyntax> {
   return fc.oneof({ weight: 4, arbitrary: exprArb(names) }, { weight: 1, arbitrary: threshold });
 }
 
-/** Random models of 1..maxNodes nodes whose rules only read defined nodes. */
-export function modelArb(maxNodes = 6): fc.Arbitrary<ModelDefinition> {
+/** Random models of 1..maxNodes nodes (names drawn from `pool`) whose rules only read defined nodes. */
+export function modelArb(maxNodes = 6, pool: readonly string[] = NAME_POOL): fc.Arbitrary<ModelDefinition> {
   return fc
-    .shuffledSubarray(NAME_POOL, { minLength: 1, maxLength: maxNodes })
+    .shuffledSubarray([...pool], { minLength: 1, maxLength: maxNodes })
     .chain((names) =>
       fc
         .tuple(...names.map(() => ruleArb(names)))

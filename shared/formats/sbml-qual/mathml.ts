@@ -1,9 +1,9 @@
 // The Boolean subset of content MathML used in SBML-qual function terms (W3C "Mathematical Markup Language (MathML)
 // Version 2.0", chapter 4; SBML Level 3 qual package, Version 1, section 3.6): logical operators, comparisons of
 // species levels with numbers, ci, cn, true and false. Reads it into rule expressions and writes expressions back.
-import { EngineError } from "../../engine/errors";
-import { chainOperands, type Expr } from "../../engine/rules";
-import type { XmlElement } from "./xml-tree";
+import { ParseError } from "../../engine/errors";
+import { showInput, type Expr } from "../../engine/rules";
+import { attr, type XmlElement } from "./xml-tree";
 
 /** A MathML value during reading: a Boolean expression, a 0/1 species level (which is also a Boolean), or a number. */
 type Value = { kind: "bool"; expr: Expr } | { kind: "level"; expr: Expr } | { kind: "number"; value: number };
@@ -19,35 +19,64 @@ export interface MathContext {
 const TRUE: Expr = { kind: "const", value: 1 };
 const FALSE: Expr = { kind: "const", value: 0 };
 
-// Constant folding keeps imported rules readable (e.g. a single function term over a default of 0).
-export function and(l: Expr, r: Expr): Expr {
-  if (l.kind === "const") return l.value ? r : FALSE;
-  if (r.kind === "const") return r.value ? l : FALSE;
-  return { kind: "and", left: l, right: r };
+/** An error in the math at the element `e`. */
+const mathError = (e: XmlElement, ctx: MathContext, message: string) =>
+  new ParseError(`${ctx.where}: ${message}`, e.line, e.column, "SBML_MATH");
+
+// Constant folding keeps imported rules readable (e.g. a single function term over a default of 0), and operands
+// of the same operator are merged into one flat chain, so the rule is as deep as the real nesting of its logic.
+
+/** The conjunction of `args` (true when there are none). */
+export function allOf(args: readonly Expr[]): Expr {
+  const kept: Expr[] = [];
+  for (const a of args) {
+    if (a.kind === "const") {
+      if (!a.value) return FALSE;
+    } else if (a.kind === "and") for (const b of a.args) kept.push(b);
+    else kept.push(a);
+  }
+  return kept.length === 0 ? TRUE : kept.length === 1 ? kept[0]! : { kind: "and", args: kept };
 }
-export function or(l: Expr, r: Expr): Expr {
-  if (l.kind === "const") return l.value ? TRUE : r;
-  if (r.kind === "const") return r.value ? TRUE : l;
-  return { kind: "or", left: l, right: r };
+
+/** The disjunction of `args` (false when there are none). */
+export function anyOf(args: readonly Expr[]): Expr {
+  const kept: Expr[] = [];
+  for (const a of args) {
+    if (a.kind === "const") {
+      if (a.value) return TRUE;
+    } else if (a.kind === "or") for (const b of a.args) kept.push(b);
+    else kept.push(a);
+  }
+  return kept.length === 0 ? FALSE : kept.length === 1 ? kept[0]! : { kind: "or", args: kept };
 }
-export function xor(l: Expr, r: Expr): Expr {
-  if (l.kind === "const") return l.value ? not(r) : r;
-  if (r.kind === "const") return r.value ? not(l) : l;
-  return { kind: "xor", left: l, right: r };
+
+/** The exclusive or of `args` (false when there are none). */
+export function parityOf(args: readonly Expr[]): Expr {
+  const kept: Expr[] = [];
+  let flip = false;
+  for (const a of args) {
+    if (a.kind === "const") flip = flip !== (a.value === 1);
+    else if (a.kind === "xor") for (const b of a.args) kept.push(b);
+    else kept.push(a);
+  }
+  const sum: Expr = kept.length === 0 ? FALSE : kept.length === 1 ? kept[0]! : { kind: "xor", args: kept };
+  return flip ? not(sum) : sum;
 }
+
 export function not(e: Expr): Expr {
   if (e.kind === "const") return e.value ? FALSE : TRUE;
   return { kind: "not", arg: e };
 }
 
-const RELATIONS: Record<string, (a: number, b: number) => boolean> = {
-  eq: (a, b) => a === b,
-  neq: (a, b) => a !== b,
-  geq: (a, b) => a >= b,
-  gt: (a, b) => a > b,
-  leq: (a, b) => a <= b,
-  lt: (a, b) => a < b,
-};
+// A Map, not an object literal: an element named like an inherited property ("valueOf") must not find one.
+const RELATIONS: ReadonlyMap<string, (a: number, b: number) => boolean> = new Map([
+  ["eq", (a: number, b: number) => a === b],
+  ["neq", (a: number, b: number) => a !== b],
+  ["geq", (a: number, b: number) => a >= b],
+  ["gt", (a: number, b: number) => a > b],
+  ["leq", (a: number, b: number) => a <= b],
+  ["lt", (a: number, b: number) => a < b],
+]);
 
 /** An operand of a comparison: a constant number or a 0/1-valued expression. */
 type Operand = { expr: Expr | null; value: number };
@@ -67,38 +96,35 @@ function relation(r: (a: number, b: number) => boolean, x: Operand, y: Operand):
   const lit = (e: Expr, v: number) => (v ? e : not(e));
   if (cells[0] === cells[2] && cells[1] === cells[3]) return unary(a, cells[0]!, cells[1]!);
   if (cells[0] === cells[1] && cells[2] === cells[3]) return unary(b, cells[0]!, cells[2]!);
-  if (cells[0] === cells[3] && cells[1] === cells[2]) return cells[1] ? xor(a, b) : not(xor(a, b));
+  if (cells[0] === cells[3] && cells[1] === cells[2]) return cells[1] ? parityOf([a, b]) : not(parityOf([a, b]));
   const ones = cells.filter((c) => c === 1).length;
   const at = (wanted: number) => cells.indexOf(wanted);
   if (ones === 1) {
     const i = at(1);
-    return and(lit(a, i & 1), lit(b, i >> 1));
+    return allOf([lit(a, i & 1), lit(b, i >> 1)]);
   }
   const i = at(0);
-  return or(lit(a, 1 - (i & 1)), lit(b, 1 - (i >> 1)));
+  return anyOf([lit(a, 1 - (i & 1)), lit(b, 1 - (i >> 1))]);
 }
 
-/** Read the content of a <math> element as a Boolean rule expression. */
+/** Read the content of a <math> element as a Boolean rule expression. Throws ParseError (code SBML_MATH). */
 export function mathToExpr(math: XmlElement, ctx: MathContext): Expr {
   const body = math.children.filter((c) => c.name !== "annotation" && c.name !== "annotation-xml");
-  if (body.length !== 1)
-    throw new EngineError("SBML_MATH", `${ctx.where}: <math> must hold exactly one expression, found ${body.length}`);
-  return asBool(read(body[0]!, ctx), ctx);
+  if (body.length !== 1) throw mathError(math, ctx, `<math> must hold exactly one expression, found ${body.length}`);
+  return asBool(read(body[0]!, ctx), body[0]!, ctx);
 }
 
-function asBool(v: Value, ctx: MathContext): Expr {
+function asBool(v: Value, at: XmlElement, ctx: MathContext): Expr {
   if (v.kind !== "number") return v.expr;
   if (v.value === 0 || v.value === 1) return v.value ? TRUE : FALSE;
-  throw new EngineError(
-    "SBML_MATH",
-    `${ctx.where}: the number ${v.value} is used where a true/false value is expected`,
-  );
+  throw mathError(at, ctx, `the number ${v.value} is used where a true/false value is expected`);
 }
 
 function asOperand(v: Value): Operand {
   return v.kind === "number" ? { expr: null, value: v.value } : { expr: v.expr, value: 0 };
 }
 
+// Recursive over the element tree, whose depth parseXml has bounded (MAX_XML_DEPTH).
 function read(e: XmlElement, ctx: MathContext): Value {
   switch (e.name) {
     case "true":
@@ -110,80 +136,63 @@ function read(e: XmlElement, ctx: MathContext): Value {
       const threshold = ctx.inputThreshold(id);
       if (threshold !== undefined) return { kind: "number", value: threshold };
       if (ctx.isSpecies(id)) return { kind: "level", expr: { kind: "var", name: id } };
-      throw new EngineError(
-        "SBML_MATH",
-        `${ctx.where}: <ci>${id}</ci> names neither a qualitative species nor an input`,
-      );
+      throw mathError(e, ctx, `<ci>${showInput(id)}</ci> names neither a qualitative species nor an input`);
     }
     case "cn": {
-      const type = e.attrs["type"] ?? "real";
+      const type = attr(e, "type") ?? "real";
       if (type !== "integer" && type !== "real" && type !== "double") {
-        throw new EngineError("SBML_MATH", `${ctx.where}: <cn type="${type}"> is not supported; write plain numbers`);
+        throw mathError(e, ctx, `<cn type="${showInput(type)}"> is not supported; write plain numbers`);
       }
       const value = Number(e.text);
       if (e.text === "" || !Number.isFinite(value))
-        throw new EngineError("SBML_MATH", `${ctx.where}: <cn>${e.text}</cn> is not a number`);
+        throw mathError(e, ctx, `<cn>${showInput(e.text)}</cn> is not a number`);
       return { kind: "number", value };
     }
     case "apply":
       return readApply(e, ctx);
     case "semantics": {
       const first = e.children[0];
-      if (!first) throw new EngineError("SBML_MATH", `${ctx.where}: empty <semantics>`);
+      if (!first) throw mathError(e, ctx, `empty <semantics>`);
       return read(first, ctx);
     }
     default:
-      throw new EngineError(
-        "SBML_MATH",
-        `${ctx.where}: MathML <${e.name}> is not part of the Boolean subset Emulant reads`,
-      );
+      throw mathError(e, ctx, `MathML <${showInput(e.name)}> is not part of the Boolean subset Emulant reads`);
   }
 }
 
 function readApply(e: XmlElement, ctx: MathContext): Value {
   const [op, ...argElements] = e.children;
-  if (!op) throw new EngineError("SBML_MATH", `${ctx.where}: empty <apply>`);
+  if (!op) throw mathError(e, ctx, `empty <apply>`);
   const args = argElements.map((a) => read(a, ctx));
-  const bools = () => args.map((a) => asBool(a, ctx));
+  const bools = () => args.map((a, i) => asBool(a, argElements[i]!, ctx));
   const arity = (n: number) => {
     if (args.length !== n)
-      throw new EngineError(
-        "SBML_MATH",
-        `${ctx.where}: <${op.name}> takes ${n} argument${n === 1 ? "" : "s"}, found ${args.length}`,
-      );
+      throw mathError(op, ctx, `<${op.name}> takes ${n} argument${n === 1 ? "" : "s"}, found ${args.length}`);
   };
   switch (op.name) {
     case "and":
-      return { kind: "bool", expr: bools().reduce(and, TRUE) };
+      return { kind: "bool", expr: allOf(bools()) };
     case "or":
-      return { kind: "bool", expr: bools().reduce(or, FALSE) };
+      return { kind: "bool", expr: anyOf(bools()) };
     case "xor":
-      return { kind: "bool", expr: bools().reduce(xor, FALSE) };
+      return { kind: "bool", expr: parityOf(bools()) };
     case "not":
       arity(1);
       return { kind: "bool", expr: not(bools()[0]!) };
     case "implies": {
       arity(2);
       const [p, q] = bools();
-      return { kind: "bool", expr: or(not(p!), q!) };
+      return { kind: "bool", expr: anyOf([not(p!), q!]) };
     }
     default: {
-      const r = RELATIONS[op.name];
+      const r = RELATIONS.get(op.name);
       if (!r)
-        throw new EngineError(
-          "SBML_MATH",
-          `${ctx.where}: MathML <${op.name}> is not part of the Boolean subset Emulant reads`,
-        );
-      if (args.length < 2)
-        throw new EngineError(
-          "SBML_MATH",
-          `${ctx.where}: <${op.name}> needs at least 2 arguments, found ${args.length}`,
-        );
+        throw mathError(op, ctx, `MathML <${showInput(op.name)}> is not part of the Boolean subset Emulant reads`);
+      if (args.length < 2) throw mathError(op, ctx, `<${op.name}> needs at least 2 arguments, found ${args.length}`);
       // A chain a < b < c means every adjacent pair holds (MathML 2.0, section 4.4.4).
-      let result: Expr = TRUE;
-      for (let i = 0; i + 1 < args.length; i++)
-        result = and(result, relation(r, asOperand(args[i]!), asOperand(args[i + 1]!)));
-      return { kind: "bool", expr: result };
+      const pairs: Expr[] = [];
+      for (let i = 0; i + 1 < args.length; i++) pairs.push(relation(r, asOperand(args[i]!), asOperand(args[i + 1]!)));
+      return { kind: "bool", expr: allOf(pairs) };
     }
   }
 }
@@ -211,10 +220,9 @@ export function exprToMathMl(e: Expr, indent: string): string {
         lines.push(`${depth}</apply>`);
         return;
       default: {
-        // Same-operator chains become one n-ary apply, as MathML writers usually do.
-        const operands = chainOperands(x);
+        // Each chain is one n-ary apply, as MathML writers usually do.
         lines.push(`${depth}<apply>`, `${depth}  <${x.kind}/>`);
-        for (const o of operands) emit(o, depth + "  ");
+        for (const o of x.args) emit(o, depth + "  ");
         lines.push(`${depth}</apply>`);
       }
     }

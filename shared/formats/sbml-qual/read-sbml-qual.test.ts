@@ -3,7 +3,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { EngineError, ParseError } from "../../engine/errors";
 import type { BooleanNetwork } from "../../engine/network";
-import { compileDefinition, printRuleText, readRuleText } from "../../engine/rules";
+import { compileDefinition, firstTooDeep, printRuleText, readRuleText, type Expr } from "../../engine/rules";
 import { modelArb } from "../../engine/rules/rules-arbitrary.test-support";
 import { readSbmlQual } from "./read-sbml-qual";
 import { writeSbmlQual } from "./write-sbml-qual";
@@ -129,7 +129,7 @@ describe("readSbmlQual", () => {
 
   it("readSbmlQual refuses a multi-valued species and names it", () => {
     expect(() => readSbmlQual(fixture("multivalued.libsbml.sbml"))).toThrow(
-      /species Kinase has maxLevel 2; Emulant reads Boolean models only \(maxLevel 1\), so multi-valued species must be made Boolean first \(line 9\)$/,
+      /species Kinase has maxLevel 2; Emulant reads Boolean models only \(maxLevel 1\), so multi-valued species must be made Boolean first \(line 9, column 7\)$/,
     );
   });
 
@@ -201,7 +201,7 @@ describe("readSbmlQual", () => {
     const species = sp("A") + sp("B");
     expect(() =>
       readSbmlQual(wrap(species, tr("tB", "B", term(1, `<apply><plus/>${ci("A")}${cn(1)}</apply>`)))),
-    ).toThrow(/transition tB: MathML <plus> is not part of the Boolean subset Emulant reads \(line 11\)$/);
+    ).toThrow(/transition tB: MathML <plus> is not part of the Boolean subset Emulant reads \(line 11, column 165\)$/);
     expect(() => readSbmlQual(wrap(species, tr("tB", "B", term(1, rel("eq", ci("Z"), cn(1))))))).toThrow(
       /transition tB: <ci>Z<\/ci> names neither/,
     );
@@ -226,5 +226,79 @@ describe("readSbmlQual", () => {
       }),
       { seed: 4801, numRuns: 200 },
     );
+  });
+
+  it("readSbmlQual reports every model error as a ParseError at the element it concerns", () => {
+    const at = (text: string) => {
+      try {
+        readSbmlQual(text);
+      } catch (e) {
+        if (!(e instanceof ParseError)) throw e;
+        return [e.code, e.line, e.reason];
+      }
+      return null;
+    };
+    const species = sp("A") + sp("B");
+    expect(at(wrap(species, tr("tB", "B", term(1, rel("eq", ci("Z"), cn(1))))))).toEqual([
+      "SBML_MATH",
+      11,
+      "transition tB: <ci>Z</ci> names neither a qualitative species nor an input",
+    ]);
+    expect(at(wrap(sp("A") + sp("A"), ""))).toEqual(["SBML_ERROR", 7, "species A is declared twice (first at line 7)"]);
+    expect(at(wrap(sp("A", 'qual:initialLevel="99999999999999999999"'), ""))?.[2]).toBe(
+      'initialLevel of species A must be a non-negative integer, found "99999999999999999999"',
+    );
+    expect(at(wrap(sp("__proto__"), ""))?.[2]).toBe("species id __proto__ cannot be a node name");
+    expect(at(wrap(sp("N".repeat(300)), ""))?.[2]).toBe(
+      "a species id has 300 characters; a node name may have at most 256",
+    );
+    expect(at(wrap(sp("A&#0;"), ""))?.[2]).toMatch(/^species id "A\\u0000" cannot be a node name/);
+  });
+
+  it("readSbmlQual refuses an unknown element inside the qual lists instead of dropping what it holds", () => {
+    const species = sp("A") + sp("B");
+    const misspelt = tr("tB", "B", term(1, rel("eq", ci("A"), cn(1)))).replace(/functionTerm /, "functionterm ");
+    expect(() => readSbmlQual(wrap(species, misspelt.replace("</qual:functionTerm>", "</qual:functionterm>")))).toThrow(
+      /unknown element <functionterm> in <listOfFunctionTerms>; expected <defaultTerm> or <functionTerm> \(line 11, column \d+\)$/,
+    );
+    expect(() => readSbmlQual(wrap(species + "<qual:species/>", ""))).toThrow(
+      /unknown element <species> in <listOfQualitativeSpecies>; expected <qualitativeSpecies>/,
+    );
+    const annotated = tr("tB", "B", term(1, rel("eq", ci("A"), cn(1)))).replace(
+      "<qual:listOfInputs>",
+      "<annotation><x/></annotation><notes/><qual:listOfInputs>",
+    );
+    expect(printRuleText(readSbmlQual(wrap(species, annotated)).definition)).toBe("A' = A\nB' = A\n");
+  });
+
+  it("readSbmlQual keeps a long list of function terms shallow, and refuses terms that alternate too deeply", () => {
+    const species = ["A", "B", "C"].map((x) => sp(x)).join("");
+    const on = term(1, rel("eq", ci("A"), cn(1)));
+    const off = term(0, rel("eq", ci("B"), cn(1)));
+    const many = readSbmlQual(wrap(species, tr("tC", "C", on.repeat(5000)))).definition;
+    const rule = many.nodes[2]!.rule;
+    expect(rule.kind === "or" && rule.args.length).toBe(5000);
+    expect(firstTooDeep(rule as Expr, 1)).toBeNull();
+    const alternating = (n: number) => wrap(species, tr("tC", "C", (on + off).repeat(n)));
+    expect(readSbmlQual(alternating(200)).definition.nodes).toHaveLength(3);
+    expect(() => readSbmlQual(alternating(300))).toThrow(
+      /transition tC: its function terms nest more than 500 levels deep \(line 8, column 29\)$/,
+    );
+  });
+
+  it("readSbmlQual refuses a transition that reads more than 20 species, naming it", () => {
+    const ids = Array.from({ length: 21 }, (_, i) => `s${i}`);
+    const math = `<apply><or/>${ids.map((x) => rel("eq", ci(x), cn(1))).join("")}</apply>`;
+    expect(() => readSbmlQual(wrap(ids.map((x) => sp(x)).join(""), tr("t", "s0", term(1, math))))).toThrow(
+      /transition t reads 21 species; a node may read at most 20/,
+    );
+  });
+
+  it("readSbmlQual gives names and initial levels as objects without a prototype", () => {
+    const model = readSbmlQual(wrap(sp("toString", 'qual:initialLevel="1"') + sp("valueOf"), ""));
+    expect(Object.getPrototypeOf(model.initialLevels)).toBeNull();
+    expect(Object.keys(model.initialLevels)).toEqual(["toString"]);
+    expect(model.initialLevels["valueOf"]).toBeUndefined();
+    expect(model.definition.nodes.map((n) => n.name)).toEqual(["toString", "valueOf"]);
   });
 });

@@ -1,2 +1,2 @@
-export { parseTruthTableCsv, readTruthTableCsv, writeTruthTableCsv } from "./truth-table-csv";
+export { MAX_CSV_CHARS, parseTruthTableCsv, readTruthTableCsv, writeTruthTableCsv } from "./truth-table-csv";
 export type { TruthTableCsvResult } from "./truth-table-csv";
