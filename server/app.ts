@@ -10,7 +10,7 @@ import type { Config } from "./config";
 import { authenticate } from "./http/auth";
 import { errorHandler, notFound } from "./http/errors";
 import { originCheck } from "./http/origin-check";
-import { defaultSignInLimits, type SignInLimits } from "./http/rate-limits";
+import { defaultSignInLimits, defaultSignUpLimits, type SignInLimits, type SignUpLimits } from "./http/rate-limits";
 import { requestLog } from "./http/request-log";
 import { attachRouteRegistry, RouteRegistry } from "./http/route-registry";
 import { lazyRunQueue, type RunQueue } from "./jobs/run-queue";
@@ -41,6 +41,8 @@ export interface AppDeps {
   mailer?: Mailer;
   /** Sign-in throttling; tests lower it to exercise the limit. */
   signInLimits?: SignInLimits;
+  /** Sign-up requests per address; tests raise it, since they create many accounts. */
+  signUpLimits?: SignUpLimits;
   /** Where run jobs are sent; by default a pg-boss sender on DATABASE_URL, started on the first run. */
   runQueue?: RunQueue;
 }
@@ -50,7 +52,7 @@ const defaultClientDir = path.resolve(path.dirname(fileURLToPath(import.meta.url
 export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable("x-powered-by");
-  app.set("trust proxy", "loopback");
+  app.set("trust proxy", deps.config.trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -86,7 +88,11 @@ export function createApp(deps: AppDeps): Express {
   const registry = new RouteRegistry("/api");
   for (const group of [
     healthRoutes(deps),
-    authRoutes({ ...accounts, signInLimits: deps.signInLimits ?? defaultSignInLimits }),
+    authRoutes({
+      ...accounts,
+      signInLimits: deps.signInLimits ?? defaultSignInLimits,
+      signUpLimits: deps.signUpLimits ?? defaultSignUpLimits,
+    }),
     usersRoutes(accounts),
     mailboxRoutes(accounts),
     invitationsRoutes(accounts),

@@ -7,7 +7,20 @@ interface PgError {
   detail?: string;
 }
 
+/** Socket errors of the driver, and the pool giving up, mean the same to a caller as a server shutting down. */
+const unreachable = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "ENOTFOUND", "EPIPE", "EHOSTUNREACH"]);
+
+function databaseUnreachable(err: unknown): boolean {
+  const e = err as { code?: unknown; name?: unknown; message?: unknown } | null;
+  if (typeof e !== "object" || e === null) return false;
+  if (typeof e.code === "string" && unreachable.has(e.code)) return true;
+  if (e.name === "KnexTimeoutError") return true;
+  return typeof e.message === "string" && /^Connection terminated/.test(e.message);
+}
+
 export function translateDatabaseError(err: unknown): HttpError | null {
+  if (databaseUnreachable(err))
+    return new HttpError(503, "DATABASE_UNAVAILABLE", "The database is not reachable right now; try again shortly");
   const e = err as PgError;
   if (typeof e?.code !== "string" || e.code.length !== 5) return null;
   switch (e.code) {

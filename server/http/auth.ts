@@ -8,15 +8,9 @@ import { roleOf } from "../db/repositories/memberships";
 import { findProject } from "../db/repositories/projects";
 import { findUserById } from "../db/repositories/users";
 import { HttpError } from "./errors";
-import {
-  ROTATE_AFTER_SECONDS,
-  SESSION_COOKIE,
-  clearSessionCookie,
-  readCookie,
-  setSessionCookie,
-  signSession,
-  verifySession,
-} from "./session";
+import { sessionIsLive } from "../db/repositories/sessions";
+import { ROTATE_AFTER_SECONDS, SESSION_COOKIE, clearSessionCookie, readCookie, verifySession } from "./session";
+import { renewSession } from "./session-store";
 
 export interface AuthUser {
   id: string;
@@ -46,22 +40,28 @@ function isUuid(value: unknown): value is string {
 
 /**
  * Sets req.user when the session cookie holds a valid token for an existing account whose session version still
- * matches; otherwise the request continues anonymous (and a stale cookie is cleared). Rotates old tokens.
+ * matches and whose session row is live (not signed out, not expired); otherwise the request continues anonymous
+ * (and a stale cookie is cleared). Rotates old tokens.
  */
 export function authenticate(db: Knex, sessionSecret: string): RequestHandler {
   return async (req, res, next) => {
     const token = readCookie(req, SESSION_COOKIE);
     if (!token) return next();
     const claims = await verifySession(sessionSecret, token);
-    const user = claims && isUuid(claims.userId) ? await findUserById(db, claims.userId) : null;
-    if (!claims || !user || user.sessionVersion !== claims.sessionVersion) {
+    const valid = claims !== null && isUuid(claims.userId) && isUuid(claims.sessionId);
+    const user = valid ? await findUserById(db, claims.userId) : null;
+    if (
+      !claims ||
+      !user ||
+      user.sessionVersion !== claims.sessionVersion ||
+      !(await sessionIsLive(db, claims.sessionId, user.id))
+    ) {
       clearSessionCookie(req, res);
       return next();
     }
     req.user = { id: user.id, email: user.email, displayName: user.displayName, siteRole: user.siteRole };
     const ageSeconds = Math.floor(Date.now() / 1000) - claims.issuedAt;
-    if (ageSeconds > ROTATE_AFTER_SECONDS)
-      setSessionCookie(req, res, await signSession(sessionSecret, user.id, user.sessionVersion));
+    if (ageSeconds > ROTATE_AFTER_SECONDS) await renewSession(db, sessionSecret, req, res, user, claims.sessionId);
     next();
   };
 }

@@ -26,7 +26,7 @@ import { HttpError } from "./errors";
 
 export type HttpMethod = "get" | "post" | "put" | "patch" | "delete";
 /** Statuses a route answers with when it has done its job (503: a health check that answers, degraded). */
-export type AnswerStatus = 200 | 201 | 204 | 503;
+export type AnswerStatus = 200 | 201 | 202 | 204 | 503;
 
 /** Who may call a route: anyone, any signed-in user, site administrators, or project members with a capability. */
 export type RouteAccess =

@@ -5,25 +5,27 @@ import { readCookie, SESSION_TTL_SECONDS, signSession, verifySession } from "./s
 
 const secret = "a-test-secret-that-is-at-least-32-characters";
 const userId = "3f1c2a4e-5b6d-4e7f-8a9b-0c1d2e3f4a5b";
+const sessionId = "9a8b7c6d-5e4f-4a3b-8c2d-1e0f9a8b7c6d";
+const claims = (sessionVersion: number) => ({ userId, sessionVersion, sessionId });
 
 describe("signSession / verifySession", () => {
-  it("verifySession(signSession(...)) gives back the user, session version and issue time", async () => {
+  it("verifySession(signSession(...)) gives back the user, session version, session id and issue time", async () => {
     const now = Math.floor(Date.now() / 1000);
-    const token = await signSession(secret, userId, 7, now);
-    expect(await verifySession(secret, token)).toEqual({ userId, sessionVersion: 7, issuedAt: now });
+    const token = await signSession(secret, claims(7), now);
+    expect(await verifySession(secret, token)).toEqual({ userId, sessionVersion: 7, sessionId, issuedAt: now });
   });
 
   it("verifySession refuses a token past its 8-hour lifetime", async () => {
     const issued = Math.floor(Date.now() / 1000) - SESSION_TTL_SECONDS - 5;
-    expect(await verifySession(secret, await signSession(secret, userId, 1, issued))).toBeNull();
+    expect(await verifySession(secret, await signSession(secret, claims(1), issued))).toBeNull();
   });
 
   it("verifySession refuses a token signed with another secret", async () => {
-    expect(await verifySession(secret, await signSession(secret + "x", userId, 1))).toBeNull();
+    expect(await verifySession(secret, await signSession(secret + "x", claims(1)))).toBeNull();
   });
 
   it("verifySession refuses any single-character change to a valid token", async () => {
-    const token = await signSession(secret, userId, 1);
+    const token = await signSession(secret, claims(1));
     await fc.assert(
       fc.asyncProperty(
         fc.nat({ max: token.length - 1 }),

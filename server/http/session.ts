@@ -1,6 +1,7 @@
 // Session tokens: HS256 JWTs (jose) in an httpOnly SameSite=Lax cookie. A token lives 8 hours; once it is older
 // than an hour, the next request gets a fresh one, so an active person stays signed in and a stolen old token
-// expires soon. The token carries the user's session version: changing the password invalidates older tokens.
+// expires soon. The token names a server-side session row (its `jti`), which signing out ends, and carries the
+// user's session version: changing the password invalidates older tokens.
 import type { Request, Response } from "express";
 import { jwtVerify, SignJWT } from "jose";
 
@@ -11,6 +12,7 @@ export const ROTATE_AFTER_SECONDS = 60 * 60;
 export interface SessionClaims {
   userId: string;
   sessionVersion: number;
+  sessionId: string;
   issuedAt: number;
 }
 
@@ -18,13 +20,13 @@ const encoder = new TextEncoder();
 
 export async function signSession(
   secret: string,
-  userId: string,
-  sessionVersion: number,
+  claims: Omit<SessionClaims, "issuedAt">,
   nowSeconds = Math.floor(Date.now() / 1000),
 ): Promise<string> {
-  return new SignJWT({ sv: sessionVersion })
+  return new SignJWT({ sv: claims.sessionVersion })
     .setProtectedHeader({ alg: "HS256" })
-    .setSubject(userId)
+    .setSubject(claims.userId)
+    .setJti(claims.sessionId)
     .setIssuedAt(nowSeconds)
     .setExpirationTime(nowSeconds + SESSION_TTL_SECONDS)
     .setIssuer("emulant")
@@ -35,9 +37,10 @@ export async function signSession(
 export async function verifySession(secret: string, token: string): Promise<SessionClaims | null> {
   try {
     const { payload } = await jwtVerify(token, encoder.encode(secret), { algorithms: ["HS256"], issuer: "emulant" });
-    if (typeof payload.sub !== "string" || typeof payload.sv !== "number" || typeof payload.iat !== "number")
+    const { sub, sv, jti, iat } = payload;
+    if (typeof sub !== "string" || typeof sv !== "number" || typeof jti !== "string" || typeof iat !== "number")
       return null;
-    return { userId: payload.sub, sessionVersion: payload.sv, issuedAt: payload.iat };
+    return { userId: sub, sessionVersion: sv, sessionId: jti, issuedAt: iat };
   } catch {
     return null;
   }

@@ -16,7 +16,7 @@ import {
 } from "@shared/schemas/projects";
 import { listPendingInvitations } from "../db/repositories/invitations";
 import { anyone, project, routeGroup, type RouteGroup } from "../http/route-group";
-import { setSessionCookie, signSession } from "../http/session";
+import { startSession } from "../http/session-store";
 import type { Mailer } from "../mail/mailer";
 import {
   acceptInvitation,
@@ -97,8 +97,7 @@ export function invitationsRoutes(deps: InvitationDeps): RouteGroup {
     response: AcceptedInvitation,
     async handler({ params, body, user, req, res }) {
       const { newAccount, ...accepted } = await acceptInvitation(db, params.token, user, body);
-      if (newAccount)
-        setSessionCookie(req, res, await signSession(deps.sessionSecret, newAccount.id, newAccount.sessionVersion));
+      if (newAccount) await startSession(db, deps.sessionSecret, req, res, newAccount);
       return accepted;
     },
   });

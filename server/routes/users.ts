@@ -5,7 +5,8 @@ import { findUserById, passwordHashOf, updateDisplayName, updatePassword, type U
 import { HttpError } from "../http/errors";
 import { hashPassword, verifyPassword } from "../http/password-hash";
 import { routeGroup, signedIn, type RouteGroup } from "../http/route-group";
-import { setSessionCookie, signSession } from "../http/session";
+import { endSessionsOf } from "../db/repositories/sessions";
+import { startSession } from "../http/session-store";
 
 function profile(u: User): Profile {
   return { id: u.id, email: u.email, displayName: u.displayName, siteRole: u.siteRole, createdAt: u.createdAt };
@@ -44,8 +45,9 @@ export function usersRoutes(deps: { db: Knex; sessionSecret: string }): RouteGro
         throw new HttpError(400, "WRONG_PASSWORD", "The current password is not right");
       }
       const user = await updatePassword(deps.db, me.id, await hashPassword(body.newPassword));
-      // Other sessions end with the version bump; this one continues with a fresh token.
-      setSessionCookie(req, res, await signSession(deps.sessionSecret, user.id, user.sessionVersion));
+      // Every session ends (the version bump also voids their tokens); this browser continues in a new one.
+      await endSessionsOf(deps.db, user.id);
+      await startSession(deps.db, deps.sessionSecret, req, res, user);
       return profile(user);
     },
   });

@@ -28,6 +28,13 @@ export const NewPassword = z
 export const SignUpBody = z.object({ email: Email, displayName: DisplayName, password: NewPassword });
 export type SignUpBody = z.infer<typeof SignUpBody>;
 
+/** Sign-up answers alike for every address, so it never tells whether one has an account. */
+export const SignUpAccepted = z.object({ email: z.string() });
+export type SignUpAccepted = z.infer<typeof SignUpAccepted>;
+
+export const ConfirmSignUpBody = z.object({ token: z.string().min(20).max(200) });
+export type ConfirmSignUpBody = z.infer<typeof ConfirmSignUpBody>;
+
 export const SignInBody = z.object({
   email: Email,
   password: z

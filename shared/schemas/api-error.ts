@@ -27,6 +27,7 @@ export const API_ERROR_CODES = [
   "INVITATION_USED",
   "INVITATION_REVOKED",
   "INVITATION_EXPIRED",
+  "SIGN_UP_LINK_INVALID", // unknown, used or expired sign-up link
   "HIERARCHY_NOT_COMPUTED",
   "NO_EMULATION",
   // Requests that conflict with what is stored.

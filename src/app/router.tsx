@@ -28,6 +28,7 @@ import { RunDetailRoute } from "./routes/run-detail";
 import { RouteErrorBoundary } from "./routes/route-error";
 import { SignInRoute } from "./routes/sign-in";
 import { SignUpRoute } from "./routes/sign-up";
+import { SignUpFinishRoute } from "./routes/sign-up-finish";
 
 export const routes = [
   {
@@ -39,6 +40,7 @@ export const routes = [
       { index: true, element: <HomeRoute /> },
       { path: "sign-in", element: <SignInRoute /> },
       { path: "sign-up", element: <SignUpRoute /> },
+      { path: "sign-up/finish", element: <SignUpFinishRoute /> },
       { path: "invitations/:token", element: <AcceptInvitationRoute /> },
       {
         element: <RequireSignIn />,

@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { newInvitationToken } from "../../server/db/repositories/invitations";
 import { hashPassword } from "../../server/http/password-hash";
 import { routeRegistry } from "../../server/http/route-registry";
-import { SESSION_COOKIE, signSession } from "../../server/http/session";
+import { sessionCookieFor } from "../support/sessions";
 import { insertReduction } from "../../server/db/repositories/reductions";
 import { statementKey } from "../../server/services/reductions/statement-key";
 import { blockEmulationCertificate } from "@shared/engine/certificates";
@@ -54,6 +54,8 @@ interface Row {
   path: string;
   body?: (f: Fixture) => object;
   expected: Statuses;
+  /** The route ends the caller's session, so each cell signs in with a session of its own. */
+  ownSession?: true;
 }
 
 const PASSWORD = "matrix-password-1";
@@ -66,7 +68,13 @@ const rows: Row[] = [
     method: "post",
     path: "/api/auth/sign-up",
     body: (f) => ({ email: f.freshEmail, displayName: "New person", password: PASSWORD }),
-    expected: [201, 201, 201, 201, 201, 201, 201],
+    expected: [202, 202, 202, 202, 202, 202, 202],
+  },
+  {
+    method: "post",
+    path: "/api/auth/sign-up/confirm",
+    body: () => ({ token: "no-such-sign-up-link-token-at-all" }),
+    expected: [404, 404, 404, 404, 404, 404, 404],
   },
   {
     method: "post",
@@ -74,7 +82,7 @@ const rows: Row[] = [
     body: () => ({ email: emailOf.viewer, password: PASSWORD }),
     expected: [200, 200, 200, 200, 200, 200, 200],
   },
-  { method: "post", path: "/api/auth/sign-out", expected: [204, 204, 204, 204, 204, 204, 204] },
+  { method: "post", path: "/api/auth/sign-out", expected: [204, 204, 204, 204, 204, 204, 204], ownSession: true },
   { method: "get", path: "/api/users/me", expected: [401, 200, 200, 200, 200, 200, 200] },
   {
     method: "patch",
@@ -470,7 +478,7 @@ beforeAll(async () => {
     userId[caller] = await insertUser(caller, caller === "admin" ? "admin" : "member", passwordHash);
     emailOf[caller] = `matrix-${caller.toLowerCase()}-${runId}@fixture.emulant.test`;
     // Tokens are minted directly: the matrix is about authorisation, sign-in itself is tested in accounts.test.ts.
-    cookieOf[caller] = `${SESSION_COOKIE}=${await signSession(config.sessionSecret, userId[caller], 1)}`;
+    cookieOf[caller] = await sessionCookieFor(t.db, config.sessionSecret, userId[caller]);
   }
 });
 afterAll(() => t.close());
@@ -529,7 +537,11 @@ describe("role matrix", () => {
       for (const [i, caller] of callers.entries()) {
         const f = await makeFixture();
         let req = request(t.app)[row.method](fill(row.path, f));
-        if (caller !== "anonymous") req = req.set("Cookie", cookieOf[caller]);
+        if (caller !== "anonymous")
+          req = req.set(
+            "Cookie",
+            row.ownSession ? await sessionCookieFor(t.db, config.sessionSecret, userId[caller]) : cookieOf[caller],
+          );
         const res = row.body ? await req.send(row.body(f)) : await req;
         actual[caller] = res.status;
         expected[caller] = row.expected[i]!;

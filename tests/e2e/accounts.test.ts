@@ -1,4 +1,4 @@
-// Accounts and the project list in a real browser: sign-up with its checks, the profile page, the project table's
+// Accounts and the project list in a real browser: sign-up with its checks and its mailed link, the profile page, the project table's
 // search, sort and paging, and deleting a project only after typing its name.
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -36,6 +36,11 @@ describe("accounts and projects in headless Chromium", () => {
     await page.getByLabel("E-mail address").fill(email);
     await page.getByLabel("Password").fill("lena-password-1");
     await page.getByRole("button", { name: "Create account" }).click();
+    await expect.poll(() => page.getByRole("status").textContent()).toContain(`We sent a message to ${email}`);
+    await screenshot(page, "accounts-sign-up-sent");
+    const mail = await server.db("mail_messages").whereRaw("? = any(mail_to)", [email]).first();
+    const link = /http\S+\/sign-up\/finish#[A-Za-z0-9_-]+/.exec(mail.text_body)![0];
+    await page.goto(server.baseUrl + new URL(link).pathname + new URL(link).hash);
     await page.waitForURL(/\/projects$/);
     await expect.poll(() => page.getByTestId("user-menu").textContent()).toContain("Lena Brightwater");
 

@@ -20,14 +20,17 @@ export function testConfig() {
 }
 
 /** Mail always goes to the local SMTP fake (started on the first message), whatever SMTP_URL says. */
-export function buildTestApp(overrides: Pick<AppDeps, "signInLimits" | "runQueue"> = {}): TestApp {
+/** Tests create many accounts from one address, so sign-up is limited only when a test asks for it. */
+const generousSignUp = { windowMs: 60_000, perAddress: 100_000 };
+
+export function buildTestApp(overrides: Pick<AppDeps, "signInLimits" | "signUpLimits" | "runQueue"> = {}): TestApp {
   const config = testConfig();
   const db = createDb(config.DATABASE_URL, 5);
   const log = createLogger(config);
   const mailer = createFakeMailer(db, log);
   // Run jobs go to pg-boss on the test database; the sender opens its connections only when a run is started.
   const runQueue = overrides.runQueue ?? lazyRunQueue(config.DATABASE_URL, log);
-  const app = createApp({ db, log, config, mailer, ...overrides, runQueue });
+  const app = createApp({ db, log, config, mailer, signUpLimits: generousSignUp, ...overrides, runQueue });
   return {
     app,
     db,

@@ -1,10 +1,17 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { SessionUser, type SignUpBody } from "@shared/schemas/accounts";
+import { SessionUser, SignUpAccepted, type SignUpBody } from "@shared/schemas/accounts";
 import { apiRequest } from "@/lib/api-client";
 
-export const signUp = (body: SignUpBody) => apiRequest("/auth/sign-up", SessionUser, { method: "POST", body });
+export const signUp = (body: SignUpBody) => apiRequest("/auth/sign-up", SignUpAccepted, { method: "POST", body });
+
+export const confirmSignUp = (token: string) =>
+  apiRequest("/auth/sign-up/confirm", SessionUser, { method: "POST", body: { token } });
 
 export function useSignUp() {
+  return useMutation({ mutationFn: signUp });
+}
+
+export function useConfirmSignUp() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: signUp, onSuccess: () => queryClient.resetQueries() });
+  return useMutation({ mutationFn: confirmSignUp, onSuccess: () => queryClient.resetQueries() });
 }

@@ -1,4 +1,5 @@
-// A new account: name, e-mail and a password of at least ten characters.
+// A new account: name, e-mail and a password of at least ten characters. The server mails a link that finishes
+// it, so the form ends by saying where to look.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
@@ -9,7 +10,7 @@ import { TextField } from "@/components/ui/text-field";
 import { serverFieldErrors } from "@/lib/utils/server-field-errors";
 import { useSignUp } from "../api/sign-up";
 
-export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
+export function SignUpForm({ onRequested }: { onRequested: (email: string) => void }) {
   const signUp = useSignUp();
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm({
@@ -20,8 +21,8 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   const submit = form.handleSubmit(async (values) => {
     setFormError(null);
     try {
-      await signUp.mutateAsync(values);
-      onSignedUp();
+      const { email } = await signUp.mutateAsync(values);
+      onRequested(email);
     } catch (err) {
       setFormError(serverFieldErrors(err, ["email", "displayName", "password"] as const, form.setError));
     }
@@ -52,7 +53,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
       />
       {formError && <Alert>{formError}</Alert>}
       <Button type="submit" disabled={isSubmitting} className="w-full">
-        {isSubmitting ? "Creating your account…" : "Create account"}
+        {isSubmitting ? "Sending the link…" : "Create account"}
       </Button>
     </form>
   );
