@@ -2,6 +2,7 @@
 // HttpError as it is, a refused run request (RunRequestError) and PostgreSQL errors translated, the rest a logged 500.
 import type { ErrorRequestHandler, RequestHandler } from "express";
 import type { Logger } from "pino";
+import { showInput } from "@shared/engine/rules";
 import type { ApiErrorBody, ApiErrorCode } from "@shared/schemas/api-error";
 import { translateDatabaseError } from "../db/database-errors";
 import { RunRequestError } from "../jobs/run-errors";
@@ -39,6 +40,18 @@ function knownError(err: unknown): HttpError | null {
   return translateDatabaseError(err);
 }
 
+const MESSAGE_MAX = 2000;
+
+/** Details are lists of { field | line, column, message }; their messages are escaped like the main one. */
+function escapeDetailMessages(details: unknown): unknown {
+  if (!Array.isArray(details)) return details;
+  return details.map((d: unknown) =>
+    typeof d === "object" && d !== null && typeof (d as { message?: unknown }).message === "string"
+      ? { ...d, message: showInput((d as { message: string }).message, MESSAGE_MAX) }
+      : d,
+  );
+}
+
 export function errorHandler(log: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
     let httpError = knownError(err);
@@ -46,8 +59,9 @@ export function errorHandler(log: Logger): ErrorRequestHandler {
       log.error({ err, requestId: req.id }, "unhandled error");
       httpError = new HttpError(500, "INTERNAL", `Something went wrong on our side (request ${req.id ?? "unknown"})`);
     }
-    const body: ApiErrorBody["error"] = { code: httpError.code, message: httpError.message };
-    if (httpError.details !== undefined) body.details = httpError.details;
+    // Messages may quote what the caller sent; whatever a handler forgot to escape is escaped here, once for all.
+    const body: ApiErrorBody["error"] = { code: httpError.code, message: showInput(httpError.message, MESSAGE_MAX) };
+    if (httpError.details !== undefined) body.details = escapeDetailMessages(httpError.details);
     res.status(httpError.status).json({ error: body });
   };
 }
