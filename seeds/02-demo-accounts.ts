@@ -1,8 +1,14 @@
 import type { Knex } from "knex";
+import { upsertMembership } from "../server/db/repositories/memberships";
+import { findProject, updateProject } from "../server/db/repositories/projects";
+import { upsertUser } from "../server/db/repositories/users";
 import { hashPassword } from "../server/http/password-hash";
+import { createProject } from "../server/services/projects/project-settings";
 
 // The invented Tidewater Lab, which studies the (equally invented) Glimmerfin alga: a site admin and one member
-// for each project role, all with the password "demo-password", and the lab's demo project. Upserts only.
+// for each project role, all with the password "demo-password", and the lab's demo project. The project is made
+// by the same service as the API's (creator as owner, audit entry); a second run only brings everything back to
+// the demo's state.
 export const DEMO_PROJECT_ID = "00000000-0000-4000-8000-000000000001";
 export const DEMO_PASSWORD = "demo-password";
 
@@ -14,43 +20,19 @@ const people = [
   { email: "viewer@demo.emulant.test", displayName: "Vesna Pellow", siteRole: "member", projectRole: "viewer" },
 ] as const;
 
+const project = {
+  name: "Glimmerfin regulatory atlas",
+  description: "Tidewater Lab's Boolean models of the Glimmerfin alga's light-response and division circuits.",
+};
+
 export async function seed(knex: Knex): Promise<void> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   const ids = new Map<string, string>();
-  for (const p of people) {
-    const [row] = await knex("users")
-      .insert({ email: p.email, display_name: p.displayName, site_role: p.siteRole, password_hash: passwordHash })
-      .onConflict("email")
-      .merge(["display_name", "site_role", "password_hash"])
-      .returning("id");
-    ids.set(p.email, (row as { id: string }).id);
-  }
-  await knex("projects")
-    .insert({
-      id: DEMO_PROJECT_ID,
-      name: "Glimmerfin regulatory atlas",
-      description: "Tidewater Lab's Boolean models of the Glimmerfin alga's light-response and division circuits.",
-      created_by: ids.get("owner@demo.emulant.test"),
-      archived_at: null,
-    })
-    .onConflict("id")
-    .merge(["name", "description", "archived_at"]);
-  for (const p of people) {
-    if (!p.projectRole) continue;
-    await knex("memberships")
-      .insert({ project_id: DEMO_PROJECT_ID, user_id: ids.get(p.email), role: p.projectRole })
-      .onConflict(["project_id", "user_id"])
-      .merge(["role"]);
-  }
-  const hasHistory = await knex("audit_log").where({ project_id: DEMO_PROJECT_ID, action: "project.create" }).first();
-  if (!hasHistory) {
-    await knex("audit_log").insert({
-      project_id: DEMO_PROJECT_ID,
-      actor_id: ids.get("owner@demo.emulant.test"),
-      actor_name: "Oriel Fenwick",
-      action: "project.create",
-      target: "Glimmerfin regulatory atlas",
-      details: JSON.stringify({}),
-    });
-  }
+  for (const p of people) ids.set(p.email, (await upsertUser(knex, { ...p, passwordHash })).id);
+  const owner = ids.get("owner@demo.emulant.test")!;
+  if (await findProject(knex, DEMO_PROJECT_ID))
+    await updateProject(knex, DEMO_PROJECT_ID, { ...project, archived: false });
+  else await createProject(knex, owner, project, DEMO_PROJECT_ID);
+  for (const p of people)
+    if (p.projectRole) await upsertMembership(knex, DEMO_PROJECT_ID, ids.get(p.email)!, p.projectRole);
 }

@@ -64,10 +64,10 @@ export async function listProjectsFor(db: Knex, user: { id: string; siteRole: st
 
 export async function insertProject(
   db: Knex,
-  input: { name: string; description: string; createdBy: string },
+  input: { name: string; description: string; createdBy: string; id?: string },
 ): Promise<Project> {
   const [row] = await db("projects as p")
-    .insert({ name: input.name, description: input.description, created_by: input.createdBy })
+    .insert({ id: input.id, name: input.name, description: input.description, created_by: input.createdBy })
     .returning(["id", "name", "description", "archived_at", "created_at", "updated_at"]);
   return toProject(row as ProjectRow);
 }

@@ -90,3 +90,21 @@ export async function passwordHashOf(db: Knex, id: string): Promise<string | nul
     { password_hash: string } | undefined;
   return row?.password_hash ?? null;
 }
+
+/** The seed's upsert: an account with this address gets the given name, role and hash, or is created with them. */
+export async function upsertUser(
+  db: Knex,
+  input: { email: string; displayName: string; passwordHash: string; siteRole: SiteRole },
+): Promise<User> {
+  const [row] = await db("users")
+    .insert({
+      email: input.email.toLowerCase(),
+      display_name: input.displayName,
+      password_hash: input.passwordHash,
+      site_role: input.siteRole,
+    })
+    .onConflict("email")
+    .merge(["display_name", "site_role", "password_hash"])
+    .returning(columns);
+  return toUser(row as UserRow);
+}

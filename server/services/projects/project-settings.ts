@@ -11,9 +11,16 @@ export async function createProject(
   db: Knex,
   creatorId: string,
   input: z.output<typeof CreateProjectBody>,
+  /** A fixed id, for the demo seed whose links must stay stable; the API lets the database choose. */
+  id?: string,
 ): Promise<ProjectListItem> {
   const created = await db.transaction(async (trx) => {
-    const p = await insertProject(trx, { name: input.name, description: input.description, createdBy: creatorId });
+    const p = await insertProject(trx, {
+      id,
+      name: input.name,
+      description: input.description,
+      createdBy: creatorId,
+    });
     await upsertMembership(trx, p.id, creatorId, "owner");
     await recordAudit(trx, { projectId: p.id, actorId: creatorId, action: "project.create", target: p.name });
     return p;
