@@ -5,6 +5,12 @@
 /** Node name -> value. Key order is kept (names are identifiers, never integer-like, so JSON keeps it too). */
 export type Assignment = Readonly<Record<string, 0 | 1>>;
 
+/** Same nodes with the same values, whatever order the keys were written in. */
+export function sameAssignment(a: Assignment, b: Assignment): boolean {
+  const keys = Object.keys(a);
+  return keys.length === Object.keys(b).length && keys.every((k) => Object.hasOwn(b, k) && a[k] === b[k]);
+}
+
 /** Synchronous: all nodes at once (the default). Asynchronous: general asynchronous, one node flips per step. */
 export type UpdateKind = "synchronous" | "asynchronous";
 

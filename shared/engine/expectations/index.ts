@@ -7,7 +7,7 @@ export type {
   OutcomeKind,
   Expectation,
 } from "./expectation";
-export { OUTCOME_KINDS, NO_CONDITION } from "./expectation";
+export { OUTCOME_KINDS, NO_CONDITION, sameAssignment } from "./expectation";
 export {
   parseAssignment,
   parseNodeList,

@@ -2,7 +2,7 @@
 // unit, cancellation between and inside units, each row handed to onRow as it is done so a worker can checkpoint),
 // mergeScreenShards puts shards that tile the units back together and ranks the rows; runScreen does both at once.
 import { CancelledError, EngineError } from "../errors";
-import type { Assignment } from "../expectations";
+import { sameAssignment, type Assignment } from "../expectations";
 import type { BooleanNetwork } from "../network";
 import type { Progress, ShouldStop } from "../progress";
 import { MAX_TABLE_NODES } from "../update";
@@ -110,7 +110,7 @@ export function mergeScreenShards(shards: readonly ScreenShard[]): ScreenResult 
   const sorted = [...shards].sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
   let next = 0;
   for (const shard of sorted) {
-    const samePhenotype = JSON.stringify(shard.phenotype) === JSON.stringify(first.phenotype);
+    const samePhenotype = sameAssignment(shard.phenotype, first.phenotype);
     if (shard.totalUnits !== first.totalUnits || shard.method !== first.method || !samePhenotype)
       throw new EngineError("BAD_SHARD", "the shards come from different screens");
     if (shard.range.start !== next)

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { CancelledError } from "../errors";
+import { sameAssignment } from "../expectations";
 import { networkFromFunctions, type BooleanNetwork } from "../network";
 import { perturbNetwork } from "../perturbation";
 import { analyseSynchronous } from "../state-graph";
@@ -111,7 +112,7 @@ describe("perturbation screens", () => {
     const base = referenceRow(net, {}, { 3: 1, 7: 0 });
     expect(result.baseline.basinShare).toBe(base.share);
     for (let i = 0; i < 10; i++) {
-      const row = result.rows.find((r) => JSON.stringify(r.perturbation) === JSON.stringify({ [`g${i}`]: 0 }))!;
+      const row = result.rows.find((r) => sameAssignment(r.perturbation, { [`g${i}`]: 0 }))!;
       const ref = referenceRow(net, { [i]: 0 }, { 3: 1, 7: 0 });
       expect(row.basinShare).toBe(ref.share);
       expect(row.attractorsAfter).toBe(ref.cycles.size);
