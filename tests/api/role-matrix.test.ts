@@ -81,6 +81,7 @@ const PASSWORD = "matrix-password-1";
 // anonymous, non-member, viewer, reviewer, modeler, owner, admin
 const rows: Row[] = [
   { method: "get", path: "/api/health", expected: [200, 200, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/openapi.json", expected: [200, 200, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/auth/session", expected: [200, 200, 200, 200, 200, 200, 200] },
   {
     method: "post",
