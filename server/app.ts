@@ -26,6 +26,7 @@ import { membersRoutes } from "./routes/members";
 import { modelHierarchyRoutes } from "./routes/model-hierarchy";
 import { modelsRoutes } from "./routes/models";
 import { notificationsRoutes } from "./routes/notifications";
+import { openApiRoutes } from "./routes/openapi";
 import { projectsRoutes } from "./routes/projects";
 import { reductionsRoutes } from "./routes/reductions";
 import { runsRoutes } from "./routes/runs";
@@ -106,6 +107,7 @@ export function createApp(deps: AppDeps): Express {
     reductionsRoutes(runs),
     modelHierarchyRoutes(deps),
     automataRoutes(deps),
+    openApiRoutes(deps),
   ])
     registry.mount(api, group);
   api.use(notFound);

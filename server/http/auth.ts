@@ -1,9 +1,12 @@
 // Who is calling and what may they do. `authenticate` runs on every API request and sets req.user from the
-// session cookie; routes then ask for the least they need: requireUser, requireSiteAdmin, or projectAccess(db,
+// session cookie, or from a personal access token (Authorization: Bearer), which then also sets req.accessToken;
+// routes then ask for the least they need: requireUser, requireSiteAdmin, or projectAccess(db,
 // capability), which also hides projects the caller is not in behind a 404 so their existence does not leak.
-import type { RequestHandler } from "express";
+import type { Request, RequestHandler } from "express";
 import type { Knex } from "knex";
 import { can, type Capability, type ProjectRole, type SiteRole } from "@shared/types/roles";
+import type { TokenScope } from "@shared/schemas/access-tokens";
+import { useAccessToken } from "../db/repositories/access-tokens";
 import { roleOf } from "../db/repositories/memberships";
 import { findProject } from "../db/repositories/projects";
 import { findUserById } from "../db/repositories/users";
@@ -25,11 +28,27 @@ export interface ProjectContext {
   role: ProjectRole | null;
 }
 
+/** The token a request was authenticated with: what it may do on top of its owner's role. */
+export interface RequestToken {
+  id: string;
+  scope: TokenScope;
+  /** null: every project the owner is in. */
+  projectIds: string[] | null;
+}
+
 declare module "express-serve-static-core" {
   interface Request {
     user?: AuthUser;
     project?: ProjectContext;
+    accessToken?: RequestToken;
   }
+}
+
+/** The token of an Authorization header; null without one, "" for a header that is not `Bearer <token>`. */
+export function bearerToken(header: string | undefined): string | null {
+  if (header === undefined) return null;
+  const match = /^Bearer +(\S+) *$/i.exec(header);
+  return match ? match[1]! : "";
 }
 
 const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -45,6 +64,9 @@ function isUuid(value: unknown): value is string {
  */
 export function authenticate(db: Knex, sessionSecret: string): RequestHandler {
   return async (req, res, next) => {
+    const bearer = bearerToken(req.headers.authorization);
+    // A request that presents a token is judged by it alone: any cookie it also carries is ignored.
+    if (bearer !== null) return next(await tokenCaller(db, req, bearer));
     const token = readCookie(req, SESSION_COOKIE);
     if (!token) return next();
     const claims = await verifySession(sessionSecret, token);
@@ -66,6 +88,23 @@ export function authenticate(db: Knex, sessionSecret: string): RequestHandler {
   };
 }
 
+async function tokenCaller(db: Knex, req: Request, bearer: string): Promise<HttpError | undefined> {
+  const invalid = new HttpError(
+    401,
+    "TOKEN_INVALID",
+    "The access token is unknown, expired or revoked; send Authorization: Bearer <token> with a live token",
+  );
+  if (!bearer) return invalid;
+  const token = await useAccessToken(db, bearer);
+  const user = token ? await findUserById(db, token.userId) : null;
+  if (!token || !user) return invalid;
+  // A token acts with member rights only: site-administrator powers stay with the browser session, so a leaked
+  // token of an administrator reaches no more than that person's own projects.
+  req.user = { id: user.id, email: user.email, displayName: user.displayName, siteRole: "member" };
+  req.accessToken = { id: token.id, scope: token.scope, projectIds: token.projectIds };
+  return undefined;
+}
+
 export const requireUser: RequestHandler = (req, _res, next) => {
   if (!req.user) return next(new HttpError(401, "UNAUTHENTICATED", "Sign in to continue"));
   next();
@@ -73,6 +112,8 @@ export const requireUser: RequestHandler = (req, _res, next) => {
 
 export const requireSiteAdmin: RequestHandler = (req, _res, next) => {
   if (!req.user) return next(new HttpError(401, "UNAUTHENTICATED", "Sign in to continue"));
+  if (req.accessToken)
+    return next(new HttpError(403, "TOKEN_NOT_ALLOWED", "Site-administrator actions do not accept access tokens"));
   if (req.user.siteRole !== "admin")
     return next(new HttpError(403, "FORBIDDEN", "Only site administrators may do this"));
   next();
@@ -97,6 +138,9 @@ export function projectAccess(db: Knex, capability: Capability): RequestHandler 
     if (!project) return next(notFound);
     const role = await roleOf(db, project.id, user.id);
     if (role === null && user.siteRole !== "admin") return next(notFound);
+    const limit = req.accessToken?.projectIds;
+    if (limit && !limit.includes(project.id))
+      return next(new HttpError(403, "TOKEN_NOT_ALLOWED", "This access token is limited to other projects"));
     if (!can(role, user.siteRole, capability)) {
       return next(new HttpError(403, "FORBIDDEN", `Your role in this project (${role ?? "none"}) does not allow this`));
     }

@@ -34,4 +34,10 @@ describe("originCheck", () => {
       code: "BAD_ORIGIN",
     });
   });
+
+  it("originCheck lets a foreign origin through when the request carries a bearer token, and refuses it otherwise", () => {
+    const foreign = { host: "127.0.0.1:3000", origin: "https://script-host.example" };
+    expect(run("POST", { ...foreign, authorization: "Bearer emu_abc" })).toBeNull();
+    expect(run("POST", { ...foreign, authorization: "Basic dXNlcjpwdw==" })).toMatchObject({ code: "BAD_ORIGIN" });
+  });
 });

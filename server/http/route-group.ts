@@ -20,6 +20,7 @@
 import { Router, type Request, type RequestHandler, type Response } from "express";
 import type { Knex } from "knex";
 import { z } from "zod";
+import type { TokenScope } from "@shared/schemas/access-tokens";
 import type { Capability } from "@shared/types/roles";
 import { projectAccess, requireSiteAdmin, requireUser, type AuthUser, type ProjectContext } from "./auth";
 import { HttpError } from "./errors";
@@ -84,6 +85,8 @@ export interface RouteSpec<P, Q, B, R, A extends RouteAccess> {
   files?: readonly string[];
   /** Middleware run after the access check and before validation (form parsing, rate limits). */
   before?: readonly RequestHandler[];
+  /** false: only a browser session may call this route, never an access token (e.g. managing tokens). */
+  tokens?: false;
   handler(input: RouteInput<P, Q, B, A>): Answer<R> | Promise<Answer<R>>;
 }
 
@@ -101,6 +104,30 @@ export interface RouteRecord {
   statuses: readonly AnswerStatus[];
   produces?: string;
   files?: readonly string[];
+  /** The access-token scope the route needs, or null when tokens are refused. */
+  tokenScope: TokenScope | null;
+}
+
+/**
+ * Reading is what a read token may do: project routes that need only project:read (including POSTs that compute an
+ * answer and store nothing) and GETs elsewhere. Site-admin routes and routes that opt out never take tokens.
+ */
+function tokenScopeOf(method: HttpMethod, access: RouteAccess, tokens: false | undefined): TokenScope | null {
+  if (tokens === false || access.kind === "site-admin") return null;
+  if (access.kind === "project") return access.capability === "project:read" ? "read" : "write";
+  return method === "get" ? "read" : "write";
+}
+
+function tokenCheck(scope: TokenScope | null): RequestHandler {
+  return (req, _res, next) => {
+    const token = req.accessToken;
+    if (!token || scope === "read" || (scope === "write" && token.scope === "write")) return next();
+    const message =
+      scope === null
+        ? "This action is open to a browser session only, not to access tokens"
+        : "This access token may only read; create a token with the write scope for this";
+    next(new HttpError(403, "TOKEN_NOT_ALLOWED", message));
+  };
 }
 
 type Part = "params" | "query" | "body";
@@ -190,6 +217,7 @@ export class RouteGroup {
       statuses: typeof spec.status === "number" ? [spec.status] : (spec.status ?? [200]),
       produces: spec.produces,
       files: spec.files,
+      tokenScope: tokenScopeOf(method, spec.access, spec.tokens),
     };
     this.routes.push(record);
     const [status] = record.statuses as [AnswerStatus];
@@ -212,7 +240,13 @@ export class RouteGroup {
       } else if (status === 204) res.status(204).end();
       else res.status(status).json({ data: answer });
     };
-    this.router[method](path, ...this.accessCheck(spec.access), ...(spec.before ?? []), handle);
+    this.router[method](
+      path,
+      tokenCheck(record.tokenScope),
+      ...this.accessCheck(spec.access),
+      ...(spec.before ?? []),
+      handle,
+    );
   }
 
   private accessCheck(access: RouteAccess): RequestHandler[] {

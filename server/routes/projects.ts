@@ -31,7 +31,11 @@ export function projectsRoutes(deps: { db: Knex; log: Logger }): RouteGroup {
     summary: "The projects the caller is a member of (every project for site administrators)",
     access: signedIn,
     response: z.array(ProjectListItem),
-    handler: ({ user }) => listProjectsFor(db, user),
+    async handler({ user, req }) {
+      const all = await listProjectsFor(db, user);
+      const limit = req.accessToken?.projectIds;
+      return limit ? all.filter((p) => limit.includes(p.id)) : all;
+    },
   });
 
   routes.post("/", {
@@ -40,7 +44,11 @@ export function projectsRoutes(deps: { db: Knex; log: Logger }): RouteGroup {
     body: CreateProjectBody,
     response: ProjectListItem,
     status: 201,
-    handler: ({ body, user }) => createProject(db, user.id, body),
+    handler({ body, user, req }) {
+      if (req.accessToken?.projectIds)
+        throw new HttpError(403, "TOKEN_NOT_ALLOWED", "A token limited to chosen projects cannot create projects");
+      return createProject(db, user.id, body);
+    },
   });
 
   routes.get("/:projectId", {

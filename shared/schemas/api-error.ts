@@ -20,6 +20,8 @@ export const API_ERROR_CODES = [
   "WRONG_ACCOUNT",
   "FORBIDDEN",
   "BAD_ORIGIN",
+  "TOKEN_INVALID", // an Authorization: Bearer token that is unknown, expired or revoked
+  "TOKEN_NOT_ALLOWED", // the token's scope or project list does not cover this route
   "RATE_LIMITED",
   // Things that do not exist, or no longer can be used.
   "NOT_FOUND",

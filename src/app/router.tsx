@@ -14,6 +14,7 @@ import { ModelDetailRoute } from "./routes/model-detail";
 import { ModelNewRoute } from "./routes/model-new";
 import { NotFoundRoute } from "./routes/not-found";
 import { ProfileRoute } from "./routes/profile";
+import { ApiReferenceRoute } from "./routes/api-reference";
 import { ProjectAuditRoute } from "./routes/project-audit";
 import { ProjectLayoutRoute } from "./routes/project-layout";
 import { ProjectListRoute } from "./routes/project-list";
@@ -42,6 +43,7 @@ export const routes = [
       { path: "sign-up", element: <SignUpRoute /> },
       { path: "sign-up/finish", element: <SignUpFinishRoute /> },
       { path: "invitations/:token", element: <AcceptInvitationRoute /> },
+      { path: "api-reference", element: <ApiReferenceRoute /> },
       {
         element: <RequireSignIn />,
         children: [

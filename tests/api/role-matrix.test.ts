@@ -1,11 +1,13 @@
 // The whole role matrix: every API route, called by each kind of caller, answers exactly the status in the table.
 // Each cell runs against its own freshly made project (seed-independent fixtures), so a successful delete in one
-// cell cannot change what the next cell sees.
+// cell cannot change what the next cell sees. Personal access tokens call every route too: a token answers as its
+// owner would, except where its scope or the route refuses tokens (see tokenExpected).
 import { randomUUID } from "node:crypto";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { newInvitationToken } from "../../server/db/repositories/invitations";
 import { hashPassword } from "../../server/http/password-hash";
+import { insertAccessToken, newAccessTokenSecret } from "../../server/db/repositories/access-tokens";
 import { routeRegistry } from "../../server/http/route-registry";
 import { sessionCookieFor } from "../support/sessions";
 import { insertReduction } from "../../server/db/repositories/reductions";
@@ -17,6 +19,17 @@ import { buildTestApp, testConfig } from "../support/test-app";
 
 const callers = ["anonymous", "nonMember", "viewer", "reviewer", "modeler", "owner", "admin"] as const;
 type Caller = (typeof callers)[number];
+type Person = Exclude<Caller, "anonymous">;
+/** Token callers: whose token, and its scope. */
+const tokenCallers = [
+  ["viewer", "read"],
+  ["modeler", "read"],
+  ["viewer", "write"],
+  ["reviewer", "write"],
+  ["modeler", "write"],
+  ["owner", "write"],
+  ["admin", "write"],
+] as const satisfies readonly (readonly [Person, "read" | "write"])[];
 type Statuses = [
   anonymous: number,
   nonMember: number,
@@ -46,6 +59,8 @@ interface Fixture {
   /** A proposed reduction of that model onto itself, with the certificate that proves it. */
   reductionId: string;
   certificate: object;
+  /** A token id nobody has. */
+  unknownTokenId: string;
 }
 
 /** One route; `path` may name any Fixture field in braces ({projectId}), which each cell fills from its own fixture. */
@@ -56,6 +71,11 @@ interface Row {
   expected: Statuses;
   /** The route ends the caller's session, so each cell signs in with a session of its own. */
   ownSession?: true;
+  /**
+   * Which tokens may call the route: "read" for every token (the default for GET), "write" for write tokens only
+   * (the default for other methods), "none" when the route takes a browser session only.
+   */
+  tokens?: "read" | "write" | "none";
 }
 
 const PASSWORD = "matrix-password-1";
@@ -63,6 +83,7 @@ const PASSWORD = "matrix-password-1";
 // anonymous, non-member, viewer, reviewer, modeler, owner, admin
 const rows: Row[] = [
   { method: "get", path: "/api/health", expected: [200, 200, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/openapi.json", expected: [200, 200, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/auth/session", expected: [200, 200, 200, 200, 200, 200, 200] },
   {
     method: "post",
@@ -95,8 +116,23 @@ const rows: Row[] = [
     path: "/api/users/me/password",
     body: () => ({ currentPassword: "not-the-password", newPassword: "another-password-2" }),
     expected: [401, 400, 400, 400, 400, 400, 400],
+    tokens: "none",
   },
-  { method: "get", path: "/api/mailbox", expected: [401, 403, 403, 403, 403, 403, 200] },
+  { method: "get", path: "/api/users/me/tokens", expected: [401, 200, 200, 200, 200, 200, 200], tokens: "none" },
+  {
+    method: "post",
+    path: "/api/users/me/tokens",
+    body: () => ({ name: "Matrix token", scope: "read", expiresInDays: 7 }),
+    expected: [401, 201, 201, 201, 201, 201, 201],
+    tokens: "none",
+  },
+  {
+    method: "delete",
+    path: "/api/users/me/tokens/{unknownTokenId}",
+    expected: [401, 404, 404, 404, 404, 404, 404],
+    tokens: "none",
+  },
+  { method: "get", path: "/api/mailbox", expected: [401, 403, 403, 403, 403, 403, 200], tokens: "none" },
   { method: "get", path: "/api/projects", expected: [401, 200, 200, 200, 200, 200, 200] },
   {
     method: "post",
@@ -181,6 +217,7 @@ const rows: Row[] = [
     path: "/api/projects/{projectId}/models/validate",
     body: () => ({ ruleText: "A' = !A\n" }),
     expected: [401, 404, 200, 200, 200, 200, 200],
+    tokens: "read",
   },
   // A JSON body carries no file: callers allowed to write get 400, the others are stopped before reading it.
   {
@@ -232,12 +269,14 @@ const rows: Row[] = [
     path: "/api/projects/{projectId}/models/{modelId}/revisions/1/perturbation",
     body: () => ({ knockOut: ["A"] }),
     expected: [401, 404, 200, 200, 200, 200, 200],
+    tokens: "read",
   },
   {
     method: "post",
     path: "/api/projects/{projectId}/models/{modelId}/revisions/1/trajectory",
     body: () => ({ initial: "01" }),
     expected: [401, 404, 200, 200, 200, 200, 200],
+    tokens: "read",
   },
   {
     method: "get",
@@ -314,6 +353,19 @@ const config = testConfig();
 const userId = {} as Record<Exclude<Caller, "anonymous">, string>;
 const emailOf = {} as Record<Exclude<Caller, "anonymous">, string>;
 const cookieOf = {} as Record<Exclude<Caller, "anonymous">, string>;
+const bearerOf = new Map<string, string>();
+const tokenLabel = ([person, scope]: (typeof tokenCallers)[number]) => `${person} ${scope} token`;
+
+/**
+ * A token answers as its owner, with two limits: a read token gets 403 where writing is needed, and no token is
+ * taken where the route wants a browser session. An administrator's token acts with member rights, so it answers
+ * as a non-member would.
+ */
+function tokenExpected(row: Row, [person, scope]: (typeof tokenCallers)[number]): number {
+  const needs = row.tokens ?? (row.method === "get" ? "read" : "write");
+  if (needs === "none" || (needs === "write" && scope === "read")) return 403;
+  return row.expected[callers.indexOf(person === "admin" ? "nonMember" : person)]!;
+}
 const runId = randomUUID().slice(0, 8);
 
 async function insertUser(label: string, siteRole: "admin" | "member", passwordHash: string): Promise<string> {
@@ -398,6 +450,7 @@ async function makeFixture(): Promise<Fixture> {
     targetUserId,
     invitationId: (invitation as { id: string }).id,
     token: accept.token,
+    unknownTokenId: randomUUID(),
     freshEmail: `fresh-${randomUUID().slice(0, 8)}@fixture.emulant.test`,
   };
 }
@@ -480,6 +533,20 @@ beforeAll(async () => {
     // Tokens are minted directly: the matrix is about authorisation, sign-in itself is tested in accounts.test.ts.
     cookieOf[caller] = await sessionCookieFor(t.db, config.sessionSecret, userId[caller]);
   }
+  for (const tc of tokenCallers) {
+    const { token, tokenHash } = newAccessTokenSecret();
+    const [person, scope] = tc;
+    const expiresAt = new Date(Date.now() + 86_400_000);
+    await insertAccessToken(t.db, {
+      userId: userId[person],
+      name: "matrix",
+      scope,
+      projectIds: null,
+      expiresAt,
+      tokenHash,
+    });
+    bearerOf.set(tokenLabel(tc), token);
+  }
 });
 afterAll(() => t.close());
 
@@ -545,6 +612,23 @@ describe("role matrix", () => {
         const res = row.body ? await req.send(row.body(f)) : await req;
         actual[caller] = res.status;
         expected[caller] = row.expected[i]!;
+      }
+      expect(actual).toEqual(expected);
+    });
+
+    it(`${row.method.toUpperCase()} ${row.path} answers access-token callers as their owners, within their scope`, async () => {
+      const actual: Record<string, number> = {};
+      const expected: Record<string, number> = {};
+      for (const tc of tokenCallers) {
+        const f = await makeFixture();
+        // A foreign Origin too: token requests skip the origin check meant for cookies.
+        const req = request(t.app)
+          [row.method](fill(row.path, f))
+          .set("Authorization", `Bearer ${bearerOf.get(tokenLabel(tc))}`)
+          .set("Origin", "https://notebook.example");
+        const res = row.body ? await req.send(row.body(f)) : await req;
+        actual[tokenLabel(tc)] = res.status;
+        expected[tokenLabel(tc)] = tokenExpected(row, tc);
       }
       expect(actual).toEqual(expected);
     });

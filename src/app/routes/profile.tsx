@@ -1,9 +1,12 @@
 import { Alert } from "@/components/ui/alert";
 import { useProfile } from "@/features/accounts/api/get-profile";
+import { AccessTokens } from "@/features/accounts/components/access-tokens";
 import { DisplayNameForm, PasswordForm } from "@/features/accounts/components/profile-forms";
+import { useProjects } from "@/features/projects/api/list-projects";
 
 export function ProfileRoute() {
   const { data: profile, error, isPending } = useProfile();
+  const projects = useProjects();
   if (isPending) return <p className="text-sm text-slate-500">Loading…</p>;
   if (error) return <Alert>{error.message}</Alert>;
   return (
@@ -21,6 +24,10 @@ export function ProfileRoute() {
       <div className="rounded-lg border border-slate-200 bg-white p-5">
         <h2 className="mb-4 text-lg font-semibold">Password</h2>
         <PasswordForm />
+      </div>
+      <div className="rounded-lg border border-slate-200 bg-white p-5">
+        <h2 className="mb-4 text-lg font-semibold">Access tokens</h2>
+        <AccessTokens projects={projects.data ?? []} />
       </div>
     </section>
   );

@@ -79,6 +79,14 @@ export function UserMenu() {
             >
               Profile
             </Link>
+            <Link
+              role="menuitem"
+              to="/api-reference"
+              className="block px-4 py-2 hover:bg-slate-100"
+              onClick={() => setOpen(false)}
+            >
+              API reference
+            </Link>
             <button
               role="menuitem"
               type="button"
