@@ -1,5 +1,6 @@
 // The interactive pool's one task: runs the named operation of interactive-ops.ts and answers its value, or the
 // HttpError it threw as data (a class does not survive structured cloning).
+import "../yield-to-requests";
 import { HttpError } from "../../http/errors";
 import { interactiveOps, type InteractiveAnswer, type InteractiveCall } from "../interactive-ops";
 
