@@ -21,6 +21,7 @@ const Env = z.object({
   /** V8 old-generation limit of each interactive thread. */
   INTERACTIVE_MEMORY_MB: z.coerce.number().int().min(64).max(16_384).default(768),
 });
+/** Read once from the environment; a test may lower a limit for one call. */
 export const interactiveLimits = Env.parse(process.env);
 
 const taskFile = path.join(path.dirname(fileURLToPath(import.meta.url)), "tasks", "interactive.ts");
