@@ -8,6 +8,7 @@ import { createMailer } from "./mail/mailer";
 import { lazyRunQueue } from "./jobs/run-queue";
 import { loadRunSettings } from "./jobs/run-settings";
 import { startRunWorker, type RunWorker } from "./jobs/run-worker";
+import { closeInteractivePool } from "./workers/interactive-pool";
 
 const config = loadConfig();
 const log = createLogger(config);
@@ -46,6 +47,7 @@ async function shutdown(signal: string): Promise<void> {
   server.closeAllConnections();
   await runWorker?.stop();
   await runQueue.stop();
+  await closeInteractivePool();
   await mailer.close();
   await db.destroy();
   process.exit(0);

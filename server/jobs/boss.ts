@@ -31,8 +31,17 @@ export async function startBoss(databaseUrl: string, log: Logger, opts: { superv
   return boss;
 }
 
-export async function sendShardJob(boss: PgBoss, data: ShardJobData, startAfterSeconds?: number): Promise<string> {
-  const id = await boss.send(SHARD_QUEUE, data, startAfterSeconds ? { startAfter: startAfterSeconds } : {});
+/** `priority`: higher is fetched first (see jobs/queue-order.ts); equal priorities go oldest first. */
+export async function sendShardJob(
+  boss: PgBoss,
+  data: ShardJobData,
+  startAfterSeconds?: number,
+  priority = 0,
+): Promise<string> {
+  const id = await boss.send(SHARD_QUEUE, data, {
+    ...(startAfterSeconds ? { startAfter: startAfterSeconds } : {}),
+    ...(priority ? { priority } : {}),
+  });
   if (!id) throw new Error(`The job queue refused a job for shard ${data.shardId}`);
   return id;
 }

@@ -5,7 +5,6 @@ import { createHash } from "node:crypto";
 import type { Knex } from "knex";
 import type { Run, StartRunBody } from "@shared/schemas/runs";
 import { recordAudit } from "../db/repositories/audit-log";
-import { setShardJob } from "../db/repositories/run-shards";
 import {
   countUnfinishedRuns,
   deleteRun,
@@ -19,7 +18,7 @@ import {
 } from "../db/repositories/runs";
 import { runKind } from "./kinds";
 import { RunRequestError } from "./run-errors";
-import type { RunQueue } from "./run-queue";
+import { enqueueRunShards, promoteNextRun, type RunQueue } from "./run-queue";
 
 export interface LifecycleDeps {
   db: Knex;
@@ -110,11 +109,8 @@ export async function submitRun(deps: LifecycleDeps, req: RunRequest): Promise<{
 }
 
 /** A failed send is not fatal: the reaper re-sends jobs for queued shards that have none. */
-async function enqueueShards(deps: LifecycleDeps, runId: string, shardIds: string[]): Promise<void> {
-  for (const shardId of shardIds) {
-    const jobId = await deps.queue.send({ runId, shardId });
-    await setShardJob(deps.db, shardId, jobId);
-  }
+function enqueueShards(deps: LifecycleDeps, runId: string, shardIds: string[]): Promise<void> {
+  return enqueueRunShards(deps.db, deps.queue, runId, shardIds);
 }
 
 export async function cancelRun(deps: LifecycleDeps, run: Run, by: RunActor): Promise<Run> {
@@ -128,6 +124,7 @@ export async function cancelRun(deps: LifecycleDeps, run: Run, by: RunActor): Pr
       `This run has already ${run.state === "succeeded" ? "succeeded" : "ended"}; there is nothing to cancel`,
     );
   await recordRunAudit(deps, run, by, "run.cancel", { kind: run.kind });
+  await promoteNextRun(deps.db, deps.queue, run.projectId);
   return (await getRun(deps.db, run.id)) ?? cancelled;
 }
 

@@ -36,6 +36,7 @@ import {
 import { retrying, SHARD_QUEUE, sendShardJob, startBoss, type ShardJobData } from "./boss";
 import { runKind } from "./kinds";
 import { notifyRunFinished } from "./notify";
+import { bossRunQueue, promoteNextRun } from "./run-queue";
 import type { RunKindDefinition } from "./run-kind";
 import type { RunSettings } from "./run-settings";
 import { startShardHeartbeat } from "./shard-heartbeat";
@@ -70,7 +71,13 @@ interface Worker extends RunWorkerDeps {
   name: string;
 }
 
+/** Every run that ends in a worker passes here: the next run of its project may now jump the queue. */
 async function notify(w: Worker, run: Run): Promise<void> {
+  try {
+    await promoteNextRun(w.db, bossRunQueue(w.boss), run.projectId);
+  } catch (err) {
+    w.log.warn({ err: { message: (err as Error).message }, runId: run.id }, "promoting the project's next run failed");
+  }
   try {
     await notifyRunFinished(
       {

@@ -33,15 +33,13 @@ import { HttpError } from "../http/errors";
 import { project, routeGroup, type RouteGroup } from "../http/route-group";
 import { modelDetail, modelRevisions, storedRevision } from "../services/models/model-detail";
 import { exportModel } from "../services/models/model-formats";
-import { validateRuleText } from "../services/models/model-reading";
 import { createModelFromRules, generateModel, importModel } from "../services/models/new-model";
 import { reviseModel } from "../services/models/new-revision";
-import {
-  comparePerturbation,
-  revisionAttractors,
-  revisionStructure,
-  revisionTrajectory,
-} from "../services/models/revision-analyses";
+import { checkTrajectorySize, comparePerturbation, revisionAttractors } from "../services/models/revision-analyses";
+import { INLINE_INPUT_CHARS, inPlaceIfSmall } from "../workers/interactive-pool";
+
+/** Models up to this many nodes get their trajectory and structure view on the request thread. */
+const INLINE_VIEW_NODES = 200;
 
 const upload = multer({
   storage: multer.memoryStorage(),
@@ -91,7 +89,8 @@ export function modelsRoutes(deps: { db: Knex }): RouteGroup {
     params: ProjectParams,
     body: ValidateBody,
     response: ValidateResult,
-    handler: ({ body }) => validateRuleText(body.ruleText),
+    handler: ({ body }) =>
+      inPlaceIfSmall(body.ruleText.length <= INLINE_INPUT_CHARS, "validateRuleText", body.ruleText),
   });
 
   routes.post("/", {
@@ -234,7 +233,8 @@ export function modelsRoutes(deps: { db: Knex }): RouteGroup {
     response: TrajectoryResult,
     async handler({ params, body }) {
       const { stored } = await storedRevision(db, params.projectId, params.modelId, params.revision);
-      return revisionTrajectory(stored, body);
+      checkTrajectorySize(stored, body);
+      return inPlaceIfSmall(stored.nodeCount <= INLINE_VIEW_NODES, "revisionTrajectory", stored, body);
     },
   });
 
@@ -245,7 +245,7 @@ export function modelsRoutes(deps: { db: Knex }): RouteGroup {
     response: StructureResult,
     async handler({ params }) {
       const { stored } = await storedRevision(db, params.projectId, params.modelId, params.revision);
-      return revisionStructure(stored);
+      return inPlaceIfSmall(stored.nodeCount <= INLINE_VIEW_NODES, "revisionStructure", stored);
     },
   });
 

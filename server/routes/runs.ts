@@ -3,7 +3,7 @@
 import type { Knex } from "knex";
 import { ProjectParams } from "@shared/schemas/projects";
 import { RunList, RunListQuery, RunParamsPath, Run, StartRunBody, StartRunResponse } from "@shared/schemas/runs";
-import { getRun, listRuns } from "../db/repositories/runs";
+import { getRun, listRuns, withQueuePositions } from "../db/repositories/runs";
 import { HttpError } from "../http/errors";
 import { project, reply, routeGroup, type RouteGroup } from "../http/route-group";
 import { cancelRun, removeRun, retryRun, submitRun } from "../jobs/run-lifecycle";
@@ -48,7 +48,8 @@ export function runsRoutes(deps: RunsRouterDeps): RouteGroup {
         body,
         audit: { action: "run.start", details: { kind: body.kind } },
       });
-      return reply(out.reused ? 200 : 201, { ...out.run, reused: out.reused });
+      const [run] = await withQueuePositions(db, [out.run]);
+      return reply(out.reused ? 200 : 201, { ...run!, reused: out.reused });
     },
   });
 
@@ -58,7 +59,7 @@ export function runsRoutes(deps: RunsRouterDeps): RouteGroup {
     params: ProjectParams,
     query: RunListQuery,
     response: RunList,
-    handler: ({ project, query }) => listRuns(db, project.id, query),
+    handler: async ({ project, query }) => withQueuePositions(db, await listRuns(db, project.id, query)),
   });
 
   routes.get("/:runId", {
@@ -66,7 +67,7 @@ export function runsRoutes(deps: RunsRouterDeps): RouteGroup {
     access: project("project:read"),
     params: RunParamsPath,
     response: Run,
-    handler: ({ params }) => runOf(params.projectId, params.runId),
+    handler: async ({ params }) => (await withQueuePositions(db, [await runOf(params.projectId, params.runId)]))[0]!,
   });
 
   routes.post("/:runId/cancel", {

@@ -1,6 +1,7 @@
 // The frame of every worker task: parses what the database handed over with the task's schemas, turns the port and
 // stop flag into the engine's onProgress/shouldStop callbacks, and catches engine errors so they cross the thread
 // boundary with their code (structured clone drops custom error fields).
+import "./yield-to-requests";
 import type { z } from "zod";
 import { CancelledError, EngineError } from "@shared/engine/errors";
 import type { Progress, ShouldStop } from "@shared/engine/progress";

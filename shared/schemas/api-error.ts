@@ -9,6 +9,8 @@ export const API_ERROR_CODES = [
   "PARSE_ERROR", // model text or file with mistakes; details list { line, column, message }
   "UNSUPPORTED_FORMAT",
   "TOO_LARGE",
+  "LIMIT_EXCEEDED", // an input over a documented limit (docs/limits.md), refused before any work; details name it
+  "WORK_LIMIT", // the work needed more time or memory than one request may use (422)
   "UNKNOWN_NODE",
   "UNKNOWN_KIND",
   "CONFIRMATION_MISMATCH",

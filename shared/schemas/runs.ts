@@ -70,6 +70,8 @@ export const Run = z.object({
   result: z.unknown().nullable(),
   error: RunError.nullable(),
   attempt: z.number().int(),
+  /** A queued run's place in the queue of every project (1 starts next); null once it runs or ends. */
+  queuePosition: z.number().int().positive().nullable().default(null),
 });
 export type Run = z.infer<typeof Run>;
 

@@ -152,11 +152,33 @@ const projectId = projects.data[0]!.id;
 const p = `/api/projects/${projectId}`;
 const created: Record<string, string> = {};
 const bigNodeCount = 250_000;
+// Every large payload is built and serialised here, before any probing: building it inside a case would block this
+// process's own event loop and show up as health latency that the server never had.
+const json = (body: unknown) => JSON.stringify(body);
+const payloads = {
+  blankLines: json({ ruleText: "A' = \n".repeat(300_000) }),
+  hugeChain: json({ name: "abuse huge", ruleText: chain(bigNodeCount) }),
+  denseRules: json({
+    ruleText: Array.from(
+      { length: 20_000 },
+      (_, i) => `D${i}' = ${Array.from({ length: 10 }, (_, k) => `D${(i + k + 1) % 20_000}`).join(" & ")}`,
+    ).join("\n"),
+  }),
+  csv: "0,1,1,0,1,0,0,1,1,0\n".repeat(240_000),
+  deepSbml: nestedSbml(100_000),
+  nestedParams: nestedJson(200_000),
+  oneString: json({ ruleText: "x".repeat(5 * 1024 * 1024 - 100) }),
+  allOnes2000: "1".repeat(2000),
+};
 
 const cases: Case[] = [
   {
     name: "validate: 300,000 lines of `A' = ` (viewer)",
-    run: () => call(viewer, "POST", `${p}/models/validate`, { ruleText: "A' = \n".repeat(300_000) }),
+    run: () => call(viewer, "POST", `${p}/models/validate`, payloads.blankLines),
+  },
+  {
+    name: "validate: 20,000 nodes reading 10 regulators each (2 MB of tables to build)",
+    run: () => call(viewer, "POST", `${p}/models/validate`, payloads.denseRules),
   },
   {
     name: "validate: one rule of 4,100 terms",
@@ -181,19 +203,16 @@ const cases: Case[] = [
   },
   {
     name: "upload: 4.8 MB CSV without a node header",
-    run: () => {
-      const row = "0,1,1,0,1,0,0,1,1,0\n";
-      return call(modeler, "POST", `${p}/models/upload`, upload("big.csv", row.repeat(240_000), "text/csv"));
-    },
+    run: () => call(modeler, "POST", `${p}/models/upload`, upload("big.csv", payloads.csv, "text/csv")),
   },
   {
     name: "upload: SBML with 100,000 nested <apply><not/>",
-    run: () => call(modeler, "POST", `${p}/models/upload`, upload("deep.sbml", nestedSbml(100_000), "application/xml")),
+    run: () => call(modeler, "POST", `${p}/models/upload`, upload("deep.sbml", payloads.deepSbml, "application/xml")),
   },
   {
     name: `create: a ${bigNodeCount.toLocaleString("en")}-node model`,
     run: async () => {
-      const answer = await call(modeler, "POST", `${p}/models`, { name: "abuse huge", ruleText: chain(bigNodeCount) });
+      const answer = await call(modeler, "POST", `${p}/models`, payloads.hugeChain);
       const id = (answer.body as { data?: { model?: { id: string } } })?.data?.model?.id;
       if (id) created.huge = id;
       return answer;
@@ -227,6 +246,33 @@ const cases: Case[] = [
     },
   },
   {
+    name: "structure view of the 2,000-node model",
+    run: async () =>
+      created.twoThousand
+        ? call(viewer, "GET", `${p}/models/${created.twoThousand}/revisions/1/structure`)
+        : { status: -1, bytes: 0, ms: 0, code: "SKIPPED (model not stored)", body: null },
+  },
+  {
+    name: "trajectory of the 2,000-node model, 999 steps (just within the 2,000,000-value limit)",
+    run: async () =>
+      created.twoThousand
+        ? call(viewer, "POST", `${p}/models/${created.twoThousand}/revisions/1/trajectory`, {
+            initial: payloads.allOnes2000,
+            steps: 999,
+          })
+        : { status: -1, bytes: 0, ms: 0, code: "SKIPPED (model not stored)", body: null },
+  },
+  {
+    name: "trajectory of the 2,000-node model, 1,000 steps (over the limit)",
+    run: async () =>
+      created.twoThousand
+        ? call(viewer, "POST", `${p}/models/${created.twoThousand}/revisions/1/trajectory`, {
+            initial: payloads.allOnes2000,
+            steps: 1000,
+          })
+        : { status: -1, bytes: 0, ms: 0, code: "SKIPPED (model not stored)", body: null },
+  },
+  {
     name: "store a certificate with a 2,000-node source",
     run: async () => {
       if (!created.twoThousand) return { status: -1, bytes: 0, ms: 0, code: "SKIPPED (source not stored)", body: null };
@@ -252,11 +298,11 @@ const cases: Case[] = [
   },
   {
     name: "run parameters nested 200,000 deep",
-    run: () => call(modeler, "POST", `${p}/runs`, nestedJson(200_000)),
+    run: () => call(modeler, "POST", `${p}/runs`, payloads.nestedParams),
   },
   {
     name: "5 MB JSON body of one string",
-    run: () => call(modeler, "POST", `${p}/models/validate`, { ruleText: "x".repeat(5 * 1024 * 1024 - 100) }),
+    run: () => call(modeler, "POST", `${p}/models/validate`, payloads.oneString),
   },
 ];
 

@@ -1,6 +1,7 @@
 // Runs: one row per requested analysis; shards are in run-shards.ts. Rows become the shared Run shape here.
 import type { Knex } from "knex";
 import type { Run, RunError, RunState } from "@shared/schemas/runs";
+import { queuePositions, type UnfinishedRun } from "../../jobs/queue-order";
 
 interface RunRow {
   id: string;
@@ -42,6 +43,7 @@ export function toRun(r: RunRow): Run {
     shardsDone: Number(r.shards_done ?? 0),
     timeLimitSeconds: r.time_limit_seconds,
     createdAt: r.created_at.toISOString(),
+    queuePosition: null,
     startedAt: iso(r.started_at),
     finishedAt: iso(r.finished_at),
     result: r.result ?? null,
@@ -240,4 +242,32 @@ export async function revisionRuleText(db: Knex, projectId: string, revisionId: 
     .select("r.rule_text")
     .first();
   return row ? (row.rule_text as string) : null;
+}
+
+/** Every queued or running run in outline, oldest first: what the queue order (jobs/queue-order.ts) is decided on. */
+export async function unfinishedRuns(db: Knex, projectId?: string): Promise<UnfinishedRun[]> {
+  const q = db("runs")
+    .select("id", "project_id", "created_at", "state")
+    .whereIn("state", ["queued", "running"])
+    .orderBy([{ column: "created_at" }, { column: "id" }]);
+  if (projectId) q.where({ project_id: projectId });
+  const rows: { id: string; project_id: string; created_at: Date; state: "queued" | "running" }[] = await q;
+  return rows.map((r) => ({ id: r.id, projectId: r.project_id, createdAt: r.created_at.getTime(), state: r.state }));
+}
+
+/** The runs with each queued one's place in the queue filled in. */
+export async function withQueuePositions<R extends Run>(db: Knex, runs: R[]): Promise<R[]> {
+  if (!runs.some((r) => r.state === "queued")) return runs;
+  const positions = queuePositions(await unfinishedRuns(db));
+  return runs.map((r) => (r.state === "queued" ? { ...r, queuePosition: positions.get(r.id) ?? null } : r));
+}
+
+/** The unfinished shards of a run, in shard order (the first one is the run's start). */
+export async function unfinishedShardIds(db: Knex, runId: string): Promise<string[]> {
+  const rows: { id: string }[] = await db("run_shards")
+    .select("id")
+    .where({ run_id: runId })
+    .whereNot({ state: "done" })
+    .orderBy("shard_index");
+  return rows.map((r) => r.id);
 }

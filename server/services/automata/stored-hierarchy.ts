@@ -10,7 +10,8 @@ import {
   type StoredHierarchy,
 } from "../../db/repositories/eca-hierarchies";
 import { HttpError } from "../../http/errors";
-import { computeHierarchyRecord, recordFromRun } from "./eca-hierarchy-compute";
+import { offThread } from "../../workers/interactive-pool";
+import { recordFromRun } from "./eca-hierarchy-compute";
 
 function notStored(key: HierarchyParameters): HttpError {
   return new HttpError(
@@ -46,7 +47,7 @@ export function hierarchyStore(db: Knex): HierarchyStore {
       let pending = computing.get(id);
       if (!pending) {
         pending = (async () => {
-          const record = computeHierarchyRecord(key, { computedBy: userId });
+          const record = await offThread("computeHierarchyRecord", key, userId);
           return (await saveHierarchy(db, record)).hierarchy;
         })().finally(() => computing.delete(id));
         computing.set(id, pending);

@@ -12,8 +12,8 @@ import { insertModel } from "../../db/repositories/models";
 import { generatedModel } from "./generated-model";
 import type { ModelAuthor } from "./model-author";
 import { modelDetail } from "./model-detail";
-import { readUpload } from "./model-formats";
-import { readRules, type ReadModel } from "./model-reading";
+import { INLINE_INPUT_CHARS, inPlaceIfSmall } from "../../workers/interactive-pool";
+import type { ReadModel } from "./model-reading";
 import { networkSummary } from "./network-summary";
 
 export interface FirstRevision {
@@ -84,12 +84,12 @@ async function createModel(
   return modelDetail(db, author.projectId, modelId, 1);
 }
 
-export function createModelFromRules(
+export async function createModelFromRules(
   db: Knex,
   author: ModelAuthor,
   input: { id?: string; name: string; description: string; ruleText: string },
 ): Promise<ModelDetail> {
-  const model = readRules(input.ruleText);
+  const model = await inPlaceIfSmall(input.ruleText.length <= INLINE_INPUT_CHARS, "readRules", input.ruleText);
   return createModel(db, author, { ...input, model, source: "rules" }, "model.create");
 }
 
@@ -121,14 +121,19 @@ export interface UploadedFile {
 }
 
 /** A model read from an uploaded file, which is kept byte for byte beside revision 1. */
-export function importModel(
+export async function importModel(
   db: Knex,
   author: ModelAuthor,
   upload: UploadedFile,
   fields: { name?: string; description: string },
 ): Promise<ModelDetail> {
   const fileName = upload.originalName.normalize("NFC").slice(-255);
-  const { suggestedName, ...read } = readUpload(fileName, upload.bytes);
+  const { suggestedName, ...read } = await inPlaceIfSmall(
+    upload.bytes.length <= INLINE_INPUT_CHARS,
+    "readUpload",
+    fileName,
+    upload.bytes,
+  );
   const name = fields.name ?? suggestedName ?? (fileName.replace(/\.[^.]+$/, "").trim() || "Imported model");
   return createModel(
     db,

@@ -8,7 +8,7 @@ import { lockNextRevision, setLatestRevision } from "../../db/repositories/model
 import { HttpError } from "../../http/errors";
 import type { ModelAuthor } from "./model-author";
 import { modelDetail } from "./model-detail";
-import { readRules } from "./model-reading";
+import { INLINE_INPUT_CHARS, inPlaceIfSmall } from "../../workers/interactive-pool";
 import { networkSummary } from "./network-summary";
 
 export async function reviseModel(
@@ -17,7 +17,7 @@ export async function reviseModel(
   modelId: string,
   input: { ruleText: string; message: string },
 ): Promise<ModelDetail> {
-  const model = readRules(input.ruleText);
+  const model = await inPlaceIfSmall(input.ruleText.length <= INLINE_INPUT_CHARS, "readRules", input.ruleText);
   const revision = await db.transaction(async (trx) => {
     const next = await lockNextRevision(trx, author.projectId, modelId);
     if (next === null) throw new HttpError(404, "NOT_FOUND", "No such model in this project");

@@ -108,6 +108,21 @@ export async function comparePerturbation(
   };
 }
 
+/** States one trajectory answer may hold (nodes × (steps + 1)): about 2 MB of JSON, checked before any work. */
+export const TRAJECTORY_MAX_CELLS = 2_000_000;
+
+export function checkTrajectorySize(stored: StoredRevision, request: z.output<typeof TrajectoryBody>): void {
+  const cells = stored.nodeCount * (request.steps + 1);
+  if (cells > TRAJECTORY_MAX_CELLS)
+    throw new HttpError(
+      422,
+      "LIMIT_EXCEEDED",
+      `A trajectory may hold at most ${TRAJECTORY_MAX_CELLS.toLocaleString("en")} node values (nodes × (steps + 1)); ` +
+        `this model has ${stored.nodeCount} nodes, so ask for at most ${Math.max(0, Math.floor(TRAJECTORY_MAX_CELLS / stored.nodeCount) - 1)} steps`,
+      { limit: "trajectoryCells", max: TRAJECTORY_MAX_CELLS, value: cells },
+    );
+}
+
 /** One trajectory from a given state; the asynchronous schemes draw from a generator seeded with `seed`. */
 export function revisionTrajectory(stored: StoredRevision, request: z.output<typeof TrajectoryBody>): TrajectoryResult {
   const net = compileDefinition(stored.definition);

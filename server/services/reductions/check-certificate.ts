@@ -1,14 +1,15 @@
 // A certificate checked by the independent verifier, as the stored record a reviewer reads: valid or not, why,
 // when and by whom (null when the server checked it on its own, e.g. when a search found it).
+// Re-simulation grows with the source network, so the request thread hands it to the interactive pool.
 import { verifyCertificate } from "@shared/engine/certificates";
 import type { Verification } from "@shared/schemas/reductions";
+import { offThread } from "../../workers/interactive-pool";
 
-export function checkCertificate(
-  certificate: unknown,
+function verification(
+  report: ReturnType<typeof verifyCertificate>,
   checkedBy: Verification["checkedBy"],
-  occasion = "",
+  occasion: string,
 ): Verification {
-  const report = verifyCertificate(certificate);
   return {
     isValid: report.valid,
     message: report.valid
@@ -17,4 +18,22 @@ export function checkCertificate(
     checkedAt: new Date().toISOString(),
     checkedBy,
   };
+}
+
+/** In the calling thread: for worker tasks and merges, which run off the request thread already. */
+export function checkCertificate(
+  certificate: unknown,
+  checkedBy: Verification["checkedBy"],
+  occasion = "",
+): Verification {
+  return verification(verifyCertificate(certificate), checkedBy, occasion);
+}
+
+/** For requests: the verifier runs in the interactive pool under its time and memory limits. */
+export async function checkCertificateOffThread(
+  certificate: unknown,
+  checkedBy: Verification["checkedBy"],
+  occasion = "",
+): Promise<Verification> {
+  return verification(await offThread("verifyCertificate", certificate), checkedBy, occasion);
 }

@@ -13,7 +13,7 @@ import {
   setVerification,
 } from "../../db/repositories/reductions";
 import { HttpError } from "../../http/errors";
-import { checkCertificate } from "./check-certificate";
+import { checkCertificateOffThread } from "./check-certificate";
 
 /** Who acts on a project's reductions: the audit log and the verification records name them. */
 export interface ReductionActor {
@@ -37,7 +37,7 @@ export async function decideReduction(
   const r = await reductionOf(db, by.projectId, reductionId);
   const state = decision.decision === "approve" ? "approved" : "rejected";
   if (state === "approved") {
-    const verification = checkCertificate(r.certificate, by.user);
+    const verification = await checkCertificateOffThread(r.certificate, by.user);
     if (!verification.isValid)
       throw new HttpError(
         409,
@@ -66,7 +66,7 @@ export async function decideReduction(
 
 export async function reverifyReduction(db: Knex, by: ReductionActor, reductionId: string): Promise<ReductionDetail> {
   const r = await reductionOf(db, by.projectId, reductionId);
-  const verification = checkCertificate(r.certificate, by.user);
+  const verification = await checkCertificateOffThread(r.certificate, by.user);
   await db.transaction(async (trx) => {
     await setVerification(trx, r.id, verification);
     await insertEvent(trx, {

@@ -7,7 +7,7 @@ import { networkToCertificate } from "@shared/engine/certificates";
 import type { Certificate, ReductionDetail } from "@shared/schemas/reductions";
 import { recordAudit } from "../../db/repositories/audit-log";
 import { HttpError } from "../../http/errors";
-import { checkCertificate } from "./check-certificate";
+import { checkCertificateOffThread } from "./check-certificate";
 import { proposeReduction } from "./propose-reduction";
 import { latestRevisionNetwork, type RevisionNetwork } from "./revision-network";
 import { reductionOf, type ReductionActor } from "./review";
@@ -57,7 +57,7 @@ export async function uploadCertificate(
     }
     targetRevisionId = target.revisionId;
   }
-  const verification = checkCertificate(certificate, by.user);
+  const verification = await checkCertificateOffThread(certificate, by.user);
   if (!verification.isValid)
     throw new HttpError(400, "INVALID_CERTIFICATE", `The certificate does not verify: ${verification.message}`);
   const stored = await db.transaction(async (trx) => {

@@ -31,7 +31,7 @@ export function RunDetailRoute() {
       {back}
       <div className="flex flex-wrap items-center gap-3">
         <h2 className="text-lg font-semibold text-slate-900">{run.kind}</h2>
-        <RunStateBadge state={run.state} />
+        <RunStateBadge state={run.state} queuePosition={run.queuePosition} />
         {run.attempt > 1 && <span className="text-xs text-slate-500">attempt {run.attempt}</span>}
       </div>
       <RunProgress run={run} />

@@ -28,7 +28,13 @@ export function RunProgress({ run, label = "Run progress" }: { run: Run; label?:
           <span className="font-normal text-slate-500">· {run.progressPhase}</span>
         </span>
         <span className="text-slate-600" data-testid="run-times">
-          {run.startedAt ? <>Elapsed {formatDuration(elapsedMs)}</> : "Waiting for a worker"}
+          {run.startedAt ? (
+            <>Elapsed {formatDuration(elapsedMs)}</>
+          ) : run.queuePosition ? (
+            `Waiting for a worker · place ${run.queuePosition} in the queue`
+          ) : (
+            "Waiting for a worker"
+          )}
           {isLive &&
             run.startedAt &&
             (remainingMs === null ? " · estimating time left…" : ` · about ${formatDuration(remainingMs)} left`)}

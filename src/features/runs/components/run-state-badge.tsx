@@ -8,7 +8,8 @@ const tones: Record<RunState, string> = {
   cancelled: "bg-amber-100 text-amber-800",
 };
 
-export function RunStateBadge({ state }: { state: RunState }) {
+/** A queued run shows its place in the queue of every project (1 starts at the next free worker thread). */
+export function RunStateBadge({ state, queuePosition = null }: { state: RunState; queuePosition?: number | null }) {
   return (
     <span
       className={`inline-flex rounded-full px-2.5 py-0.5 text-xs font-medium capitalize ${tones[state]}`}
@@ -16,6 +17,11 @@ export function RunStateBadge({ state }: { state: RunState }) {
       data-state={state}
     >
       {state}
+      {state === "queued" && queuePosition !== null && (
+        <span className="ml-1 font-normal normal-case" data-testid="queue-position">
+          · {queuePosition === 1 ? "next in line" : `place ${queuePosition} in line`}
+        </span>
+      )}
     </span>
   );
 }

@@ -36,7 +36,7 @@ export function RunsTable({ projectId, runs }: { projectId: string; runs: Run[] 
                 </Link>
               </td>
               <td className="px-4 py-2">
-                <RunStateBadge state={run.state} />
+                <RunStateBadge state={run.state} queuePosition={run.queuePosition} />
               </td>
               <td className="px-4 py-2">
                 <ProgressBar
