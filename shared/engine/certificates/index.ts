@@ -16,5 +16,10 @@ export {
   type EmbeddingWitnessJson,
   type CoarseGrainingWitnessJson,
 } from "./certificate-format";
-export { verifyCertificate, MAX_VERIFIED_SOURCE_NODES, type VerificationReport } from "./verify-certificate";
+export {
+  verifyCertificate,
+  MAX_VERIFIED_SOURCE_NODES,
+  MAX_CERTIFICATE_TIME,
+  type VerificationReport,
+} from "./verify-certificate";
 export { composeCertificates } from "./compose-certificates";

@@ -16,6 +16,12 @@ export interface VerificationReport {
 /** Largest source for which coarse-graining certificates are checked state by state. */
 export const MAX_VERIFIED_SOURCE_NODES = 22;
 
+/**
+ * Largest time scale a certificate may state (docs/certificates.md). Searches go to t = 64 and compositions multiply
+ * time scales, so 2^16 leaves room for chains of reductions; a bound is needed because the check steps F t times.
+ */
+export const MAX_CERTIFICATE_TIME = 65_536;
+
 interface Net {
   names: string[];
   index: Map<string, number>;
@@ -124,6 +130,7 @@ export function verifyCertificate(input: unknown): VerificationReport {
     notion = input.notion;
     if (typeof input.time !== "number" || !Number.isInteger(input.time) || input.time < 1)
       fail('"time" must be a whole number of at least 1');
+    if (input.time > MAX_CERTIFICATE_TIME) fail(`"time" must be at most ${MAX_CERTIFICATE_TIME}`);
     time = input.time;
     const F = readNet(input.source, "source");
     const G = readNet(input.target, "target");
@@ -181,7 +188,7 @@ function checkBlocks(F: Net, G: Net, w: Record<string, unknown>, t: number, coun
     base[v] = value;
   }
   for (let v = 0; v < n; v++)
-    if (owner[v] === null && !(F.names[v]! in w.context))
+    if (owner[v] === null && !Object.hasOwn(w.context, F.names[v]!))
       fail(`source node "${F.names[v]}" is neither in a block nor in the context`);
   const encode = (x: Uint8Array) => {
     const s = Uint8Array.from(base);
@@ -204,7 +211,7 @@ function checkEmbedding(F: Net, G: Net, w: Record<string, unknown>, t: number, c
   const images = new Set<string>();
   const e = (x: Uint8Array) => {
     const key = show(x);
-    const value = bits(map[key], n, `image of target state ${key}`);
+    const value = bits(Object.hasOwn(map, key) ? map[key] : undefined, n, `image of target state ${key}`);
     return Uint8Array.from(value, (c) => (c === "1" ? 1 : 0));
   };
   if (Object.keys(map).length !== 2 ** m) fail(`the map must list all ${2 ** m} target states`);
