@@ -20,6 +20,7 @@ export {
   verifyCertificate,
   MAX_VERIFIED_SOURCE_NODES,
   MAX_CERTIFICATE_TIME,
+  MAX_CHECK_WORK,
   type VerificationReport,
 } from "./verify-certificate";
 export { composeCertificates } from "./compose-certificates";

@@ -34,6 +34,12 @@ export const MAX_VERIFIED_SOURCE_NODES = 22;
  */
 export const MAX_CERTIFICATE_TIME = 65_536;
 
+/**
+ * Most word evaluations one check may take (32-state batches x time scale x source nodes), about ten seconds on one
+ * core: with it a stated time scale near the bound, or a large target, is refused at once instead of simulated.
+ */
+export const MAX_CHECK_WORK = 2 ** 27;
+
 interface Net extends WordNet {
   names: string[];
   index: Map<string, number>;
@@ -99,6 +105,16 @@ function stateText(x: number, length: number): string {
   let s = "";
   for (let i = 0; i < length; i++) s += Math.floor(x / 2 ** i) % 2;
   return s;
+}
+
+/** Refuse, before simulating, a check whose cost exceeds MAX_CHECK_WORK. */
+function boundWork(states: number, t: number, sourceNodes: number): void {
+  const work = Math.ceil(states / 32) * t * Math.max(sourceNodes, 1);
+  if (work > MAX_CHECK_WORK)
+    fail(
+      `checking needs ${work} word evaluations (${states} states, time scale ${t}, ${sourceNodes} source nodes); ` +
+        `at most ${MAX_CHECK_WORK} are done`,
+    );
 }
 
 /** States in batch b (0 .. 32 b + 31, clipped to `count`). */
@@ -183,6 +199,7 @@ function checkBlocks(F: Net, G: Net, w: Record<string, unknown>, t: number, coun
   for (let v = 0; v < n; v++)
     if (owner[v] === null && !Object.hasOwn(w.context, F.names[v]!))
       fail(`source node "${F.names[v]}" is neither in a block nor in the context`);
+  boundWork(2 ** m, t, n);
   const contextWords = Int32Array.from(base, (b) => (b ? -1 : 0));
   const slots = blockOf.flatMap((b, j) =>
     b!.nodes.map((v, i) => ({ v, j, zero: b!.zero[i] === "1" ? -1 : 0, one: b!.one[i] === "1" ? -1 : 0 })),
@@ -221,6 +238,7 @@ function checkEmbedding(F: Net, G: Net, w: Record<string, unknown>, t: number, c
   const map = w.map;
   const n = F.names.length;
   const m = G.names.length;
+  boundWork(2 ** m, t, n);
   if (Object.keys(map).length !== 2 ** m) fail(`the map must list all ${2 ** m} target states`);
   const count = 2 ** m;
   const seen = new Set<string>();
@@ -275,6 +293,7 @@ function checkCoarseGraining(F: Net, G: Net, w: Record<string, unknown>, t: numb
   const m = G.names.length;
   if (n > MAX_VERIFIED_SOURCE_NODES)
     fail(`coarse-graining certificates are checked for sources of at most ${MAX_VERIFIED_SOURCE_NODES} nodes`);
+  boundWork(2 ** n, t, n);
   const obs = new Array<{ inputs: number[]; table: Uint8Array } | null>(m).fill(null);
   for (const raw of w.observables as unknown[]) {
     if (!isRecord(raw) || typeof raw.target !== "string") fail("each observable names its target node");
