@@ -19,13 +19,14 @@ function names(list: string | undefined): string[] {
 }
 
 function holds(list: string | undefined): Record<string, 0 | 1> {
-  const out: Record<string, 0 | 1> = {};
+  // A Map, so that a node named "__proto__" becomes an own property like any other name.
+  const out = new Map<string, 0 | 1>();
   for (const item of names(list)) {
     const m = /^([^=\s]+)\s*=\s*([01])$/.exec(item);
     if (!m) throw new UsageError(`--hold takes NODE=0 or NODE=1 items, got "${item}"`);
-    out[m[1]!] = m[2] === "1" ? 1 : 0;
+    out.set(m[1]!, m[2] === "1" ? 1 : 0);
   }
-  return out;
+  return Object.fromEntries(out);
 }
 
 export function run(args: string[]): Promise<number> {

@@ -100,10 +100,10 @@ export function blockEmulationCertificate(
     readonly context: readonly number[];
   },
 ): ReductionCertificate {
-  const context: Record<string, 0 | 1> = {};
-  witness.context.forEach((value, v) => {
-    if (value !== -1) context[source.names[v]!] = value ? 1 : 0;
-  });
+  // fromEntries makes own properties even for a node named "__proto__", which plain assignment would not.
+  const context: Record<string, 0 | 1> = Object.fromEntries(
+    witness.context.flatMap((value, v) => (value === -1 ? [] : [[source.names[v]!, value ? 1 : 0] as const])),
+  );
   return {
     format: CERTIFICATE_FORMAT,
     version: CERTIFICATE_VERSION,

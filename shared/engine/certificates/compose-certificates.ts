@@ -108,13 +108,14 @@ function composeBlocks(w1: BlockEmulationWitnessJson, w2: BlockEmulationWitnessJ
     });
     return { target: outer.target, nodes, zero, one };
   });
-  const context: Record<string, 0 | 1> = { ...w1.context };
+  // A Map, not assignment into an object, so that a node named "__proto__" is kept like any other.
+  const context = new Map<string, 0 | 1>(Object.entries(w1.context));
   for (const [g, value] of Object.entries(w2.context)) {
     const b = blockOf(g);
     const word = value === 1 ? b.one : b.zero;
-    b.nodes.forEach((name, i) => (context[name] = word[i] === "1" ? 1 : 0));
+    b.nodes.forEach((name, i) => context.set(name, word[i] === "1" ? 1 : 0));
   }
-  return { blocks, context };
+  return { blocks, context: Object.fromEntries(context) };
 }
 
 function composeObservables(

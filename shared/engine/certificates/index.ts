@@ -16,5 +16,11 @@ export {
   type EmbeddingWitnessJson,
   type CoarseGrainingWitnessJson,
 } from "./certificate-format";
-export { verifyCertificate, MAX_VERIFIED_SOURCE_NODES, type VerificationReport } from "./verify-certificate";
+export {
+  verifyCertificate,
+  MAX_VERIFIED_SOURCE_NODES,
+  MAX_CERTIFICATE_TIME,
+  MAX_CHECK_WORK,
+  type VerificationReport,
+} from "./verify-certificate";
 export { composeCertificates } from "./compose-certificates";

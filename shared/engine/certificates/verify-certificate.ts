@@ -1,7 +1,19 @@
 // Independent checker of reduction certificates (docs/certificates.md): it reads the JSON on its own, evaluates the
-// truth tables with its own few lines of code and re-simulates one synchronous step at a time, sharing nothing with
-// the searches, so a search bug cannot vouch for itself (the certifying-algorithm discipline of McConnell, Mehlhorn,
-// Näher, Schweitzer, "Certifying algorithms", Computer Science Review, 2011).
+// truth tables with its own simulator (word-simulation.ts, 32 states per word) and imports nothing from the searches
+// or the update engine, so a search bug cannot vouch for itself (the certifying-algorithm discipline of McConnell,
+// Mehlhorn, Näher, Schweitzer, "Certifying algorithms", Computer Science Review, 2011).
+import {
+  differingLanes,
+  laneMask,
+  laneStates,
+  laneText,
+  lowestLane,
+  runWords,
+  scratchFor,
+  stepWords,
+  tableWord,
+  type WordNet,
+} from "./word-simulation";
 
 export interface VerificationReport {
   readonly valid: boolean;
@@ -16,11 +28,23 @@ export interface VerificationReport {
 /** Largest source for which coarse-graining certificates are checked state by state. */
 export const MAX_VERIFIED_SOURCE_NODES = 22;
 
-interface Net {
+/**
+ * Largest time scale a certificate may state (docs/certificates.md). Searches go to t = 64 and compositions multiply
+ * time scales, so 2^16 leaves room for chains of reductions; a bound is needed because the check steps F t times.
+ */
+export const MAX_CERTIFICATE_TIME = 65_536;
+
+/**
+ * Most word evaluations one check may take (32-state batches x time scale x source nodes), about ten seconds on one
+ * core: with it a stated time scale near the bound, or a large target, is refused at once instead of simulated.
+ */
+export const MAX_CHECK_WORK = 2 ** 27;
+
+interface Net extends WordNet {
   names: string[];
   index: Map<string, number>;
   inputs: number[][];
-  tables: string[];
+  tables: Uint8Array[];
 }
 
 class Invalid extends Error {}
@@ -56,7 +80,7 @@ function readNet(v: unknown, what: string): Net {
     names.push(node.name);
   });
   const inputs: number[][] = [];
-  const tables: string[] = [];
+  const tables: Uint8Array[] = [];
   nodes.forEach((raw) => {
     const node = raw as Record<string, unknown>;
     const ins = stringList(node.inputs, `${what} node "${String(node.name)}" inputs`);
@@ -68,47 +92,34 @@ function readNet(v: unknown, what: string): Net {
         return k;
       }),
     );
-    tables.push(bits(node.table, 2 ** ins.length, `${what} node "${String(node.name)}" table`));
+    tables.push(toTable(bits(node.table, 2 ** ins.length, `${what} node "${String(node.name)}" table`)));
   });
   return { names, index, inputs, tables };
 }
 
-function step(net: Net, s: Uint8Array): Uint8Array {
-  const out = new Uint8Array(s.length);
-  for (let i = 0; i < s.length; i++) {
-    let row = 0;
-    const ins = net.inputs[i]!;
-    for (let j = 0; j < ins.length; j++) row += s[ins[j]!]! * 2 ** j;
-    out[i] = net.tables[i]![row] === "1" ? 1 : 0;
-  }
-  return out;
+function toTable(text: string): Uint8Array {
+  return Uint8Array.from(text, (c) => (c === "1" ? 1 : 0));
 }
 
-function run(net: Net, s: Uint8Array, t: number): Uint8Array {
-  let cur = s;
-  for (let k = 0; k < t; k++) cur = step(net, cur);
-  return cur;
+function stateText(x: number, length: number): string {
+  let s = "";
+  for (let i = 0; i < length; i++) s += Math.floor(x / 2 ** i) % 2;
+  return s;
 }
 
-function same(a: Uint8Array, b: Uint8Array): boolean {
-  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
-  return true;
+/** Refuse, before simulating, a check whose cost exceeds MAX_CHECK_WORK. */
+function boundWork(states: number, t: number, sourceNodes: number): void {
+  const work = Math.ceil(states / 32) * t * Math.max(sourceNodes, 1);
+  if (work > MAX_CHECK_WORK)
+    fail(
+      `checking needs ${work} word evaluations (${states} states, time scale ${t}, ${sourceNodes} source nodes); ` +
+        `at most ${MAX_CHECK_WORK} are done`,
+    );
 }
 
-function show(s: Uint8Array): string {
-  return Array.from(s).join("");
-}
-
-/** All 0/1 vectors of a given length, first coordinate changing fastest (so vector x is state index x). */
-function* allStates(length: number): Generator<Uint8Array> {
-  const s = new Uint8Array(length);
-  for (;;) {
-    yield Uint8Array.from(s);
-    let i = 0;
-    while (i < length && s[i] === 1) s[i++] = 0;
-    if (i === length) return;
-    s[i] = 1;
-  }
+/** States in batch b (0 .. 32 b + 31, clipped to `count`). */
+function lanesIn(batch: number, count: number): number {
+  return Math.min(32, count - 32 * batch);
 }
 
 /** Check a certificate given as parsed JSON; never throws on bad input, it reports it. */
@@ -124,6 +135,7 @@ export function verifyCertificate(input: unknown): VerificationReport {
     notion = input.notion;
     if (typeof input.time !== "number" || !Number.isInteger(input.time) || input.time < 1)
       fail('"time" must be a whole number of at least 1');
+    if (input.time > MAX_CERTIFICATE_TIME) fail(`"time" must be at most ${MAX_CERTIFICATE_TIME}`);
     time = input.time;
     const F = readNet(input.source, "source");
     const G = readNet(input.target, "target");
@@ -131,7 +143,7 @@ export function verifyCertificate(input: unknown): VerificationReport {
     if (!isRecord(w)) fail('"witness" must be an object');
     const m = G.names.length;
     if (m > 24) fail("targets of more than 24 nodes are not checked");
-    const counter = { add: () => statesChecked++ };
+    const counter = { add: (k: number) => (statesChecked += k) };
     if (notion === "block-emulation") checkBlocks(F, G, w, time, counter);
     else if (notion === "dynamical-embedding") checkEmbedding(F, G, w, time, counter);
     else if (notion === "coarse-graining") checkCoarseGraining(F, G, w, time, counter);
@@ -143,7 +155,11 @@ export function verifyCertificate(input: unknown): VerificationReport {
   }
 }
 
-function checkBlocks(F: Net, G: Net, w: Record<string, unknown>, t: number, counter: { add(): void }): void {
+interface Counter {
+  add(states: number): void;
+}
+
+function checkBlocks(F: Net, G: Net, w: Record<string, unknown>, t: number, counter: Counter): void {
   if (!Array.isArray(w.blocks)) fail('a block-emulation witness needs "blocks"');
   if (!isRecord(w.context)) fail('a block-emulation witness needs "context"');
   const n = F.names.length;
@@ -181,52 +197,104 @@ function checkBlocks(F: Net, G: Net, w: Record<string, unknown>, t: number, coun
     base[v] = value;
   }
   for (let v = 0; v < n; v++)
-    if (owner[v] === null && !(F.names[v]! in w.context))
+    if (owner[v] === null && !Object.hasOwn(w.context, F.names[v]!))
       fail(`source node "${F.names[v]}" is neither in a block nor in the context`);
-  const encode = (x: Uint8Array) => {
-    const s = Uint8Array.from(base);
-    blockOf.forEach((b, j) => b!.nodes.forEach((v, i) => (s[v] = (x[j] ? b!.one : b!.zero)[i] === "1" ? 1 : 0)));
-    return s;
+  boundWork(2 ** m, t, n);
+  const contextWords = Int32Array.from(base, (b) => (b ? -1 : 0));
+  const slots = blockOf.flatMap((b, j) =>
+    b!.nodes.map((v, i) => ({ v, j, zero: b!.zero[i] === "1" ? -1 : 0, one: b!.one[i] === "1" ? -1 : 0 })),
+  );
+  const encode = (x: Int32Array, out: Int32Array) => {
+    out.set(contextWords);
+    for (const { v, j, zero, one } of slots) out[v] = (x[j]! & one) | (~x[j]! & zero);
   };
-  for (const x of allStates(m)) {
-    counter.add();
-    const got = run(F, encode(x), t);
-    const want = encode(step(G, x));
-    if (!same(got, want)) fail(`target state ${show(x)}: F^${t}(e(x)) = ${show(got)} but e(G(x)) = ${show(want)}`);
+  const scratch = scratchFor(F, G);
+  const x = new Int32Array(m);
+  const gx = new Int32Array(m);
+  const a = new Int32Array(n);
+  const b = new Int32Array(n);
+  const want = new Int32Array(n);
+  const count = 2 ** m;
+  for (let batch = 0; batch < Math.ceil(count / 32); batch++) {
+    laneStates(batch, m, x);
+    encode(x, a);
+    const got = runWords(F, a, b, t, scratch);
+    stepWords(G, x, gx, scratch);
+    encode(gx, want);
+    const bad = differingLanes(got, want, n, laneMask(batch, count));
+    if (bad) {
+      const lane = lowestLane(bad);
+      counter.add(lane + 1);
+      fail(
+        `target state ${laneText(x, m, lane)}: F^${t}(e(x)) = ${laneText(got, n, lane)} but e(G(x)) = ${laneText(want, n, lane)}`,
+      );
+    }
+    counter.add(lanesIn(batch, count));
   }
 }
 
-function checkEmbedding(F: Net, G: Net, w: Record<string, unknown>, t: number, counter: { add(): void }): void {
+function checkEmbedding(F: Net, G: Net, w: Record<string, unknown>, t: number, counter: Counter): void {
   if (!isRecord(w.map)) fail('an embedding witness needs "map"');
   const map = w.map;
   const n = F.names.length;
   const m = G.names.length;
-  const images = new Set<string>();
-  const e = (x: Uint8Array) => {
-    const key = show(x);
-    const value = bits(map[key], n, `image of target state ${key}`);
-    return Uint8Array.from(value, (c) => (c === "1" ? 1 : 0));
-  };
+  boundWork(2 ** m, t, n);
   if (Object.keys(map).length !== 2 ** m) fail(`the map must list all ${2 ** m} target states`);
-  for (const x of allStates(m)) {
-    counter.add();
-    const image = e(x);
-    const key = show(image);
-    if (images.has(key)) fail(`two target states map to source state ${key}`);
-    images.add(key);
-    const got = run(F, image, t);
-    const want = e(step(G, x));
-    if (!same(got, want)) fail(`target state ${show(x)}: F^${t}(e(x)) = ${show(got)} but e(G(x)) = ${show(want)}`);
+  const count = 2 ** m;
+  const seen = new Set<string>();
+  const images: string[] = [];
+  for (let x = 0; x < count; x++) {
+    const key = stateText(x, m);
+    const image = bits(Object.hasOwn(map, key) ? map[key] : undefined, n, `image of target state ${key}`);
+    if (seen.has(image)) fail(`two target states map to source state ${image}`);
+    seen.add(image);
+    images.push(image);
+  }
+  const pack = (states: (lane: number) => number, lanes: number, out: Int32Array) => {
+    out.fill(0);
+    for (let lane = 0; lane < lanes; lane++) {
+      const image = images[states(lane)]!;
+      for (let v = 0; v < n; v++) if (image[v] === "1") out[v]! |= 1 << lane;
+    }
+  };
+  const scratch = scratchFor(F, G);
+  const x = new Int32Array(m);
+  const gx = new Int32Array(m);
+  const a = new Int32Array(n);
+  const b = new Int32Array(n);
+  const want = new Int32Array(n);
+  const indexOf = (words: Int32Array, lane: number) => {
+    let y = 0;
+    for (let j = 0; j < m; j++) y += ((words[j]! >>> lane) & 1) * 2 ** j;
+    return y;
+  };
+  for (let batch = 0; batch < Math.ceil(count / 32); batch++) {
+    const lanes = lanesIn(batch, count);
+    laneStates(batch, m, x);
+    pack((lane) => 32 * batch + lane, lanes, a);
+    const got = runWords(F, a, b, t, scratch);
+    stepWords(G, x, gx, scratch);
+    pack((lane) => indexOf(gx, lane), lanes, want);
+    const bad = differingLanes(got, want, n, laneMask(batch, count));
+    if (bad) {
+      const lane = lowestLane(bad);
+      counter.add(lane + 1);
+      fail(
+        `target state ${laneText(x, m, lane)}: F^${t}(e(x)) = ${laneText(got, n, lane)} but e(G(x)) = ${laneText(want, n, lane)}`,
+      );
+    }
+    counter.add(lanes);
   }
 }
 
-function checkCoarseGraining(F: Net, G: Net, w: Record<string, unknown>, t: number, counter: { add(): void }): void {
+function checkCoarseGraining(F: Net, G: Net, w: Record<string, unknown>, t: number, counter: Counter): void {
   if (!Array.isArray(w.observables)) fail('a coarse-graining witness needs "observables"');
   const n = F.names.length;
   const m = G.names.length;
   if (n > MAX_VERIFIED_SOURCE_NODES)
     fail(`coarse-graining certificates are checked for sources of at most ${MAX_VERIFIED_SOURCE_NODES} nodes`);
-  const obs = new Array<{ inputs: number[]; table: string } | null>(m).fill(null);
+  boundWork(2 ** n, t, n);
+  const obs = new Array<{ inputs: number[]; table: Uint8Array } | null>(m).fill(null);
   for (const raw of w.observables as unknown[]) {
     if (!isRecord(raw) || typeof raw.target !== "string") fail("each observable names its target node");
     const j = G.index.get(raw.target);
@@ -238,21 +306,37 @@ function checkCoarseGraining(F: Net, G: Net, w: Record<string, unknown>, t: numb
       return v;
     });
     if (inputs.length > 20) fail(`observable "${raw.target}" reads more than 20 nodes`);
-    obs[j] = { inputs, table: bits(raw.table, 2 ** inputs.length, `observable "${raw.target}" table`) };
+    obs[j] = { inputs, table: toTable(bits(raw.table, 2 ** inputs.length, `observable "${raw.target}" table`)) };
   }
   obs.forEach((o, j) => {
     if (!o) fail(`target node "${G.names[j]}" has no observable`);
   });
-  const p = (s: Uint8Array) =>
-    Uint8Array.from(obs, (o) => {
-      let row = 0;
-      o!.inputs.forEach((v, k) => (row += s[v]! * 2 ** k));
-      return o!.table[row] === "1" ? 1 : 0;
-    });
-  for (const x of allStates(n)) {
-    counter.add();
-    const got = p(run(F, x, t));
-    const want = step(G, p(x));
-    if (!same(got, want)) fail(`source state ${show(x)}: p(F^${t}(x)) = ${show(got)} but G(p(x)) = ${show(want)}`);
+  const observe = (s: Int32Array, out: Int32Array) => {
+    obs.forEach((o, j) => (out[j] = tableWord(o!.table, o!.inputs, s, scratch)));
+  };
+  const obsNet: WordNet = { inputs: obs.map((o) => o!.inputs), tables: obs.map((o) => o!.table) };
+  const scratch = scratchFor(F, G, obsNet);
+  const xs = new Int32Array(n);
+  const a = new Int32Array(n);
+  const b = new Int32Array(n);
+  const px = new Int32Array(m);
+  const got = new Int32Array(m);
+  const want = new Int32Array(m);
+  const count = 2 ** n;
+  for (let batch = 0; batch < Math.ceil(count / 32); batch++) {
+    laneStates(batch, n, xs);
+    a.set(xs);
+    observe(runWords(F, a, b, t, scratch), got);
+    observe(xs, px);
+    stepWords(G, px, want, scratch);
+    const bad = differingLanes(got, want, m, laneMask(batch, count));
+    if (bad) {
+      const lane = lowestLane(bad);
+      counter.add(lane + 1);
+      fail(
+        `source state ${laneText(xs, n, lane)}: p(F^${t}(x)) = ${laneText(got, m, lane)} but G(p(x)) = ${laneText(want, m, lane)}`,
+      );
+    }
+    counter.add(lanesIn(batch, count));
   }
 }

@@ -37,13 +37,15 @@ export function percolateConstants(net: BooleanNetwork, hold: Record<string, 0 |
     start[i] = value;
   }
   const subspace = percolate(net, start);
-  const fixed: Record<string, 0 | 1> = {};
+  const fixedPairs: [string, 0 | 1][] = [];
   const eliminated: string[] = [];
   for (let i = 0; i < n; i++) {
     if (subspace[i] === FREE) continue;
-    fixed[net.names[i]!] = subspace[i] === 1 ? 1 : 0;
+    fixedPairs.push([net.names[i]!, subspace[i] === 1 ? 1 : 0]);
     eliminated.push(net.names[i]!);
   }
+  // fromEntries keeps a node named "__proto__" as an own property, which assignment would not.
+  const fixed: Record<string, 0 | 1> = Object.fromEntries(fixedPairs);
   const held = Object.keys(hold).length;
   const preserves =
     (held > 0 ? `For the model with ${Object.keys(hold).join(", ")} held fixed: ` : "") +

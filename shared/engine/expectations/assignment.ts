@@ -75,7 +75,8 @@ function checkName(item: Item, issues: TextIssue[]): boolean {
 /** Read `A=1; B=0`. Every item needs a value 0 or 1; a node may appear once. */
 export function parseAssignment(text: string): { assignment: Assignment; issues: TextIssue[] } {
   const { items, issues } = scanItems(text);
-  const out: Record<string, 0 | 1> = {};
+  // A Map: node names such as "toString" or "__proto__" must not meet Object.prototype.
+  const out = new Map<string, 0 | 1>();
   for (const item of items) {
     if (!checkName(item, issues)) continue;
     if (item.value === null) {
@@ -89,13 +90,13 @@ export function parseAssignment(text: string): { assignment: Assignment; issues:
       issues.push({ offset: item.valueOffset, message: `expected 0 or 1 for ${item.name}, found "${item.value}"` });
       continue;
     }
-    if (item.name in out) {
+    if (out.has(item.name)) {
       issues.push({ offset: item.offset, message: `${item.name} is given twice` });
       continue;
     }
-    out[item.name] = item.value === "1" ? 1 : 0;
+    out.set(item.name, item.value === "1" ? 1 : 0);
   }
-  return { assignment: out, issues };
+  return { assignment: Object.fromEntries(out), issues };
 }
 
 /** Read `A B; C`: node names without values, each once. */

@@ -129,7 +129,9 @@ export function subspacePattern(subspace: Int8Array): string {
 
 /** The fixed nodes of a subspace by name. */
 export function fixedByName(net: BooleanNetwork, subspace: Int8Array): Record<string, 0 | 1> {
-  const out: Record<string, 0 | 1> = {};
-  for (let i = 0; i < subspace.length; i++) if (subspace[i] !== FREE) out[net.names[i]!] = subspace[i] === 1 ? 1 : 0;
-  return out;
+  const out: [string, 0 | 1][] = [];
+  for (let i = 0; i < subspace.length; i++)
+    if (subspace[i] !== FREE) out.push([net.names[i]!, subspace[i] === 1 ? 1 : 0]);
+  // fromEntries keeps a node named "__proto__" as an own property, which assignment would not.
+  return Object.fromEntries(out);
 }
