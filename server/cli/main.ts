@@ -10,19 +10,21 @@ interface Command {
 }
 
 const commandsDir = path.join(path.dirname(fileURLToPath(import.meta.url)), "commands");
+// ".ts" under tsx and vitest, ".js" when run from the esbuild bundle (scripts/emulant-cli.mjs).
+const ext = path.extname(fileURLToPath(import.meta.url));
 
 function commandNames(): string[] {
   return fs
     .readdirSync(commandsDir)
-    .filter((f) => f.endsWith(".ts") && !f.endsWith(".test.ts"))
-    .map((f) => f.slice(0, -3))
+    .filter((f) => f.endsWith(ext) && !f.endsWith(`.test${ext}`))
+    .map((f) => f.slice(0, -ext.length))
     .sort();
 }
 
 async function usage(): Promise<string> {
   const lines = ["usage: npm run -s emulant -- <command> [options]", "", "commands:"];
   for (const name of commandNames()) {
-    const mod = (await import(pathToFileURL(path.join(commandsDir, `${name}.ts`)).href)) as Command;
+    const mod = (await import(pathToFileURL(path.join(commandsDir, `${name}${ext}`)).href)) as Command;
     lines.push(`  ${name.padEnd(18)} ${mod.summary ?? ""}`);
   }
   return lines.join("\n") + "\n";
@@ -38,7 +40,7 @@ async function main(): Promise<number> {
     process.stderr.write(`emulant: unknown command "${name}"\n\n${await usage()}`);
     return 2;
   }
-  const mod = (await import(pathToFileURL(path.join(commandsDir, `${name}.ts`)).href)) as Command;
+  const mod = (await import(pathToFileURL(path.join(commandsDir, `${name}${ext}`)).href)) as Command;
   return mod.run(args);
 }
 

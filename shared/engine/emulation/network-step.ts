@@ -3,6 +3,7 @@
 // "Metabolic stability and epigenesis in randomly constructed genetic nets", J. Theor. Biol., 1969).
 import { EngineError } from "../errors";
 import type { BooleanNetwork } from "../network";
+import { successorTable as updateSuccessorTable } from "../update";
 
 /** Largest node count whose whole state space the reductions engine tabulates. */
 export const MAX_TABULATED_NODES = 22;
@@ -30,7 +31,11 @@ export function iterateValues(net: BooleanNetwork, values: Uint8Array, t: number
   return cur;
 }
 
-/** The successor of every state under one synchronous step (state index bit i = node i). */
+/**
+ * The successor of every state under one synchronous step (state index bit i = node i). Delegates to the
+ * word-parallel table of the update layer, so every reduction search shares the one fast implementation;
+ * the reductions engine keeps its own lower size limit because it holds several tables of F^t at once.
+ */
 export function successorTable(net: BooleanNetwork): Uint32Array {
   const n = net.names.length;
   if (n > MAX_TABULATED_NODES) {
@@ -39,21 +44,7 @@ export function successorTable(net: BooleanNetwork): Uint32Array {
       `a state space of ${n} nodes is too large to tabulate (at most ${MAX_TABULATED_NODES})`,
     );
   }
-  const size = 2 ** n;
-  const succ = new Uint32Array(size);
-  // Node by node keeps each truth table hot in cache while sweeping the states.
-  for (let i = 0; i < n; i++) {
-    const regs = net.regulators[i]!;
-    const table = net.tables[i]!;
-    const k = regs.length;
-    const bit = 1 << i;
-    for (let x = 0; x < size; x++) {
-      let row = 0;
-      for (let j = 0; j < k; j++) row |= ((x >>> regs[j]!) & 1) << j;
-      if (table[row]) succ[x] = (succ[x]! | bit) >>> 0;
-    }
-  }
-  return succ;
+  return updateSuccessorTable(net);
 }
 
 /** The successor table of F^t, by repeated composition of the one-step table. */
