@@ -12,6 +12,7 @@ import { can } from "@shared/types/roles";
 import { useStructure } from "@/features/models/api/get-structure";
 import { useRevisionList } from "@/features/models/api/list-revisions";
 import { AttractorRunPanel } from "@/features/models/components/attractor-run-panel";
+import { AttractorStates } from "@/features/models/components/attractor-states";
 import { AttractorTable } from "@/features/models/components/attractor-table";
 import { BasinChart } from "@/features/models/components/basin-chart";
 import { Downloads } from "@/features/models/components/downloads";
@@ -41,7 +42,11 @@ function Attractors({
   setMarkers,
   selected,
   setSelected,
+  inputs,
+  fileName,
 }: {
+  inputs: readonly string[];
+  fileName: string;
   projectId: string;
   modelId: string;
   revision: number;
@@ -95,12 +100,15 @@ function Attractors({
       {error && error.code !== "NEEDS_RUN" && <Alert>{error.message}</Alert>}
       {result.data && (
         <div className="grid gap-4 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-          <AttractorTable result={result.data} selected={selected} onSelect={setSelected} />
+          <AttractorTable result={result.data} selected={selected} onSelect={setSelected} fileName={fileName} />
           <div>
             <h4 className="mb-1 text-xs font-semibold uppercase tracking-wide text-slate-600">Basin sizes</h4>
             <BasinChart result={result.data} selected={selected} onSelect={setSelected} />
           </div>
         </div>
+      )}
+      {result.data && result.data.attractors.length > 0 && (
+        <AttractorStates result={result.data} index={selected ?? 0} inputs={inputs} fileName={fileName} />
       )}
     </div>
   );
@@ -253,6 +261,8 @@ export function ModelDetailRoute() {
           setMarkers={setMarkers}
           selected={selected}
           setSelected={setSelected}
+          inputs={rev.network.inputs}
+          fileName={baseName}
         />
       </Section>
 
@@ -265,6 +275,9 @@ export function ModelDetailRoute() {
             revision={rev.revision}
             nodes={nodes}
             suggestedInitial={suggestedInitial}
+            attractors={attractorsForState.data ?? null}
+            inputs={rev.network.inputs}
+            fileName={baseName}
           />
         </Section>
         <Section title="Perturbations" testId="perturbation-section">
