@@ -71,6 +71,19 @@ describe("result views in headless Chromium", () => {
     expect(errors).toEqual([]);
   });
 
+  it("shows the structure of the three-gene tide ring: one negative circuit, sensitivity 1", async () => {
+    const { page } = browser;
+    await page.goto(`${server.baseUrl}/projects/${PROJECT}/models/${RING}`);
+    // Common practice: a ring of three repressions is one negative feedback circuit; NOT has sensitivity 1.
+    await expect
+      .poll(() => page.getByTestId("circuit-summary").textContent(), { timeout: 30_000 })
+      .toContain("1 circuit of length ≤ 8: 0 positive (can support several stable states), 1 negative");
+    expect(await page.getByTestId("circuit-list").textContent()).toContain("Tk1 → Tk2 → Tk3 → Tk1");
+    expect(await page.getByTestId("average-sensitivity").textContent()).toContain("Network average 1.000");
+    await page.getByTestId("structure-section").scrollIntoViewIfNeeded();
+    await screenshot(page, "result-views-structure");
+  });
+
   it("says a block-emulation search found nothing, in words, with its bounds and that it was exhaustive", async () => {
     const { page } = browser;
     // One node cannot encode three with blocks of one node: nothing can be found.

@@ -19,6 +19,7 @@ import { Downloads } from "@/features/models/components/downloads";
 import { issuesOf } from "@/features/models/components/parse-error-list";
 import { PerturbationPanel } from "@/features/models/components/perturbation-panel";
 import { RuleEditor } from "@/features/models/components/rule-editor";
+import { StructureView } from "@/features/models/components/structure-view";
 import { TrajectoryPanel } from "@/features/models/components/trajectory-panel";
 import { WiringDiagram } from "@/features/models/components/wiring-diagram";
 
@@ -297,6 +298,9 @@ export function ModelDetailRoute() {
         </Section>
       </div>
 
+      <Section title="Structure" testId="structure-section">
+        <StructureView ruleText={rev.ruleText} fileName={baseName} />
+      </Section>
       <Section title={canWrite ? "Edit rules" : "Rules"} testId="rules-section">
         {canWrite ? (
           <EditRules projectId={projectId} modelId={modelId} baseText={rev.ruleText} latest={model.latestRevision} />
