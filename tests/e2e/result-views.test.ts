@@ -54,6 +54,8 @@ describe("result views in headless Chromium", () => {
     expect(await page.getByTestId("trajectory-grid-header").allTextContents()).toHaveLength(nodes.length);
     await page.getByTestId("trajectory-section").scrollIntoViewIfNeeded();
     await screenshot(page, "result-views-trajectory");
+    await page.getByTestId("trajectory-section").screenshot({ path: "tests/e2e/screenshots/trajectory-grid.png" });
+    await page.getByTestId("attractors-section").screenshot({ path: "tests/e2e/screenshots/attractor-grid.png" });
 
     const [download] = await Promise.all([
       page.waitForEvent("download"),
@@ -82,6 +84,7 @@ describe("result views in headless Chromium", () => {
     expect(await page.getByTestId("average-sensitivity").textContent()).toContain("Network average 1.000");
     await page.getByTestId("structure-section").scrollIntoViewIfNeeded();
     await screenshot(page, "result-views-structure");
+    await page.getByTestId("structure-section").screenshot({ path: "tests/e2e/screenshots/structure-view.png" });
   });
 
   it("says a block-emulation search found nothing, in words, with its bounds and that it was exhaustive", async () => {
@@ -105,6 +108,7 @@ describe("result views in headless Chromium", () => {
     expect(await page.getByTestId("search-bounds").textContent()).toContain("t ≤ 1");
     expect(await page.getByTestId("search-exhaustive").textContent()).toContain("Exhaustive within these bounds");
     await screenshot(page, "result-views-nothing-found");
+    await page.getByTestId("run-result").screenshot({ path: "tests/e2e/screenshots/search-nothing-found.png" });
   });
 
   it("shows a non-closing coarse-graining's coarsest grouping with its dynamics and network, and saves it as a model", async () => {
@@ -121,6 +125,7 @@ describe("result views in headless Chromium", () => {
     const rules = (await page.getByTestId("coarsest-rules").textContent())!.trim().split("\n");
     expect(rules).toHaveLength(Math.ceil(Math.log2(groups)));
     await screenshot(page, "result-views-coarsest-grouping");
+    await page.getByTestId("run-result").screenshot({ path: "tests/e2e/screenshots/coarsest-grouping.png" });
     await page.getByTestId("save-model").click();
     await expect.poll(() => page.getByTestId("saved-model").textContent()).toContain("Coarsest grouping of");
   });
