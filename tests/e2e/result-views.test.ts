@@ -85,6 +85,15 @@ describe("result views in headless Chromium", () => {
     await page.getByTestId("structure-section").scrollIntoViewIfNeeded();
     await screenshot(page, "result-views-structure");
     await page.getByTestId("structure-section").screenshot({ path: "tests/e2e/screenshots/structure-view.png" });
+
+    // The NK ensemble of the ring's size beside it: the Derrida curve is drawn and the ensemble's attractors counted.
+    await page.getByTestId("ensemble-n").fill("10");
+    await page.getByTestId("ensemble-run").click();
+    await expect.poll(() => page.getByTestId("derrida-plot").locator("polyline").count()).toBe(3);
+    expect(await page.getByTestId("ensemble-summary").textContent()).toMatch(
+      /The 20 networks have on average [\d.]+ attractors/,
+    );
+    await page.getByTestId("ensemble-section").screenshot({ path: "tests/e2e/screenshots/ensemble-view.png" });
   });
 
   it("says a block-emulation search found nothing, in words, with its bounds and that it was exhaustive", async () => {

@@ -20,6 +20,7 @@ import { issuesOf } from "@/features/models/components/parse-error-list";
 import { PerturbationPanel } from "@/features/models/components/perturbation-panel";
 import { RuleEditor } from "@/features/models/components/rule-editor";
 import { StructureView } from "@/features/models/components/structure-view";
+import { EnsembleView } from "@/features/models/components/ensemble-view";
 import { TrajectoryPanel } from "@/features/models/components/trajectory-panel";
 import { WiringDiagram } from "@/features/models/components/wiring-diagram";
 
@@ -300,6 +301,14 @@ export function ModelDetailRoute() {
 
       <Section title="Structure" testId="structure-section">
         <StructureView ruleText={rev.ruleText} fileName={baseName} />
+      </Section>
+      <Section title="Beside random networks (NK ensemble)" testId="ensemble-section">
+        <EnsembleView
+          ruleText={rev.ruleText}
+          nodeCount={rev.nodeCount}
+          meanInDegree={rev.network.edgeCount / Math.max(1, rev.nodeCount)}
+          fileName={baseName}
+        />
       </Section>
       <Section title={canWrite ? "Edit rules" : "Rules"} testId="rules-section">
         {canWrite ? (
