@@ -207,6 +207,20 @@ export type ReductionSearchParams = z.infer<typeof ReductionSearchParams>;
 export const SearchFinding = z.object({ certificate: Certificate, flags: z.array(z.string()), rank: z.number().int() });
 export type SearchFinding = z.infer<typeof SearchFinding>;
 
+/**
+ * A coarse-graining whose observables do not close: the coarsest grouping of source states that does close, as the
+ * groups' dynamics (group g goes to succ[g]; label[g] holds the observables' values, bit k = observable k) and as a
+ * network on ceil(log2 groups) nodes (group g has the binary code g). Listed only up to a size a person can read.
+ */
+export const CoarsestGrouping = z.object({
+  groups: z.number().int(),
+  observe: z.array(z.string()),
+  succ: z.array(z.number().int()).nullable(),
+  label: z.array(z.number().int()).nullable(),
+  ruleText: z.string().nullable(),
+});
+export type CoarsestGrouping = z.infer<typeof CoarsestGrouping>;
+
 export const ReductionSearchResult = z.object({
   mode: z.enum(["given-target", "discover", "coarse-grain"]),
   found: z.boolean(),
@@ -215,6 +229,7 @@ export const ReductionSearchResult = z.object({
   distinctTargets: z.number().int(),
   /** Coarse-graining: size of the coarsest compatible refinement of the observables. */
   groups: z.number().int().nullable(),
+  coarsest: CoarsestGrouping.nullable().default(null),
   bounds: z.record(z.string(), z.unknown()),
   reductionIds: z.array(z.string()).default([]),
 });

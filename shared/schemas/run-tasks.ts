@@ -14,7 +14,7 @@ import type {
   EmulationSearchResult,
   TargetFlag,
 } from "../engine/emulation";
-import { Certificate, ReductionSearchParams } from "./reductions";
+import { Certificate, CoarsestGrouping, ReductionSearchParams } from "./reductions";
 
 /** A task's resume point: the position in its shard's units (or items) where the next attempt continues. */
 export const ShardCursor = z.number().int().min(0);
@@ -115,6 +115,7 @@ export const ReductionSearchPartial = z.discriminatedUnion("mode", [
     certificate: Certificate.nullable(),
     groups: z.number().int(),
     closes: z.boolean(),
+    coarsest: CoarsestGrouping.nullable().default(null),
   }),
 ]);
 export type ReductionSearchPartial = z.infer<typeof ReductionSearchPartial>;

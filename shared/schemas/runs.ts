@@ -50,6 +50,10 @@ export type StartRunBody = z.infer<typeof StartRunBody>;
 export const RunError = z.object({ code: z.string(), message: z.string() });
 export type RunError = z.infer<typeof RunError>;
 
+/** The model revision a run worked on, named so a person can tell runs apart. */
+export const RunModelRef = z.object({ modelId: z.uuid(), modelName: z.string(), revision: z.number().int() });
+export type RunModelRef = z.infer<typeof RunModelRef>;
+
 export const Run = z.object({
   id: z.uuid(),
   projectId: z.uuid(),
@@ -72,6 +76,9 @@ export const Run = z.object({
   attempt: z.number().int(),
   /** A queued run's place in the queue of every project (1 starts next); null once it runs or ends. */
   queuePosition: z.number().int().positive().nullable().default(null),
+  /** The run's model revision and, for a given-target search, the target's. */
+  model: RunModelRef.nullable().default(null),
+  targetModel: RunModelRef.nullable().default(null),
 });
 export type Run = z.infer<typeof Run>;
 

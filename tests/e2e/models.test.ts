@@ -54,7 +54,7 @@ describe("models screens in headless Chromium", () => {
     await expect.poll(() => page.getByTestId("attractor-phenotype").allTextContents()).toEqual(["~", "~"]);
     await page.getByTestId("attractor-row").first().click();
     await page.getByTestId("trajectory-run").click();
-    await expect.poll(() => page.getByTestId("trajectory-raster").getAttribute("data-steps")).toBe("21");
+    await expect.poll(() => page.getByTestId("trajectory-grid-row").count()).toBe(21);
     await page.getByTestId("wiring-diagram").scrollIntoViewIfNeeded();
     await page.mouse.move(0, 0);
     await screenshot(page, "models-detail-r1");

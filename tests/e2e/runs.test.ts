@@ -28,6 +28,9 @@ describe("runs in the browser", () => {
     page.on("pageerror", (e) => errors.push(e.message));
     await page.goto(`${server.baseUrl}/projects/${projectId}/runs`);
     await page.getByTestId("start-run-form").waitFor();
+    // The form opens on a real analysis; the demonstration kind is chosen on purpose.
+    expect(await page.getByTestId("start-kind").inputValue()).toBe("attractors");
+    await page.getByTestId("start-kind").selectOption("sleep-count");
     // 4 shards of 1500 items at 10 ms each: ~15 s of work on two threads, long enough to watch and cancel.
     await page.getByTestId("start-items").fill("6000");
     await page.getByTestId("start-shards").fill("4");

@@ -1,6 +1,6 @@
 // Runs: one row per requested analysis; shards are in run-shards.ts. Rows become the shared Run shape here.
 import type { Knex } from "knex";
-import type { Run, RunError, RunState } from "@shared/schemas/runs";
+import type { Run, RunError, RunModelRef, RunState } from "@shared/schemas/runs";
 import { queuePositions, type UnfinishedRun } from "../../jobs/queue-order";
 
 interface RunRow {
@@ -23,6 +23,8 @@ interface RunRow {
   error: RunError | null;
   attempt: number;
   shards_done?: number | string;
+  model?: RunModelRef | null;
+  target_model?: RunModelRef | null;
 }
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
@@ -49,10 +51,17 @@ export function toRun(r: RunRow): Run {
     result: r.result ?? null,
     error: r.error ?? null,
     attempt: r.attempt,
+    model: r.model ?? null,
+    targetModel: r.target_model ?? null,
   };
 }
 
 const shardsDone = "(select count(*) from run_shards s where s.run_id = runs.id and s.state = 'done') as shards_done";
+const modelRef = (revisionId: string, as: string) =>
+  `(select json_build_object('modelId', m.id, 'modelName', m.name, 'revision', mr.revision) from model_revisions mr
+     join models m on m.id = mr.model_id where mr.id::text = ${revisionId}) as ${as}`;
+// Names of the models a run worked on, read with the run so that lists can title runs without a query per row.
+const modelNames = `${modelRef("runs.model_revision_id::text", "model")}, ${modelRef("runs.params->>'targetRevisionId'", "target_model")}`;
 
 export interface NewRun {
   projectId: string;
@@ -93,7 +102,7 @@ export async function findReusableRun(
   key: { projectId: string; kind: string; modelRevisionId: string | null; paramsHash: string },
 ): Promise<Run | null> {
   const q = db("runs")
-    .select("*", db.raw(shardsDone))
+    .select("*", db.raw(shardsDone), db.raw(modelNames))
     .where({ project_id: key.projectId, kind: key.kind, params_hash: key.paramsHash, state: "succeeded" });
   if (key.modelRevisionId) q.where("model_revision_id", key.modelRevisionId);
   else q.whereNull("model_revision_id");
@@ -102,7 +111,7 @@ export async function findReusableRun(
 }
 
 export async function getRun(db: Knex, runId: string, projectId?: string): Promise<Run | null> {
-  const q = db("runs").select("*", db.raw(shardsDone)).where({ id: runId });
+  const q = db("runs").select("*", db.raw(shardsDone), db.raw(modelNames)).where({ id: runId });
   if (projectId) q.where({ project_id: projectId });
   const row = await q.first();
   return row ? toRun(row) : null;
@@ -114,7 +123,7 @@ export async function listRuns(
   f: { kind?: string; state?: RunState; limit: number },
 ): Promise<Run[]> {
   const q = db("runs")
-    .select("*", db.raw(shardsDone))
+    .select("*", db.raw(shardsDone), db.raw(modelNames))
     .where({ project_id: projectId })
     .orderBy("created_at", "desc")
     .limit(f.limit);

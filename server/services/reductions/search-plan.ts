@@ -22,7 +22,7 @@ import {
 import { searchDynamicalEmbedding } from "@shared/engine/embedding";
 import { EngineError } from "@shared/engine/errors";
 import type { BooleanNetwork } from "@shared/engine/network";
-import { compileDefinition, readRuleText } from "@shared/engine/rules";
+import { compileDefinition, networkToDefinition, printRuleText, readRuleText } from "@shared/engine/rules";
 import type {
   ReductionSearchParams,
   ReductionSearchResult,
@@ -30,6 +30,10 @@ import type {
   SearchFinding,
 } from "@shared/schemas/reductions";
 import type { ReductionSearchPartial, SearchShard } from "@shared/schemas/run-tasks";
+
+/** A non-closing coarse-graining lists its groups' dynamics up to this many groups, and its network up to 2^12. */
+export const MAX_LISTED_GROUPS = 64;
+const MAX_QUOTIENT_GROUPS = 4096;
 
 /** Discover keeps the best-ranked targets as findings; the rest are counted, not stored. */
 export const MAX_DISCOVER_FINDINGS = 40;
@@ -94,7 +98,17 @@ export function searchShard(
       r.closes && r.target
         ? (coarseGrainingCertificate(source, r.target, time, observables) as SearchFinding["certificate"])
         : null;
-    return { mode: "coarse-grain", certificate, groups: r.groups, closes: r.closes };
+    const listed = r.groups <= MAX_LISTED_GROUPS;
+    const coarsest = r.closes
+      ? null
+      : {
+          groups: r.groups,
+          observe: [...s.observe],
+          succ: listed ? Array.from(r.groupSucc) : null,
+          label: listed ? Array.from(r.groupLabel) : null,
+          ruleText: r.groups <= MAX_QUOTIENT_GROUPS ? printRuleText(networkToDefinition(r.quotient)) : null,
+        };
+    return { mode: "coarse-grain", certificate, groups: r.groups, closes: r.closes, coarsest };
   }
   if (s.mode === "given-target") {
     if (!target) throw new EngineError("BAD_TARGET", "a given-target search needs a target model");
@@ -137,7 +151,7 @@ export function mergeShards(
   s: SearchBody,
   partials: ReductionSearchPartial[],
 ): ReductionSearchResult {
-  const base = { bounds: { ...s }, reductionIds: [] as string[] };
+  const base = { bounds: { ...s }, reductionIds: [] as string[], coarsest: null };
   const first = partials[0];
   if (!first) throw new EngineError("BAD_SHARD", "no shard results to merge");
   if (first.mode === "coarse-grain") {
@@ -149,6 +163,7 @@ export function mergeShards(
       findings,
       distinctTargets: findings.length,
       groups: first.groups,
+      coarsest: first.coarsest ?? null,
     };
   }
   if (first.mode === "embedding") {

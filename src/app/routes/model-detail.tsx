@@ -12,12 +12,15 @@ import { can } from "@shared/types/roles";
 import { useStructure } from "@/features/models/api/get-structure";
 import { useRevisionList } from "@/features/models/api/list-revisions";
 import { AttractorRunPanel } from "@/features/models/components/attractor-run-panel";
+import { AttractorStates } from "@/features/models/components/attractor-states";
 import { AttractorTable } from "@/features/models/components/attractor-table";
 import { BasinChart } from "@/features/models/components/basin-chart";
 import { Downloads } from "@/features/models/components/downloads";
 import { issuesOf } from "@/features/models/components/parse-error-list";
 import { PerturbationPanel } from "@/features/models/components/perturbation-panel";
 import { RuleEditor } from "@/features/models/components/rule-editor";
+import { StructureView } from "@/features/models/components/structure-view";
+import { EnsembleView } from "@/features/models/components/ensemble-view";
 import { TrajectoryPanel } from "@/features/models/components/trajectory-panel";
 import { WiringDiagram } from "@/features/models/components/wiring-diagram";
 
@@ -41,7 +44,11 @@ function Attractors({
   setMarkers,
   selected,
   setSelected,
+  inputs,
+  fileName,
 }: {
+  inputs: readonly string[];
+  fileName: string;
   projectId: string;
   modelId: string;
   revision: number;
@@ -95,12 +102,15 @@ function Attractors({
       {error && error.code !== "NEEDS_RUN" && <Alert>{error.message}</Alert>}
       {result.data && (
         <div className="grid gap-4 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-          <AttractorTable result={result.data} selected={selected} onSelect={setSelected} />
+          <AttractorTable result={result.data} selected={selected} onSelect={setSelected} fileName={fileName} />
           <div>
             <h4 className="mb-1 text-xs font-semibold uppercase tracking-wide text-slate-600">Basin sizes</h4>
             <BasinChart result={result.data} selected={selected} onSelect={setSelected} />
           </div>
         </div>
+      )}
+      {result.data && result.data.attractors.length > 0 && (
+        <AttractorStates result={result.data} index={selected ?? 0} inputs={inputs} fileName={fileName} />
       )}
     </div>
   );
@@ -253,6 +263,8 @@ export function ModelDetailRoute() {
           setMarkers={setMarkers}
           selected={selected}
           setSelected={setSelected}
+          inputs={rev.network.inputs}
+          fileName={baseName}
         />
       </Section>
 
@@ -265,6 +277,9 @@ export function ModelDetailRoute() {
             revision={rev.revision}
             nodes={nodes}
             suggestedInitial={suggestedInitial}
+            attractors={attractorsForState.data ?? null}
+            inputs={rev.network.inputs}
+            fileName={baseName}
           />
         </Section>
         <Section title="Perturbations" testId="perturbation-section">
@@ -284,6 +299,17 @@ export function ModelDetailRoute() {
         </Section>
       </div>
 
+      <Section title="Structure" testId="structure-section">
+        <StructureView ruleText={rev.ruleText} fileName={baseName} />
+      </Section>
+      <Section title="Beside random networks (NK ensemble)" testId="ensemble-section">
+        <EnsembleView
+          ruleText={rev.ruleText}
+          nodeCount={rev.nodeCount}
+          meanInDegree={rev.network.edgeCount / Math.max(1, rev.nodeCount)}
+          fileName={baseName}
+        />
+      </Section>
       <Section title={canWrite ? "Edit rules" : "Rules"} testId="rules-section">
         {canWrite ? (
           <EditRules projectId={projectId} modelId={modelId} baseText={rev.ruleText} latest={model.latestRevision} />

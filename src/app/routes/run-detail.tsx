@@ -1,9 +1,23 @@
-// One run: what was asked, live progress with elapsed and remaining time, the actions, and the result or error.
+// One run: titled by what it did and on what, live progress with elapsed and remaining time, the actions, the
+// parameters in words and the result in the view made for its kind; the whole run downloads as JSON.
 import { Link, useParams } from "react-router-dom";
 import { can } from "@shared/types/roles";
 import { Alert } from "@/components/ui/alert";
-import { RunActions, RunProgress, RunStateBadge, useRun } from "@/features/runs";
+import { SaveRulesAsModel } from "@/features/models/components/save-rules-as-model";
+import { RunActions, RunProgress, RunResultView, RunStateBadge, runTitle, useRun } from "@/features/runs";
 import { ApiError } from "@/lib/api-client";
+import { downloadJson, fileNameOf } from "@/lib/download";
+
+/** The parameters a person chose: scalars and short lists, without the rule text the run carries along. */
+function paramLines(params: unknown, prefix = ""): { label: string; value: string }[] {
+  if (typeof params !== "object" || params === null) return [];
+  return Object.entries(params).flatMap(([key, value]) => {
+    if (/RuleText$|^ruleText$|Id$/.test(key)) return [];
+    if (Array.isArray(value)) return [{ label: prefix + key, value: value.join(", ") }];
+    if (typeof value === "object" && value !== null) return paramLines(value, `${prefix}${key}.`);
+    return [{ label: prefix + key, value: String(value) }];
+  });
+}
 import { useProjectOutlet } from "./project-layout";
 
 export function RunDetailRoute() {
@@ -26,11 +40,17 @@ export function RunDetailRoute() {
       </div>
     );
   const mayAct = can(project.role, project.siteRole, "run:start");
+  const mayWriteModels = can(project.role, project.siteRole, "model:write") && !project.archived;
+  const title = runTitle(run);
+  const params = paramLines(run.params);
   return (
     <section className="space-y-5" data-testid="run-detail">
       {back}
       <div className="flex flex-wrap items-center gap-3">
-        <h2 className="text-lg font-semibold text-slate-900">{run.kind}</h2>
+        <h2 className="text-lg font-semibold text-slate-900" data-testid="run-title">
+          {title}
+        </h2>
+        <span className="rounded bg-slate-100 px-1.5 font-mono text-xs text-slate-600">{run.kind}</span>
         <RunStateBadge state={run.state} queuePosition={run.queuePosition} />
         {run.attempt > 1 && <span className="text-xs text-slate-500">attempt {run.attempt}</span>}
       </div>
@@ -42,25 +62,71 @@ export function RunDetailRoute() {
         </Alert>
       )}
       {run.state === "cancelled" && run.error && <Alert tone="info">{run.error.message}</Alert>}
-      <div className="grid gap-4 md:grid-cols-2">
+      {run.model && (
+        <p className="text-sm text-slate-600">
+          Model:{" "}
+          <Link
+            to={`/projects/${projectId}/models/${run.model.modelId}?revision=${run.model.revision}`}
+            className="font-medium text-brand-700 hover:underline"
+          >
+            {run.model.modelName}, revision {run.model.revision}
+          </Link>
+          {run.targetModel && (
+            <>
+              {" · target: "}
+              <Link
+                to={`/projects/${projectId}/models/${run.targetModel.modelId}?revision=${run.targetModel.revision}`}
+                className="font-medium text-brand-700 hover:underline"
+              >
+                {run.targetModel.modelName}, revision {run.targetModel.revision}
+              </Link>
+            </>
+          )}
+        </p>
+      )}
+      {params.length > 0 && (
         <div>
           <h3 className="mb-1 text-sm font-semibold text-slate-700">Parameters</h3>
-          <pre className="overflow-x-auto rounded-md bg-slate-50 p-3 text-xs text-slate-800">
-            {JSON.stringify(run.params, null, 2)}
-          </pre>
+          <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-0.5 text-sm" data-testid="run-params">
+            {params.map((p) => (
+              <div key={p.label} className="contents">
+                <dt className="text-slate-600">{p.label}</dt>
+                <dd className="font-mono text-slate-900">{p.value}</dd>
+              </div>
+            ))}
+          </dl>
         </div>
-        {run.state === "succeeded" && (
-          <div>
-            <h3 className="mb-1 text-sm font-semibold text-slate-700">Result</h3>
-            <pre
-              className="max-h-96 overflow-auto rounded-md bg-slate-50 p-3 text-xs text-slate-800"
-              data-testid="run-result"
+      )}
+      {run.state === "succeeded" && (
+        <div className="space-y-2" data-testid="run-result">
+          <div className="flex items-center gap-3">
+            <h3 className="text-sm font-semibold text-slate-700">Result</h3>
+            <button
+              type="button"
+              className="text-xs font-medium text-brand-700 hover:underline"
+              data-testid="run-json"
+              onClick={() => downloadJson(run, fileNameOf(title))}
             >
-              {JSON.stringify(run.result, null, 2)}
-            </pre>
+              Download as JSON
+            </button>
           </div>
-        )}
-      </div>
+          <RunResultView
+            run={run}
+            saveAsModel={
+              mayWriteModels
+                ? (ruleText, suggestedName) => (
+                    <SaveRulesAsModel
+                      projectId={projectId}
+                      ruleText={ruleText}
+                      suggestedName={suggestedName}
+                      description={`The coarsest closing grouping found by the run "${title}". A statement about the model, not the cell.`}
+                    />
+                  )
+                : undefined
+            }
+          />
+        </div>
+      )}
     </section>
   );
 }

@@ -1,16 +1,6 @@
 // Downloads of a drawing: the SVG text as written, and a PNG rasterised from that same SVG, so the two exports and
 // the palette they use cannot drift apart.
-export function downloadBlob(blob: Blob, fileName: string): void {
-  const url = URL.createObjectURL(blob);
-  const a = document.createElement("a");
-  a.href = url;
-  a.download = fileName;
-  document.body.appendChild(a);
-  a.click();
-  a.remove();
-  // the download has started from the click; the object URL is not needed after this turn
-  setTimeout(() => URL.revokeObjectURL(url), 0);
-}
+export { downloadBlob } from "@/lib/download";
 
 export const svgBlob = (svg: string) => new Blob([svg], { type: "image/svg+xml" });
 

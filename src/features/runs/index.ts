@@ -16,3 +16,5 @@ export { RunProgress } from "./components/run-progress";
 export { RunStateBadge } from "./components/run-state-badge";
 export { RunsTable } from "./components/runs-table";
 export { StartRunForm } from "./components/start-run-form";
+export { RunResultView } from "./components/run-result-view";
+export { runTitle, nothingFoundSentence } from "./lib/run-title";

@@ -1,6 +1,7 @@
 // Synchronous attractors with basin sizes (share of all states), cycle states and phenotype labels; a row can be
 // selected to paint its first state on the wiring diagram.
 import type { SynchronousResult } from "@shared/schemas/models";
+import { downloadCsv } from "@/lib/download";
 
 export function StateCells({ state, nodes, testId }: { state: string; nodes: readonly string[]; testId?: string }) {
   return (
@@ -21,13 +22,32 @@ export function StateCells({ state, nodes, testId }: { state: string; nodes: rea
   );
 }
 
+/** One CSV row per attractor state, so a cycle's states stay together under its number. */
+export function attractorCsvRows(result: SynchronousResult): (string | number)[][] {
+  return [
+    ["attractor", "kind", "basin", "share", "phenotype", "step", ...result.nodes],
+    ...result.attractors.flatMap((a, i) =>
+      a.states.map((s, j) => [
+        i + 1,
+        a.length === 1 ? "fixed point" : `cycle of ${a.length}`,
+        a.basin,
+        (a.basin / result.stateCount).toFixed(4),
+        a.phenotype ?? "",
+        j,
+        ...s,
+      ]),
+    ),
+  ];
+}
+
 export interface AttractorTableProps {
+  fileName?: string;
   result: SynchronousResult;
   selected: number | null;
   onSelect(index: number | null): void;
 }
 
-export function AttractorTable({ result, selected, onSelect }: AttractorTableProps) {
+export function AttractorTable({ result, selected, onSelect, fileName = "attractors" }: AttractorTableProps) {
   const hasPhenotypes = result.markers.length > 0;
   return (
     <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
@@ -87,7 +107,15 @@ export function AttractorTable({ result, selected, onSelect }: AttractorTablePro
       <p className="border-t border-slate-100 px-3 py-2 text-xs text-slate-500">
         {result.stateCount.toLocaleString()} states; longest transient {result.maxTransient} step
         {result.maxTransient === 1 ? "" : "s"}, mean {result.meanTransient.toFixed(2)}. Phenotype: 1 always on, 0 always
-        off, ~ oscillates on the attractor.
+        off, ~ oscillates on the attractor.{" "}
+        <button
+          type="button"
+          className="font-medium text-brand-700 hover:underline"
+          data-testid="attractor-csv"
+          onClick={() => downloadCsv(attractorCsvRows(result), `${fileName}-attractors`)}
+        >
+          Download as CSV
+        </button>
       </p>
     </div>
   );

@@ -1,8 +1,11 @@
-// Choose an initial state and an update scheme, then see the trajectory raster.
+// Choose an initial state and an update scheme, then see the trajectory as a grid; under synchronous update the step
+// where it enters an attractor is marked and the attractor named (from the revision's attractor list when known).
 import { useState } from "react";
-import type { TrajectoryBody } from "@shared/schemas/models";
-import { StateRaster } from "@/components/raster/state-raster";
+import type { SynchronousResult, TrajectoryBody, TrajectoryResult } from "@shared/schemas/models";
+import { StateGrid, type StateGridRow } from "@/components/state-grid/state-grid";
+import { attractorEntry } from "@/components/state-grid/grid-layout";
 import { useTrajectory } from "../api/get-trajectory";
+import { attractorName } from "./attractor-states";
 
 type Scheme = NonNullable<TrajectoryBody["scheme"]>;
 
@@ -12,7 +15,13 @@ export function TrajectoryPanel({
   revision,
   nodes,
   suggestedInitial,
+  attractors,
+  inputs,
+  fileName,
 }: {
+  attractors: SynchronousResult | null;
+  inputs: readonly string[];
+  fileName: string;
   projectId: string;
   modelId: string;
   revision: number;
@@ -108,7 +117,58 @@ export function TrajectoryPanel({
           {run.error.message}
         </p>
       )}
-      {run.data && <StateRaster nodes={run.data.nodes} states={run.data.states} />}
+      {run.data && <TrajectoryGrid trajectory={run.data} attractors={attractors} inputs={inputs} fileName={fileName} />}
+    </div>
+  );
+}
+
+function TrajectoryGrid({
+  trajectory,
+  attractors,
+  inputs,
+  fileName,
+}: {
+  trajectory: TrajectoryResult;
+  attractors: SynchronousResult | null;
+  inputs: readonly string[];
+  fileName: string;
+}) {
+  const synchronous = trajectory.scheme === "synchronous";
+  const entry = synchronous ? attractorEntry(trajectory.states, attractors?.attractors) : null;
+  const name = entry
+    ? entry.attractor !== null && attractors
+      ? attractorName(attractors, entry.attractor)
+      : entry.length === 1
+        ? "a fixed point"
+        : `a cycle of ${entry.length}`
+    : null;
+  const rows: StateGridRow[] = trajectory.states.map((state, t) => ({
+    label: `t=${t}`,
+    state,
+    ...(entry && t === entry.step
+      ? { tone: "entry" as const, note: `enters ${name}` }
+      : entry && t > entry.step
+        ? { tone: "cycle" as const }
+        : {}),
+  }));
+  return (
+    <div className="space-y-2">
+      <p className="text-sm text-slate-700" data-testid="trajectory-entry">
+        {!synchronous
+          ? "Under asynchronous update a trajectory is one of many; its entry into an attractor is not marked."
+          : entry
+            ? `Enters ${name} at step ${entry.step}.`
+            : `Reaches no attractor within ${trajectory.states.length - 1} steps.`}
+      </p>
+      <StateGrid
+        nodes={trajectory.nodes}
+        rows={rows}
+        markers={attractors?.markers ?? []}
+        inputs={inputs}
+        fileName={`${fileName}-trajectory`}
+        caption={`Trajectory of ${trajectory.states.length - 1} steps under ${trajectory.scheme} update, one row per step.`}
+        testId="trajectory-grid"
+      />
     </div>
   );
 }

@@ -2,6 +2,7 @@
 import { Link } from "react-router-dom";
 import type { Run } from "@shared/schemas/runs";
 import { ProgressBar } from "@/components/ui/progress-bar";
+import { runTitle } from "../lib/run-title";
 import { RunStateBadge } from "./run-state-badge";
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
@@ -18,7 +19,7 @@ export function RunsTable({ projectId, runs }: { projectId: string; runs: Run[] 
       <table className="min-w-full divide-y divide-slate-200 text-sm" data-testid="runs-table">
         <thead className="bg-slate-50 text-left text-xs font-semibold uppercase tracking-wide text-slate-600">
           <tr>
-            <th className="px-4 py-2">Kind</th>
+            <th className="px-4 py-2">Run</th>
             <th className="px-4 py-2">State</th>
             <th className="w-48 px-4 py-2">Progress</th>
             <th className="px-4 py-2">Started</th>
@@ -32,8 +33,9 @@ export function RunsTable({ projectId, runs }: { projectId: string; runs: Run[] 
                   to={`/projects/${projectId}/runs/${run.id}`}
                   className="font-medium text-brand-700 hover:underline"
                 >
-                  {run.kind}
+                  {runTitle(run)}
                 </Link>
+                <span className="ml-2 font-mono text-xs text-slate-500">{run.kind}</span>
               </td>
               <td className="px-4 py-2">
                 <RunStateBadge state={run.state} queuePosition={run.queuePosition} />

@@ -1,5 +1,5 @@
-// Starting a run by hand: the demonstration counter (to see sharding and progress), the elementary-rule hierarchy,
-// or attractors of rule text.
+// Starting a run by hand: attractors of rule text (the form opens on it), the elementary-rule hierarchy, or the
+// demonstration counter (to see sharding and progress).
 // Analyses of a model revision are started from the model's page through the same endpoint.
 import { useState, type FormEvent } from "react";
 import { MAX_HIERARCHY_BLOCK } from "@shared/schemas/automata";
@@ -17,7 +17,7 @@ export function StartRunForm({
   onStarted(runId: string, reused: boolean): void;
 }) {
   const start = useStartRun();
-  const [kind, setKind] = useState<"sleep-count" | "eca-hierarchy" | "attractors">("sleep-count");
+  const [kind, setKind] = useState<"sleep-count" | "eca-hierarchy" | "attractors">("attractors");
   const [maxBlock, setMaxBlock] = useState(12);
   const [itemCount, setItemCount] = useState(2000);
   const [shardCount, setShardCount] = useState(4);
@@ -50,9 +50,9 @@ export function StartRunForm({
             onChange={(e) => setKind(e.target.value as typeof kind)}
             data-testid="start-kind"
           >
-            <option value="sleep-count">sleep-count (demonstration)</option>
-            <option value="eca-hierarchy">eca-hierarchy (elementary rules)</option>
-            <option value="attractors">attractors (rule text)</option>
+            <option value="attractors">Attractors of rule text</option>
+            <option value="eca-hierarchy">Elementary-rule hierarchy</option>
+            <option value="sleep-count">Demonstration count (shows sharding and progress)</option>
           </select>
         </label>
         {kind === "sleep-count" ? (
@@ -114,6 +114,7 @@ export function StartRunForm({
               className={`${inputClass} font-mono`}
               value={ruleText}
               onChange={(e) => setRuleText(e.target.value)}
+              data-testid="start-rule-text"
             />
           </label>
         )}
