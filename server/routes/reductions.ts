@@ -5,6 +5,8 @@ import type { Knex } from "knex";
 import { z } from "zod";
 import { ProjectParams } from "@shared/schemas/projects";
 import {
+  BulkDecisionBody,
+  BulkDecisionResult,
   Certificate,
   CommentBody,
   DecisionBody,
@@ -12,6 +14,7 @@ import {
   ReductionList,
   ReductionListQuery,
   ReductionParams,
+  ProposeFindingBody,
   SaveTargetBody,
   SearchBody,
 } from "@shared/schemas/reductions";
@@ -19,7 +22,14 @@ import { StartRunResponse } from "@shared/schemas/runs";
 import { listReductions } from "../db/repositories/reductions";
 import { project, reply, routeGroup, type RouteGroup } from "../http/route-group";
 import type { RunQueue } from "../jobs/run-queue";
-import { commentOnReduction, decideReduction, reductionOf, reverifyReduction } from "../services/reductions/review";
+import { proposeFinding } from "../services/reductions/propose-finding";
+import {
+  commentOnReduction,
+  decideReduction,
+  decideReductions,
+  reductionOf,
+  reverifyReduction,
+} from "../services/reductions/review";
 import { saveTargetAsModel } from "../services/reductions/save-target";
 import { startSearch } from "../services/reductions/start-search";
 import { uploadCertificate } from "../services/reductions/upload-certificate";
@@ -63,6 +73,28 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
       const { reduction, isNew } = await uploadCertificate(db, { projectId: project.id, user }, body);
       return reply(isNew ? 201 : 200, reduction);
     },
+  });
+
+  routes.post("/proposals", {
+    summary: "Propose one finding a search kept on its run (by run and rank) for review",
+    access: project("run:start"),
+    params: ProjectParams,
+    body: ProposeFindingBody,
+    response: ReductionDetail,
+    status: [201, 200],
+    async handler({ body, project, user }) {
+      const { reduction, isNew } = await proposeFinding(db, { projectId: project.id, user }, body);
+      return reply(isNew ? 201 : 200, reduction);
+    },
+  });
+
+  routes.post("/decisions", {
+    summary: "Approve or reject many reductions at once; rejecting needs a reason",
+    access: project("review:decide"),
+    params: ProjectParams,
+    body: BulkDecisionBody,
+    response: BulkDecisionResult,
+    handler: ({ body, project, user }) => decideReductions(db, { projectId: project.id, user }, body),
   });
 
   routes.get("/:reductionId", {

@@ -2,7 +2,13 @@
 // Each change is written with its review event and its audit entry in one transaction.
 import type { Knex } from "knex";
 import type { z } from "zod";
-import type { CommentBody, DecisionBody, ReductionDetail } from "@shared/schemas/reductions";
+import type {
+  BulkDecisionBody,
+  BulkDecisionResult,
+  CommentBody,
+  DecisionBody,
+  ReductionDetail,
+} from "@shared/schemas/reductions";
 import { recordAudit } from "../../db/repositories/audit-log";
 import {
   commentBelongsTo,
@@ -62,6 +68,29 @@ export async function decideReduction(
     });
   });
   return reductionOf(db, by.projectId, r.id);
+}
+
+/**
+ * The review queue's bulk action: each reduction is decided on its own (approval re-verifies each certificate), and
+ * one that cannot be decided is reported with why instead of failing the others.
+ */
+export async function decideReductions(
+  db: Knex,
+  by: ReductionActor,
+  body: z.output<typeof BulkDecisionBody>,
+): Promise<BulkDecisionResult> {
+  const decided: string[] = [];
+  const skipped: BulkDecisionResult["skipped"] = [];
+  for (const id of [...new Set(body.reductionIds)]) {
+    try {
+      await decideReduction(db, by, id, { decision: body.decision, comment: body.comment });
+      decided.push(id);
+    } catch (err) {
+      if (!(err instanceof HttpError)) throw err;
+      skipped.push({ id, reason: err.message });
+    }
+  }
+  return { decided, skipped };
 }
 
 export async function reverifyReduction(db: Knex, by: ReductionActor, reductionId: string): Promise<ReductionDetail> {
