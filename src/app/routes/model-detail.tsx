@@ -20,6 +20,7 @@ import { PerturbationPanel } from "@/features/models/components/perturbation-pan
 import { RuleEditor } from "@/features/models/components/rule-editor";
 import { TrajectoryPanel } from "@/features/models/components/trajectory-panel";
 import { WiringDiagram } from "@/features/models/components/wiring-diagram";
+import { plural } from "@/lib/plural";
 
 function Section({ title, children, testId }: { title: string; children: React.ReactNode; testId?: string }) {
   return (
@@ -303,7 +304,7 @@ export function ModelDetailRoute() {
               >
                 r{r.revision}
               </button>
-              <span className="text-slate-600">{r.nodeCount} nodes</span>
+              <span className="text-slate-600">{plural(r.nodeCount, "node")}</span>
               <span className="text-slate-600">
                 {r.source === "edit" ? "edited" : r.file ? `imported from ${r.file.fileName}` : r.source}
               </span>
