@@ -22,6 +22,7 @@ import { StartRunResponse } from "@shared/schemas/runs";
 import { listReductions } from "../db/repositories/reductions";
 import { project, reply, routeGroup, type RouteGroup } from "../http/route-group";
 import type { RunQueue } from "../jobs/run-queue";
+import { notifyReviewWaiting, type NotifyPeopleDeps } from "../services/notifications/notify-people";
 import { proposeFinding } from "../services/reductions/propose-finding";
 import {
   commentOnReduction,
@@ -36,8 +37,14 @@ import { uploadCertificate } from "../services/reductions/upload-certificate";
 
 const UploadBody = z.object({ sourceModelId: z.uuid(), targetModelId: z.uuid().optional(), certificate: Certificate });
 
-export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: number }): RouteGroup {
-  const { db } = deps;
+export function reductionsRoutes(deps: {
+  db: Knex;
+  queue: RunQueue;
+  queueCap: number;
+  /** Who is told about decisions, waiting reviews and mentions (in the app, and by e-mail when they chose it). */
+  notify?: NotifyPeopleDeps;
+}): RouteGroup {
+  const { db, notify } = deps;
   const routes = routeGroup({ mountPath: "/projects/:projectId/reductions", tag: "reductions", db });
 
   routes.post("/searches", {
@@ -71,6 +78,8 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
     status: [201, 200],
     async handler({ body, project, user }) {
       const { reduction, isNew } = await uploadCertificate(db, { projectId: project.id, user }, body);
+      if (isNew && notify)
+        await notifyReviewWaiting(notify, project.id, user.id, 1, `${user.displayName} submitted a certificate.`);
       return reply(isNew ? 201 : 200, reduction);
     },
   });
@@ -84,6 +93,8 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
     status: [201, 200],
     async handler({ body, project, user }) {
       const { reduction, isNew } = await proposeFinding(db, { projectId: project.id, user }, body);
+      if (isNew && notify)
+        await notifyReviewWaiting(notify, project.id, user.id, 1, `${user.displayName} proposed a search finding.`);
       return reply(isNew ? 201 : 200, reduction);
     },
   });
@@ -94,7 +105,7 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
     params: ProjectParams,
     body: BulkDecisionBody,
     response: BulkDecisionResult,
-    handler: ({ body, project, user }) => decideReductions(db, { projectId: project.id, user }, body),
+    handler: ({ body, project, user }) => decideReductions(db, { projectId: project.id, user }, body, notify),
   });
 
   routes.get("/:reductionId", {
@@ -124,7 +135,7 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
     body: DecisionBody,
     response: ReductionDetail,
     handler: ({ params, body, project, user }) =>
-      decideReduction(db, { projectId: project.id, user }, params.reductionId, body),
+      decideReduction(db, { projectId: project.id, user }, params.reductionId, body, notify),
   });
 
   routes.post("/:reductionId/verify", {
@@ -143,7 +154,7 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
     response: ReductionDetail,
     status: 201,
     handler: ({ params, body, project, user }) =>
-      commentOnReduction(db, { projectId: project.id, user }, params.reductionId, body),
+      commentOnReduction(db, { projectId: project.id, user }, params.reductionId, body, notify),
   });
 
   routes.post("/:reductionId/save-target", {

@@ -297,6 +297,13 @@ const rows: Row[] = [
   },
   { method: "get", path: "/api/projects/{projectId}/model-hierarchy", expected: [401, 404, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/notifications", expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/notifications/preferences", expected: [401, 200, 200, 200, 200, 200, 200] },
+  {
+    method: "patch",
+    path: "/api/notifications/preferences",
+    body: () => ({ emailOnDecision: true, emailOnReviewWaiting: true, emailOnMention: false }),
+    expected: [401, 200, 200, 200, 200, 200, 200],
+  },
   {
     method: "post",
     path: "/api/notifications/read",

@@ -1,6 +1,7 @@
 import { Alert } from "@/components/ui/alert";
 import { useProfile } from "@/features/accounts/api/get-profile";
 import { DisplayNameForm, PasswordForm } from "@/features/accounts/components/profile-forms";
+import { NotificationSettings } from "@/features/runs";
 
 export function ProfileRoute() {
   const { data: profile, error, isPending } = useProfile();
@@ -21,6 +22,10 @@ export function ProfileRoute() {
       <div className="rounded-lg border border-slate-200 bg-white p-5">
         <h2 className="mb-4 text-lg font-semibold">Password</h2>
         <PasswordForm />
+      </div>
+      <div className="rounded-lg border border-slate-200 bg-white p-5">
+        <h2 className="mb-4 text-lg font-semibold">Notifications</h2>
+        <NotificationSettings />
       </div>
     </section>
   );

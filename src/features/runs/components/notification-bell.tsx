@@ -4,8 +4,8 @@ import { Link } from "react-router-dom";
 import { useNotifications } from "../api/list-notifications";
 import { useMarkNotificationsRead } from "../api/mark-notifications-read";
 
-export function NotificationBell() {
-  const { data } = useNotifications();
+export function NotificationBell({ signedIn }: { signedIn: boolean }) {
+  const { data } = useNotifications(signedIn);
   const markRead = useMarkNotificationsRead();
   const [isOpen, setOpen] = useState(false);
   const ref = useRef<HTMLDivElement>(null);
@@ -19,8 +19,7 @@ export function NotificationBell() {
     return () => document.removeEventListener("mousedown", close);
   }, [isOpen]);
 
-  // Anonymous visitors get 401 and see no bell.
-  if (!data) return null;
+  if (!signedIn || !data) return null;
   const unread = data.unreadCount;
   const toggle = () => {
     setOpen((o) => !o);
