@@ -25,6 +25,7 @@ function WriteForm({ projectId, onCreated }: { projectId: string; onCreated(d: M
   const [name, setName] = useState("");
   const [text, setText] = useState(starter);
   const [submittedText, setSubmittedText] = useState<string | null>(null);
+  const [savable, setSavable] = useState(false);
   const serverErrors = submittedText === text ? issuesOf(create.error) : [];
   return (
     <form
@@ -45,9 +46,15 @@ function WriteForm({ projectId, onCreated }: { projectId: string; onCreated(d: M
           className="rounded-md border border-slate-300 px-2 py-1"
         />
       </label>
-      <RuleEditor projectId={projectId} value={text} onChange={setText} serverErrors={serverErrors} />
+      <RuleEditor
+        projectId={projectId}
+        value={text}
+        onChange={setText}
+        serverErrors={serverErrors}
+        onSavableChange={setSavable}
+      />
       {create.error && serverErrors.length === 0 && submittedText === text && <Alert>{create.error.message}</Alert>}
-      <Button type="submit" disabled={create.isPending || !name.trim()} data-testid="save-model">
+      <Button type="submit" disabled={create.isPending || !name.trim() || !savable} data-testid="save-model">
         {create.isPending ? "Saving…" : "Save model"}
       </Button>
     </form>

@@ -223,7 +223,7 @@ export function ReviewPanel({ projectId, reduction, canDecide, canComment }: Rev
               onChange={(e) => setCommentBody(e.target.value)}
               maxLength={4000}
               rows={2}
-              placeholder="Add a comment"
+              placeholder="Add a comment (write @ and a member's name to tell them)"
               className="w-full rounded-md border border-slate-300 px-2 py-1 text-sm"
               data-testid="comment-body"
             />

@@ -65,7 +65,8 @@ export function NotificationBell({ signedIn }: { signedIn: boolean }) {
           <p className="border-b border-slate-100 px-4 py-2 text-sm font-semibold">Notifications</p>
           {data.items.length === 0 ? (
             <p className="px-4 py-3 text-sm text-slate-500">
-              Nothing yet. Runs that take longer than a minute tell you here when they end.
+              Nothing yet. Decisions on reductions you proposed, reductions waiting for your review, mentions with @,
+              and runs that took longer than a minute appear here.
             </p>
           ) : (
             <ul className="max-h-96 divide-y divide-slate-100 overflow-y-auto">
