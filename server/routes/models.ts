@@ -23,6 +23,7 @@ import {
   TrajectoryBody,
   TrajectoryResult,
   UploadFields,
+  UploadPreview,
   ValidateBody,
   ValidateResult,
 } from "@shared/schemas/models";
@@ -36,6 +37,7 @@ import { exportModel } from "../services/models/model-formats";
 import { validateRuleText } from "../services/models/model-reading";
 import { createModelFromRules, generateModel, importModel } from "../services/models/new-model";
 import { reviseModel } from "../services/models/new-revision";
+import { previewUpload } from "../services/models/upload-preview";
 import {
   comparePerturbation,
   revisionAttractors,
@@ -122,6 +124,21 @@ export function modelsRoutes(deps: { db: Knex }): RouteGroup {
         { originalName: file.originalname, mediaType: file.mimetype, bytes: file.buffer },
         body,
       );
+    },
+  });
+
+  routes.post("/upload/preview", {
+    summary: "Read an uploaded file without storing it: what it holds, warnings, and models with identical content",
+    access: write,
+    params: ProjectParams,
+    before: [readUploadForm],
+    files: ["file"],
+    body: UploadFields,
+    response: UploadPreview,
+    handler({ req, project }) {
+      const file = req.file;
+      if (!file) throw new HttpError(400, "INVALID_INPUT", 'Attach the model as the form field "file"');
+      return previewUpload(db, project.id, { originalName: file.originalname, bytes: file.buffer });
     },
   });
 

@@ -183,6 +183,12 @@ const rows: Row[] = [
   },
   {
     method: "post",
+    path: "/api/projects/{projectId}/models/upload/preview",
+    body: () => ({ name: "No file" }),
+    expected: [401, 404, 403, 403, 400, 400, 400],
+  },
+  {
+    method: "post",
     path: "/api/projects/{projectId}/models/generate",
     body: () => ({ name: "Matrix ring", generator: { kind: "eca", rule: 30, radius: 1, cells: 6 } }),
     expected: [401, 404, 403, 403, 201, 201, 201],

@@ -177,20 +177,20 @@ export function ReviewQueue({
               Reject selected
             </button>
           </div>
-          {decide.data && (
-            <p className="text-sm text-slate-700" role="status" data-testid="bulk-outcome">
-              {plural(decide.data.decided.length, "reduction")} decided
-              {decide.data.skipped.length > 0 &&
-                `; ${plural(decide.data.skipped.length, "was", "were")} left as they were: ${decide.data.skipped.map((s) => s.reason).join("; ")}`}
-              .
-            </p>
-          )}
-          {decide.error && (
-            <p role="alert" className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800">
-              {decide.error instanceof ApiError ? decide.error.message : "The request failed"}
-            </p>
-          )}
         </div>
+      )}
+      {decide.data && (
+        <p className="text-sm text-slate-700" role="status" data-testid="bulk-outcome">
+          {plural(decide.data.decided.length, "reduction")} decided
+          {decide.data.skipped.length > 0 &&
+            `; ${plural(decide.data.skipped.length, "was", "were")} left as they were: ${decide.data.skipped.map((s) => s.reason).join("; ")}`}
+          .
+        </p>
+      )}
+      {decide.error && (
+        <p role="alert" className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800">
+          {decide.error instanceof ApiError ? decide.error.message : "The request failed"}
+        </p>
       )}
       {reductions.error && (
         <p role="alert" className="text-sm text-red-800">
