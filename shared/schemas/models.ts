@@ -94,6 +94,8 @@ export const UploadPreview = z.object({
   inputs: z.array(z.string()),
   firstRules: z.array(z.string()),
   moreRules: z.number().int(),
+  /** The whole model as rule text, so "add as a revision" of an existing model needs no second upload. */
+  ruleText: z.string(),
   warnings: z.array(z.string()),
   duplicates: z.array(z.object({ modelId: z.string(), name: z.string(), revision: z.number().int() })),
 });

@@ -121,3 +121,30 @@ describe("notifications of the review workflow", () => {
     expect(bad.status).toBe(400);
   });
 });
+
+describe("POST /models/upload/preview", () => {
+  it("reads a file without storing it and names the models with identical content", async () => {
+    const before = (await modeler.get(`${base}/models`)).body.data.length;
+    const res = await modeler
+      .post(`${base}/models/upload/preview`)
+      .attach("file", Buffer.from(sourceRules), { filename: "cycle.rules", contentType: "text/plain" });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body.data).toMatchObject({
+      fileName: "cycle.rules",
+      suggestedName: "cycle",
+      nodeCount: 2,
+      nodes: ["P", "Q"],
+      inputs: [],
+      firstRules: ["P' = !Q", "Q' = P"],
+    });
+    expect(res.body.data.duplicates).toContainEqual(
+      expect.objectContaining({ modelId: sourceId, name: `Notify source ${suffix}` }),
+    );
+    expect((await modeler.get(`${base}/models`)).body.data.length).toBe(before);
+    const broken = await modeler
+      .post(`${base}/models/upload/preview`)
+      .attach("file", Buffer.from("P' = !\n"), { filename: "broken.rules", contentType: "text/plain" });
+    expect(broken.status).toBe(400);
+    expect(broken.body.error.code).toBe("PARSE_ERROR");
+  });
+});

@@ -149,6 +149,23 @@ describe("the review workflow in the browser", () => {
       .toContain("Rowan Ashdown mentioned you");
   });
 
+  it("offers the existing model when the same content is uploaded again, after a preview of the file", async () => {
+    const { page } = browser;
+    await page.goto(`${server.baseUrl}/projects/${projectId}/models/new`);
+    await page.getByTestId("mode-upload").click();
+    await page
+      .getByTestId("upload-input")
+      .setInputFiles({ name: "oscillator.rules", mimeType: "text/plain", buffer: Buffer.from(rules.G) });
+    await page.getByTestId("upload-preview").waitFor();
+    expect(await page.getByTestId("upload-preview").textContent()).toContain("1 node,");
+    expect(await page.getByTestId("duplicate-offer").textContent()).toContain(`G ${tag}`);
+    await screenshot(page, "upload-duplicate-offer");
+    await page.getByTestId("duplicate-open").click();
+    await page.waitForURL(new RegExp(`/models/${modelIds.G}$`));
+    const models = await api("get", `/projects/${projectId}/models`);
+    expect(models).toHaveLength(3);
+  });
+
   it("warns before leaving unsaved rule edits, and keeps them as a draft", async () => {
     const { page } = browser;
     await page.goto(`${server.baseUrl}/projects/${projectId}/models/${modelIds.G}`);

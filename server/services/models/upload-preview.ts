@@ -44,6 +44,7 @@ export async function previewUpload(
     inputs: summary.inputs,
     firstRules: rules.slice(0, FIRST_RULES),
     moreRules: Math.max(0, rules.length - FIRST_RULES),
+    ruleText: read.ruleText,
     warnings,
     duplicates: duplicates.map((d) => ({ modelId: d.id, name: d.name, revision: d.revision })),
   };

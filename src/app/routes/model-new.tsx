@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { Link, useNavigate, useParams } from "react-router-dom";
 import type { ModelDetail } from "@shared/schemas/models";
+import { can } from "@shared/types/roles";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { useCreateModel } from "@/features/models/api/create-model";
@@ -10,6 +11,7 @@ import { GeneratorForm } from "@/features/models/components/generator-form";
 import { issuesOf } from "@/features/models/components/parse-error-list";
 import { RuleEditor } from "@/features/models/components/rule-editor";
 import { UploadDropZone } from "@/features/models/components/upload-drop-zone";
+import { useProjectOutlet } from "./project-layout";
 
 type Mode = "write" | "upload" | "generate";
 
@@ -66,6 +68,21 @@ export function ModelNewRoute() {
   const navigate = useNavigate();
   const [mode, setMode] = useState<Mode>("write");
   const open = (d: ModelDetail) => navigate(`/projects/${projectId}/models/${d.model.id}`);
+  const { project } = useProjectOutlet();
+  // Said before any work: a role that cannot save models sees why, not a form it would fill in for nothing.
+  if (!can(project.role, project.siteRole, "model:write"))
+    return (
+      <section className="space-y-3" data-testid="role-limits">
+        <h2 className="text-lg font-semibold text-slate-900">New model</h2>
+        <Alert tone="info">
+          As a {project.role ?? "non-member"} of this project you can read its models, runs and reductions, but not
+          create or edit models. Ask an owner of the project for the modeler role.
+        </Alert>
+        <Link to={`/projects/${projectId}/models`} className="text-sm text-brand-700 hover:underline">
+          ← Back to the models
+        </Link>
+      </section>
+    );
   const modes: [Mode, string][] = [
     ["write", "Write rules"],
     ["upload", "Upload a file"],
