@@ -104,7 +104,7 @@ export function createApp(deps: AppDeps): Express {
     modelsRoutes(deps),
     runsRoutes(runs),
     notificationsRoutes(deps),
-    reductionsRoutes(runs),
+    reductionsRoutes({ ...runs, notify: { db: deps.db, log: deps.log, mailer, publicUrl: deps.config.publicUrl } }),
     modelHierarchyRoutes(deps),
     automataRoutes(deps),
     openApiRoutes(deps),

@@ -24,6 +24,7 @@ import type { TokenScope } from "@shared/schemas/access-tokens";
 import type { Capability } from "@shared/types/roles";
 import { projectAccess, requireSiteAdmin, requireUser, type AuthUser, type ProjectContext } from "./auth";
 import { HttpError } from "./errors";
+import { issueSentence } from "@shared/schemas/issue-words";
 
 export type HttpMethod = "get" | "post" | "put" | "patch" | "delete";
 /** Statuses a route answers with when it has done its job (503: a health check that answers, degraded). */
@@ -137,7 +138,7 @@ function parsePart(part: Part, schema: z.ZodType | undefined, value: unknown): u
   if (!schema) return undefined;
   const result = schema.safeParse(value ?? {});
   if (result.success) return result.data;
-  const details = result.error.issues.map((i) => ({ field: [part, ...i.path].join("."), message: i.message }));
+  const details = result.error.issues.map((i) => ({ field: [part, ...i.path].join("."), message: issueSentence(i) }));
   const first = details[0]!;
   throw new HttpError(400, "INVALID_INPUT", `${first.field}: ${first.message}`, details);
 }

@@ -41,6 +41,8 @@ import type { RunKindDefinition } from "./run-kind";
 import type { RunSettings } from "./run-settings";
 import { startShardHeartbeat } from "./shard-heartbeat";
 import { shardOutcome, type ShardEnd } from "./shard-outcome";
+import { ReductionSearchResult } from "@shared/schemas/reductions";
+import { notifyReviewWaiting } from "../services/notifications/notify-people";
 
 export interface RunWorkerDeps {
   db: Knex;
@@ -89,9 +91,25 @@ async function notify(w: Worker, run: Run): Promise<void> {
       },
       run,
     );
+    await notifySearchFindings(w, run);
   } catch (err) {
     w.log.warn({ err: { message: (err as Error).message }, runId: run.id }, "run notification failed");
   }
+}
+
+/** A search that stored reductions leaves work for the project's reviewers. */
+async function notifySearchFindings(w: Worker, run: Run): Promise<void> {
+  if (run.kind !== "reduction-search" || run.state !== "succeeded") return;
+  const stored = ReductionSearchResult.safeParse(run.result);
+  if (!stored.success) return;
+  const count = stored.data.reductionIds.length;
+  await notifyReviewWaiting(
+    { db: w.db, log: w.log, mailer: w.mailer, publicUrl: w.publicUrl },
+    run.projectId,
+    run.startedBy,
+    count,
+    `A search found ${count === 1 ? "a reduction" : `${count} reductions`} worth reviewing.`,
+  );
 }
 
 async function failRun(w: Worker, runId: string, error: RunError): Promise<void> {

@@ -23,6 +23,7 @@ import {
   TrajectoryBody,
   TrajectoryResult,
   UploadFields,
+  UploadPreview,
   ValidateBody,
   ValidateResult,
 } from "@shared/schemas/models";
@@ -35,6 +36,7 @@ import { modelDetail, modelRevisions, storedRevision } from "../services/models/
 import { exportModel } from "../services/models/model-formats";
 import { createModelFromRules, generateModel, importModel } from "../services/models/new-model";
 import { reviseModel } from "../services/models/new-revision";
+import { previewUpload } from "../services/models/upload-preview";
 import { checkTrajectorySize, comparePerturbation, revisionAttractors } from "../services/models/revision-analyses";
 import { INLINE_INPUT_CHARS, inPlaceIfSmall } from "../workers/interactive-pool";
 
@@ -121,6 +123,21 @@ export function modelsRoutes(deps: { db: Knex }): RouteGroup {
         { originalName: file.originalname, mediaType: file.mimetype, bytes: file.buffer },
         body,
       );
+    },
+  });
+
+  routes.post("/upload/preview", {
+    summary: "Read an uploaded file without storing it: what it holds, warnings, and models with identical content",
+    access: write,
+    params: ProjectParams,
+    before: [readUploadForm],
+    files: ["file"],
+    body: UploadFields,
+    response: UploadPreview,
+    handler({ req, project }) {
+      const file = req.file;
+      if (!file) throw new HttpError(400, "INVALID_INPUT", 'Attach the model as the form field "file"');
+      return previewUpload(db, project.id, { originalName: file.originalname, bytes: file.buffer });
     },
   });
 

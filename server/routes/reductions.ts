@@ -5,6 +5,8 @@ import type { Knex } from "knex";
 import { z } from "zod";
 import { ProjectParams } from "@shared/schemas/projects";
 import {
+  BulkDecisionBody,
+  BulkDecisionResult,
   Certificate,
   CommentBody,
   DecisionBody,
@@ -12,6 +14,7 @@ import {
   ReductionList,
   ReductionListQuery,
   ReductionParams,
+  ProposeFindingBody,
   SaveTargetBody,
   SearchBody,
 } from "@shared/schemas/reductions";
@@ -19,15 +22,29 @@ import { StartRunResponse } from "@shared/schemas/runs";
 import { listReductions } from "../db/repositories/reductions";
 import { project, reply, routeGroup, type RouteGroup } from "../http/route-group";
 import type { RunQueue } from "../jobs/run-queue";
-import { commentOnReduction, decideReduction, reductionOf, reverifyReduction } from "../services/reductions/review";
+import { notifyReviewWaiting, type NotifyPeopleDeps } from "../services/notifications/notify-people";
+import { proposeFinding } from "../services/reductions/propose-finding";
+import {
+  commentOnReduction,
+  decideReduction,
+  decideReductions,
+  reductionOf,
+  reverifyReduction,
+} from "../services/reductions/review";
 import { saveTargetAsModel } from "../services/reductions/save-target";
 import { startSearch } from "../services/reductions/start-search";
 import { uploadCertificate } from "../services/reductions/upload-certificate";
 
 const UploadBody = z.object({ sourceModelId: z.uuid(), targetModelId: z.uuid().optional(), certificate: Certificate });
 
-export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: number }): RouteGroup {
-  const { db } = deps;
+export function reductionsRoutes(deps: {
+  db: Knex;
+  queue: RunQueue;
+  queueCap: number;
+  /** Who is told about decisions, waiting reviews and mentions (in the app, and by e-mail when they chose it). */
+  notify?: NotifyPeopleDeps;
+}): RouteGroup {
+  const { db, notify } = deps;
   const routes = routeGroup({ mountPath: "/projects/:projectId/reductions", tag: "reductions", db });
 
   routes.post("/searches", {
@@ -61,8 +78,34 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
     status: [201, 200],
     async handler({ body, project, user }) {
       const { reduction, isNew } = await uploadCertificate(db, { projectId: project.id, user }, body);
+      if (isNew && notify)
+        await notifyReviewWaiting(notify, project.id, user.id, 1, `${user.displayName} submitted a certificate.`);
       return reply(isNew ? 201 : 200, reduction);
     },
+  });
+
+  routes.post("/proposals", {
+    summary: "Propose one finding a search kept on its run (by run and rank) for review",
+    access: project("run:start"),
+    params: ProjectParams,
+    body: ProposeFindingBody,
+    response: ReductionDetail,
+    status: [201, 200],
+    async handler({ body, project, user }) {
+      const { reduction, isNew } = await proposeFinding(db, { projectId: project.id, user }, body);
+      if (isNew && notify)
+        await notifyReviewWaiting(notify, project.id, user.id, 1, `${user.displayName} proposed a search finding.`);
+      return reply(isNew ? 201 : 200, reduction);
+    },
+  });
+
+  routes.post("/decisions", {
+    summary: "Approve or reject many reductions at once; rejecting needs a reason",
+    access: project("review:decide"),
+    params: ProjectParams,
+    body: BulkDecisionBody,
+    response: BulkDecisionResult,
+    handler: ({ body, project, user }) => decideReductions(db, { projectId: project.id, user }, body, notify),
   });
 
   routes.get("/:reductionId", {
@@ -92,7 +135,7 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
     body: DecisionBody,
     response: ReductionDetail,
     handler: ({ params, body, project, user }) =>
-      decideReduction(db, { projectId: project.id, user }, params.reductionId, body),
+      decideReduction(db, { projectId: project.id, user }, params.reductionId, body, notify),
   });
 
   routes.post("/:reductionId/verify", {
@@ -111,7 +154,7 @@ export function reductionsRoutes(deps: { db: Knex; queue: RunQueue; queueCap: nu
     response: ReductionDetail,
     status: 201,
     handler: ({ params, body, project, user }) =>
-      commentOnReduction(db, { projectId: project.id, user }, params.reductionId, body),
+      commentOnReduction(db, { projectId: project.id, user }, params.reductionId, body, notify),
   });
 
   routes.post("/:reductionId/save-target", {

@@ -44,6 +44,7 @@ export const API_ERROR_CODES = [
   "SOURCE_MISMATCH",
   "TARGET_MISMATCH",
   "INVALID_CERTIFICATE",
+  "SELF_REDUCTION", // a reduction of a model onto itself (F = G) proves nothing
   "NEEDS_RUN", // the analysis is too large for a request; details name the run kind to start
   "QUEUE_FULL",
   "RUN_FINISHED",

@@ -84,6 +84,23 @@ export const UploadFields = z.object({
   description: z.string().max(2000).default(""),
 });
 
+/** An upload read but not stored: what the person checks before saving, and models with identical content. */
+export const UploadPreview = z.object({
+  fileName: z.string(),
+  suggestedName: z.string(),
+  source: ModelSource,
+  nodeCount: z.number().int(),
+  nodes: z.array(z.string()),
+  inputs: z.array(z.string()),
+  firstRules: z.array(z.string()),
+  moreRules: z.number().int(),
+  /** The whole model as rule text, so "add as a revision" of an existing model needs no second upload. */
+  ruleText: z.string(),
+  warnings: z.array(z.string()),
+  duplicates: z.array(z.object({ modelId: z.string(), name: z.string(), revision: z.number().int() })),
+});
+export type UploadPreview = z.infer<typeof UploadPreview>;
+
 export const NewRevisionBody = z.object({
   ruleText: z.string().min(1).max(MODEL_UPLOAD_LIMIT_BYTES),
   message: z.string().max(500).default(""),

@@ -94,6 +94,8 @@ export const ReductionSummary = z.object({
   targetNodeCount: z.number().int(),
   targetNames: z.array(z.string()),
   flags: z.array(z.string()),
+  /** Position in the ranking of the search that found it (0 = best, and 0 for single results). */
+  rank: z.number().int(),
   reviewState: ReviewState,
   foundBy: Person,
   foundInRunId: z.string().nullable(),
@@ -130,16 +132,43 @@ export const ReductionDetail = ReductionSummary.extend({
 export type ReductionDetail = z.infer<typeof ReductionDetail>;
 
 export const ReductionParams = z.object({ projectId: z.uuid(), reductionId: z.uuid() });
+/** Flags a reviewer may filter by; "none" keeps the unflagged reductions. */
+export const ReductionFlagFilter = z.enum(["none", "constant", "identity", "decoupled", "trivial", "isomorphic"]);
+export const ReductionSort = z.enum(["newest", "oldest", "smallest", "largest", "rank"]);
+export type ReductionSort = z.infer<typeof ReductionSort>;
 export const ReductionListQuery = z.object({
   state: ReviewState.optional(),
   notion: ReductionNotion.optional(),
   sourceModelId: z.uuid().optional(),
+  flag: ReductionFlagFilter.optional(),
+  minTargetNodes: z.coerce.number().int().min(1).max(2000).optional(),
+  maxTargetNodes: z.coerce.number().int().min(1).max(2000).optional(),
+  runId: z.uuid().optional(),
+  sort: ReductionSort.default("newest"),
 });
-export const DecisionBody = z.object({
+
+const REJECT_REASON = "say why it is rejected: the person who proposed it reads the reason";
+const decisionFields = {
   decision: z.enum(["approve", "reject"]),
   comment: z.string().trim().max(4000).default(""),
-});
+};
+const reasonGiven = (d: { decision: "approve" | "reject"; comment: string }) =>
+  d.decision === "approve" || d.comment.length > 0;
+export const DecisionBody = z.object(decisionFields).refine(reasonGiven, { message: REJECT_REASON, path: ["comment"] });
 export type DecisionBody = z.input<typeof DecisionBody>;
+/** One decision for many reductions at once (the review queue's bulk action). */
+export const BulkDecisionBody = z
+  .object({ ...decisionFields, reductionIds: z.array(z.uuid()).min(1, "choose at least one reduction").max(200) })
+  .refine(reasonGiven, { message: REJECT_REASON, path: ["comment"] });
+export type BulkDecisionBody = z.input<typeof BulkDecisionBody>;
+export const BulkDecisionResult = z.object({
+  decided: z.array(z.string()),
+  /** Reductions left as they were, each with why (not found, or a certificate that no longer verifies). */
+  skipped: z.array(z.object({ id: z.string(), reason: z.string() })),
+});
+export type BulkDecisionResult = z.infer<typeof BulkDecisionResult>;
+/** Propose one finding that the run kept on its result but did not store (the "propose" button of a finding). */
+export const ProposeFindingBody = z.object({ runId: z.uuid(), rank: z.number().int().min(0) });
 export const CommentBody = z.object({
   body: z.string().trim().min(1, "a comment cannot be empty").max(4000),
   parentId: z.uuid().optional(),
@@ -204,7 +233,13 @@ export const ReductionSearchParams = z.object({
 export type ReductionSearchParams = z.infer<typeof ReductionSearchParams>;
 
 /** One proven statement a search returns; the run's merge step stores each as a proposed reduction. */
-export const SearchFinding = z.object({ certificate: Certificate, flags: z.array(z.string()), rank: z.number().int() });
+export const SearchFinding = z.object({
+  certificate: Certificate,
+  flags: z.array(z.string()),
+  rank: z.number().int(),
+  /** The stored reduction, once the finding is proposed (by the run itself or later, by a person). */
+  reductionId: z.string().nullable().default(null),
+});
 export type SearchFinding = z.infer<typeof SearchFinding>;
 
 /**
@@ -232,5 +267,13 @@ export const ReductionSearchResult = z.object({
   coarsest: CoarsestGrouping.nullable().default(null),
   bounds: z.record(z.string(), z.unknown()),
   reductionIds: z.array(z.string()).default([]),
+  /**
+   * Why fewer reductions were stored than targets found: the ranked list on the run holds at most a few hundred
+   * findings, flagged ones (constant, identity, decoupled, trivial, isomorphic) wait for a person to propose them,
+   * and of the rest only the best few enter review at once.
+   */
+  heldBack: z
+    .object({ notListed: z.number().int(), flagged: z.number().int(), beyondLimit: z.number().int() })
+    .default({ notListed: 0, flagged: 0, beyondLimit: 0 }),
 });
 export type ReductionSearchResult = z.infer<typeof ReductionSearchResult>;

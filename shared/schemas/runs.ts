@@ -108,6 +108,19 @@ export const Notification = z.object({
 export type Notification = z.infer<typeof Notification>;
 export const NotificationList = z.object({ items: z.array(Notification), unreadCount: z.number().int() });
 export type NotificationList = z.infer<typeof NotificationList>;
+
+/** Which notifications also come by e-mail; every notification arrives in the app. */
+export const NotificationPreferences = z.object({
+  emailOnDecision: z.boolean(),
+  emailOnReviewWaiting: z.boolean(),
+  emailOnMention: z.boolean(),
+});
+export type NotificationPreferences = z.infer<typeof NotificationPreferences>;
+export const NOTIFICATION_DEFAULTS: NotificationPreferences = {
+  emailOnDecision: true,
+  emailOnReviewWaiting: false,
+  emailOnMention: true,
+};
 export const MarkNotificationsReadBody = z.object({
   ids: z.array(z.uuid()).max(500).optional(),
   all: z.boolean().optional(),

@@ -3,6 +3,7 @@ import { createBrowserRouter, RouterProvider } from "react-router-dom";
 import { AppShell } from "@/components/layout/app-shell";
 import { RequireSignIn } from "@/features/accounts/components/require-sign-in";
 import { UserMenu } from "@/features/accounts/components/user-menu";
+import { useSession } from "@/features/accounts/api/get-session";
 import { NotificationBell } from "@/features/runs";
 import { HealthBadge } from "@/features/system/components/health-badge";
 import { AcceptInvitationRoute } from "./routes/accept-invitation";
@@ -31,11 +32,15 @@ import { SignInRoute } from "./routes/sign-in";
 import { SignUpRoute } from "./routes/sign-up";
 import { SignUpFinishRoute } from "./routes/sign-up-finish";
 
+/** Nobody signed in: nothing to ask /api/notifications for. */
+function SignedInBell() {
+  const session = useSession();
+  return <NotificationBell signedIn={Boolean(session.data?.user)} />;
+}
+
 export const routes = [
   {
-    element: (
-      <AppShell accountSlot={<UserMenu />} notificationSlot={<NotificationBell />} statusSlot={<HealthBadge />} />
-    ),
+    element: <AppShell accountSlot={<UserMenu />} notificationSlot={<SignedInBell />} statusSlot={<HealthBadge />} />,
     errorElement: <RouteErrorBoundary />,
     children: [
       { index: true, element: <HomeRoute /> },

@@ -2,6 +2,7 @@
 // failures become ApiError carrying the server's stable code (shared/schemas/api-error.ts) so the UI can switch on it.
 import type { z } from "zod";
 import { ApiErrorBody, type ApiErrorCode } from "@shared/schemas/api-error";
+import { fieldLabel } from "@shared/schemas/issue-words";
 
 /** Failures found on this side: no answer at all, an answer not in the shared shape, or an unreadable error. */
 export type ClientErrorCode = "NETWORK" | "BAD_RESPONSE" | `HTTP_${number}`;
@@ -16,6 +17,16 @@ export class ApiError extends Error {
     super(message);
     this.name = "ApiError";
   }
+}
+
+/** A 400 names fields by their path ("body.observe"); people read the field's name and a sentence instead. */
+function readableMessage(code: string, message: string, details: unknown): string {
+  if (code !== "INVALID_INPUT" || !Array.isArray(details) || details.length === 0) return message;
+  const issues = details.filter(
+    (d): d is { field: string; message: string } => typeof d?.field === "string" && typeof d?.message === "string",
+  );
+  if (issues.length === 0) return message;
+  return issues.map((d) => `${fieldLabel(d.field)}: ${d.message}.`).join(" ");
 }
 
 interface RequestOptions {
@@ -54,7 +65,12 @@ export async function apiRequest<S extends z.ZodType>(
   if (!res.ok) {
     const parsed = ApiErrorBody.safeParse(json);
     if (parsed.success)
-      throw new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.details);
+      throw new ApiError(
+        res.status,
+        parsed.data.error.code,
+        readableMessage(parsed.data.error.code, parsed.data.error.message, parsed.data.error.details),
+        parsed.data.error.details,
+      );
     throw new ApiError(res.status, `HTTP_${res.status}`, `The server answered ${res.status}`);
   }
   const data = (json as { data?: unknown } | null)?.data;

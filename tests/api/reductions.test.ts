@@ -218,6 +218,8 @@ describe("review and the model hierarchy", () => {
   });
 });
 
+let discoverRunId = "";
+
 describe("POST /reductions/searches (searches as background runs)", () => {
   beforeAll(async () => {
     worker = await startRunWorker({
@@ -240,11 +242,26 @@ describe("POST /reductions/searches (searches as background runs)", () => {
     expect([200, 201]).toContain(res.status);
     const run = await finishedRun(res.body.data.id);
     expect(run.state, JSON.stringify(run.error)).toBe("succeeded");
+    discoverRunId = run.id;
     const result = run.result as {
       reductionIds: string[];
-      findings: { certificate: { target: { nodes: { name: string; inputs: string[]; table: string }[] } } }[];
+      distinctTargets: number;
+      heldBack: { notListed: number; flagged: number; beyondLimit: number };
+      findings: {
+        flags: string[];
+        reductionId: string | null;
+        certificate: { target: { nodes: { name: string; inputs: string[]; table: string }[] } };
+      }[];
     };
-    expect(result.reductionIds.length).toBe(result.findings.length);
+    // Only unflagged findings enter review; the full ranked list stays on the run, and the counts add up.
+    const unflagged = result.findings.filter((f) => f.flags.length === 0);
+    expect(result.reductionIds).toEqual(unflagged.slice(0, 10).map((f) => f.reductionId));
+    expect(result.findings.filter((f) => f.flags.length > 0).every((f) => f.reductionId === null)).toBe(true);
+    expect(result.heldBack.flagged).toBe(result.findings.length - unflagged.length);
+    expect(result.reductionIds.length + result.heldBack.flagged + result.heldBack.beyondLimit).toBe(
+      result.findings.length,
+    );
+    expect(result.findings.length + result.heldBack.notListed).toBe(result.distinctTargets);
     // The best-ranked target is the ring X1 -| X2 -| X3 -| X1: three nodes, each the negation of one other node.
     const ring = result.findings[0]!.certificate.target.nodes;
     expect(ring).toHaveLength(3);
@@ -326,5 +343,88 @@ describe("POST /reductions/searches (searches as background runs)", () => {
       .post(`${base}/reductions/searches`)
       .send({ ...body, sourceModelId: "00000000-0000-4000-8000-00000000ffff" });
     expect(other.status).toBe(404);
+  });
+});
+
+describe("the review queue: proposals from a run, F = G refused, filters and bulk decisions", () => {
+  it("proposes a flagged finding kept on the run with one call, once, and records it on the run", async () => {
+    const run = await getRun(t.db, discoverRunId);
+    const findings = (run!.result as { findings: { rank: number; flags: string[]; reductionId: string | null }[] })
+      .findings;
+    const flagged = findings.find((f) => f.flags.length > 0 && f.reductionId === null);
+    expect(flagged, "the tide clock search keeps flagged findings").toBeDefined();
+    const body = { runId: discoverRunId, rank: flagged!.rank };
+    expect((await viewer.post(`${base}/reductions/proposals`).send(body)).status).toBe(403);
+    const first = await modeler.post(`${base}/reductions/proposals`).send(body);
+    expect(first.status, JSON.stringify(first.body)).toBe(201);
+    expect(first.body.data).toMatchObject({ reviewState: "proposed", flags: flagged!.flags, rank: flagged!.rank });
+    const again = await modeler.post(`${base}/reductions/proposals`).send(body);
+    expect(again.status).toBe(200);
+    expect(again.body.data.id).toBe(first.body.data.id);
+    const after = (await getRun(t.db, discoverRunId))!.result as { findings: { rank: number; reductionId: string }[] };
+    expect(after.findings.find((f) => f.rank === flagged!.rank)!.reductionId).toBe(first.body.data.id);
+    const missing = await modeler.post(`${base}/reductions/proposals`).send({ runId: discoverRunId, rank: 100000 });
+    expect(missing.status).toBe(404);
+  });
+
+  it("refuses a reduction of a model onto itself (F = G) in searches and uploads", async () => {
+    const search = await modeler.post(`${base}/reductions/searches`).send({
+      mode: "given-target",
+      notion: "block-emulation",
+      sourceModelId: modelIds.F,
+      targetModelId: modelIds.F,
+    });
+    expect(search.status).toBe(400);
+    expect(search.body.error.code).toBe("SELF_REDUCTION");
+    const self = await upload(modeler, "F", undefined, certificate(rules.F, rules.F, 1));
+    expect(self.status).toBe(400);
+    expect(self.body.error.code).toBe("SELF_REDUCTION");
+  });
+
+  it("filters the queue by flag, size and run, and sorts by size", async () => {
+    const none = (await reviewer.get(`${base}/reductions?flag=none`)).body.data as { flags: string[] }[];
+    expect(none.length).toBeGreaterThan(0);
+    expect(none.every((r) => r.flags.length === 0)).toBe(true);
+    const ofRun = (await reviewer.get(`${base}/reductions?runId=${discoverRunId}&sort=smallest`)).body.data as {
+      targetNodeCount: number;
+      foundInRunId: string;
+    }[];
+    expect(ofRun.every((r) => r.foundInRunId === discoverRunId)).toBe(true);
+    const sizes = ofRun.map((r) => r.targetNodeCount);
+    expect(sizes).toEqual([...sizes].sort((a, b) => a - b));
+    const small = (await reviewer.get(`${base}/reductions?maxTargetNodes=1`)).body.data as {
+      targetNodeCount: number;
+    }[];
+    expect(small.every((r) => r.targetNodeCount <= 1)).toBe(true);
+    const bad = await reviewer.get(`${base}/reductions?flag=shiny`);
+    expect(bad.status).toBe(400);
+  });
+
+  it("decides many reductions at once, and needs a reason to reject", async () => {
+    const proposed = (await reviewer.get(`${base}/reductions?state=proposed&runId=${discoverRunId}`)).body.data as {
+      id: string;
+    }[];
+    expect(proposed.length).toBeGreaterThanOrEqual(2);
+    const ids = proposed.slice(0, 2).map((r) => r.id);
+    const noReason = await reviewer
+      .post(`${base}/reductions/decisions`)
+      .send({ decision: "reject", reductionIds: ids });
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.error.details).toContainEqual(expect.objectContaining({ field: "body.comment" }));
+    const single = await reviewer.post(`${base}/reductions/${ids[0]}/decision`).send({ decision: "reject" });
+    expect(single.status).toBe(400);
+    expect(
+      (await modeler.post(`${base}/reductions/decisions`).send({ decision: "approve", reductionIds: ids })).status,
+    ).toBe(403);
+    const res = await reviewer
+      .post(`${base}/reductions/decisions`)
+      .send({ decision: "reject", comment: "Uninformative for this project", reductionIds: ids });
+    expect(res.status).toBe(200);
+    expect(res.body.data).toEqual({ decided: ids, skipped: [] });
+    for (const id of ids) {
+      const r = (await viewer.get(`${base}/reductions/${id}`)).body.data;
+      expect(r.reviewState).toBe("rejected");
+      expect(r.events.at(-1)).toMatchObject({ kind: "reject", comment: "Uninformative for this project" });
+    }
   });
 });

@@ -56,7 +56,7 @@ interface Fixture {
   failedRunId: string;
   /** A two-node model with one revision that was uploaded from a file. */
   modelId: string;
-  /** A proposed reduction of that model onto itself, with the certificate that proves it. */
+  /** A proposed reduction of that model onto a one-node oscillator, with the certificate that proves it. */
   reductionId: string;
   certificate: object;
   /** A token id nobody has. */
@@ -228,6 +228,12 @@ const rows: Row[] = [
   },
   {
     method: "post",
+    path: "/api/projects/{projectId}/models/upload/preview",
+    body: () => ({ name: "No file" }),
+    expected: [401, 404, 403, 403, 400, 400, 400],
+  },
+  {
+    method: "post",
     path: "/api/projects/{projectId}/models/generate",
     body: () => ({ name: "Matrix ring", generator: { kind: "eca", rule: 30, radius: 1, cells: 6 } }),
     expected: [401, 404, 403, 403, 201, 201, 201],
@@ -287,7 +293,7 @@ const rows: Row[] = [
   {
     method: "post",
     path: "/api/projects/{projectId}/reductions",
-    body: (f) => ({ sourceModelId: f.modelId, targetModelId: f.modelId, certificate: f.certificate }),
+    body: (f) => ({ sourceModelId: f.modelId, certificate: f.certificate }),
     expected: [401, 404, 403, 403, 200, 200, 200],
   },
   {
@@ -295,6 +301,19 @@ const rows: Row[] = [
     path: "/api/projects/{projectId}/reductions/searches",
     body: (f) => ({ mode: "discover", sourceModelId: f.modelId, maxTargetNodes: 1 }),
     expected: [401, 404, 403, 403, 201, 201, 201],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/reductions/proposals",
+    body: (f) => ({ runId: f.runId, rank: 0 }),
+    // The fixture's run is no reduction search, so members who may start runs hear 404.
+    expected: [401, 404, 403, 403, 404, 404, 404],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/reductions/decisions",
+    body: (f) => ({ decision: "approve", reductionIds: [f.reductionId] }),
+    expected: [401, 404, 403, 200, 403, 200, 200],
   },
   {
     method: "get",
@@ -327,10 +346,17 @@ const rows: Row[] = [
     method: "post",
     path: "/api/projects/{projectId}/reductions/{reductionId}/save-target",
     body: () => ({ name: "Matrix target" }),
-    expected: [401, 404, 403, 403, 409, 409, 409],
+    expected: [401, 404, 403, 403, 201, 201, 201],
   },
   { method: "get", path: "/api/projects/{projectId}/model-hierarchy", expected: [401, 404, 200, 200, 200, 200, 200] },
   { method: "get", path: "/api/notifications", expected: [401, 200, 200, 200, 200, 200, 200] },
+  { method: "get", path: "/api/notifications/preferences", expected: [401, 200, 200, 200, 200, 200, 200] },
+  {
+    method: "patch",
+    path: "/api/notifications/preferences",
+    body: () => ({ emailOnDecision: true, emailOnReviewWaiting: true, emailOnMention: false }),
+    expected: [401, 200, 200, 200, 200, 200, 200],
+  },
   {
     method: "post",
     path: "/api/notifications/read",
@@ -491,7 +517,10 @@ async function insertMatrixModel(projectId: string): Promise<string> {
   return modelId;
 }
 
-/** The toggle emulates itself with one-node blocks (the identity encoding); stored as a proposed reduction. */
+/**
+ * The toggle A' = !B, B' = !A emulates X' = !X at t = 1 with the block {A, B} and codewords 00 / 11 (00 -> 11 -> 00);
+ * stored as a proposed reduction onto an unsaved target.
+ */
 async function insertMatrixReduction(
   projectId: string,
   modelId: string,
@@ -501,22 +530,20 @@ async function insertMatrixReduction(
     .where({ model_id: modelId, revision: 1 })
     .first("id", "rule_text")) as { id: string; rule_text: string };
   const net = compileDefinition(readRuleText(revision.rule_text));
-  const certificate = blockEmulationCertificate(net, net, {
+  const oscillator = compileDefinition(readRuleText("X' = !X\n"));
+  const certificate = blockEmulationCertificate(net, oscillator, {
     time: 1,
-    blocks: [
-      { nodes: [0], zero: [0], one: [1] },
-      { nodes: [1], zero: [0], one: [1] },
-    ],
+    blocks: [{ nodes: [0, 1], zero: [0, 0], one: [1, 1] }],
     context: [-1, -1],
   }) as Certificate;
   const stored = await insertReduction(t.db, {
     projectId,
     sourceRevisionId: revision.id,
-    targetRevisionId: revision.id,
+    targetRevisionId: null,
     notion: "block-emulation",
     timeScale: 1,
     certificate,
-    targetKey: statementKey(certificate, revision.id),
+    targetKey: statementKey(certificate, null),
     flags: [],
     foundBy: userId.modeler,
     foundInRunId: null,

@@ -40,6 +40,9 @@ describe("models screens in headless Chromium", () => {
     await page
       .getByTestId("upload-input")
       .setInputFiles({ name: "ring.sbml", mimeType: "application/xml", buffer: Buffer.from(REPRESSOR_RING_SBML) });
+    // Nothing is stored before the person has seen what the file holds.
+    await expect.poll(() => page.getByTestId("preview-nodes").textContent()).toContain("LacI");
+    await page.getByTestId("store-upload").click();
     await page.waitForURL(/\/models\/[0-9a-f-]{36}$/);
     await expect.poll(() => page.getByTestId("model-title").textContent()).toBe("Repressor ring");
     await expect.poll(() => page.getByTestId("wiring-diagram").getAttribute("data-nodes")).toBe("3");
@@ -65,11 +68,11 @@ describe("models screens in headless Chromium", () => {
     fs.mkdirSync(path.resolve("tests/e2e/screenshots"), { recursive: true });
     fs.writeFileSync(path.resolve("tests/e2e/screenshots/models-diagram-download.png"), png);
 
-    // An error in the editor is marked at its line before saving.
+    // An error in the editor is marked at its line before saving, and the text cannot be saved until it is fixed.
     const editor = page.getByTestId("rule-editor");
     await editor.fill("LacI' = !CI\nTetR' = LacI &\nCI' = !TetR\n");
     await expect.poll(() => page.locator("[data-testid=editor-error-line]").getAttribute("data-line")).toBe("2");
-    await expect.poll(() => page.getByTestId("save-revision").isEnabled()).toBe(true);
+    await expect.poll(() => page.getByTestId("save-revision").isDisabled()).toBe(true);
     await screenshot(page, "models-editor-error");
 
     // TetR now follows LacI: the loop becomes positive, with two fixed points and two 3-cycles.

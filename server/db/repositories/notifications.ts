@@ -1,6 +1,6 @@
 // In-app notifications: one row per message to one user; unread until read_at is set.
 import type { Knex } from "knex";
-import type { Notification } from "@shared/schemas/runs";
+import { NOTIFICATION_DEFAULTS, type Notification, type NotificationPreferences } from "@shared/schemas/runs";
 
 interface NotificationRow {
   id: string;
@@ -61,4 +61,37 @@ export async function markNotificationsRead(db: Knex, userId: string, ids: strin
   const q = db("notifications").where({ user_id: userId }).whereNull("read_at");
   if (ids !== "all") q.whereIn("id", ids);
   return q.update({ read_at: db.fn.now() });
+}
+
+export async function notificationPreferences(db: Knex, userId: string): Promise<NotificationPreferences> {
+  const row = (await db("notification_preferences").where({ user_id: userId }).first()) as
+    { email_on_decision: boolean; email_on_review_waiting: boolean; email_on_mention: boolean } | undefined;
+  if (!row) return { ...NOTIFICATION_DEFAULTS };
+  return {
+    emailOnDecision: row.email_on_decision,
+    emailOnReviewWaiting: row.email_on_review_waiting,
+    emailOnMention: row.email_on_mention,
+  };
+}
+
+export async function saveNotificationPreferences(
+  db: Knex,
+  userId: string,
+  p: NotificationPreferences,
+): Promise<NotificationPreferences> {
+  await db("notification_preferences")
+    .insert({
+      user_id: userId,
+      email_on_decision: p.emailOnDecision,
+      email_on_review_waiting: p.emailOnReviewWaiting,
+      email_on_mention: p.emailOnMention,
+    })
+    .onConflict("user_id")
+    .merge({
+      email_on_decision: p.emailOnDecision,
+      email_on_review_waiting: p.emailOnReviewWaiting,
+      email_on_mention: p.emailOnMention,
+      updated_at: db.fn.now(),
+    });
+  return notificationPreferences(db, userId);
 }

@@ -19,7 +19,7 @@ interface ReductionRow {
   notion: ReductionNotion;
   time_scale: number;
   target_node_count: number;
-  summary: { targetNames?: string[]; flags?: string[] };
+  summary: { targetNames?: string[]; flags?: string[]; rank?: number };
   found_by: string | null;
   found_by_name: string | null;
   found_in_run_id: string | null;
@@ -65,6 +65,7 @@ function toSummary(r: ReductionRow): ReductionSummary {
     targetNodeCount: r.target_node_count,
     targetNames: r.summary.targetNames ?? [],
     flags: r.summary.flags ?? [],
+    rank: r.summary.rank ?? 0,
     reviewState: r.review_state,
     foundBy: person(r.found_by, r.found_by_name),
     foundInRunId: r.found_in_run_id,
@@ -114,17 +115,34 @@ export interface ReductionFilter {
   state?: ReviewState;
   notion?: ReductionNotion;
   sourceModelId?: string;
+  /** A flag the reduction carries, or "none" for the unflagged ones. */
+  flag?: string;
+  minTargetNodes?: number;
+  maxTargetNodes?: number;
+  runId?: string;
+  sort?: "newest" | "oldest" | "smallest" | "largest" | "rank";
 }
+
+const rankOrder = "coalesce((red.summary->>'rank')::int, 0)";
 
 export async function listReductions(db: Knex, projectId: string, f: ReductionFilter): Promise<ReductionSummary[]> {
   const q = summaryQuery(db).where("red.project_id", projectId);
   if (f.state) q.andWhere("red.review_state", f.state);
   if (f.notion) q.andWhere("red.notion", f.notion);
   if (f.sourceModelId) q.andWhere("sm.id", f.sourceModelId);
+  if (f.runId) q.andWhere("red.found_in_run_id", f.runId);
+  if (f.minTargetNodes) q.andWhere("red.target_node_count", ">=", f.minTargetNodes);
+  if (f.maxTargetNodes) q.andWhere("red.target_node_count", "<=", f.maxTargetNodes);
+  if (f.flag === "none") q.andWhereRaw("coalesce(jsonb_array_length(red.summary->'flags'), 0) = 0");
+  else if (f.flag) q.andWhereRaw("red.summary->'flags' \\? ?", [f.flag]);
   // Findings of one search share a timestamp (one transaction); within it they keep the search's ranking.
+  const sort = f.sort ?? "newest";
+  if (sort === "smallest" || sort === "largest")
+    q.orderBy("red.target_node_count", sort === "smallest" ? "asc" : "desc");
+  if (sort === "rank") q.orderByRaw(rankOrder);
   const rows = (await q
-    .orderBy("red.created_at", "desc")
-    .orderByRaw("coalesce((red.summary->>'rank')::int, 0)")
+    .orderBy("red.created_at", sort === "oldest" ? "asc" : "desc")
+    .orderByRaw(rankOrder)
     .orderBy("red.id")
     .limit(500)) as ReductionRow[];
   return rows.map(toSummary);

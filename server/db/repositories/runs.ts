@@ -187,6 +187,13 @@ export async function finishRun(
   return row ? toRun(row) : null;
 }
 
+/** Rewrites a finished run's result (a finding proposed later records its reduction there). */
+export async function setRunResult(db: Knex, runId: string, result: unknown): Promise<void> {
+  await db("runs")
+    .where({ id: runId })
+    .update({ result: JSON.stringify(result) });
+}
+
 /** Puts a failed or cancelled run back in the queue; finished shards and every checkpoint are kept. */
 export async function resetRunForRetry(db: Knex, runId: string): Promise<string[] | null> {
   return db.transaction(async (trx) => {

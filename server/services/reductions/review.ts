@@ -2,7 +2,13 @@
 // Each change is written with its review event and its audit entry in one transaction.
 import type { Knex } from "knex";
 import type { z } from "zod";
-import type { CommentBody, DecisionBody, ReductionDetail } from "@shared/schemas/reductions";
+import type {
+  BulkDecisionBody,
+  BulkDecisionResult,
+  CommentBody,
+  DecisionBody,
+  ReductionDetail,
+} from "@shared/schemas/reductions";
 import { recordAudit } from "../../db/repositories/audit-log";
 import {
   commentBelongsTo,
@@ -13,6 +19,7 @@ import {
   setVerification,
 } from "../../db/repositories/reductions";
 import { HttpError } from "../../http/errors";
+import { mentionedMembers, notifyPeople, reductionWords, type NotifyPeopleDeps } from "../notifications/notify-people";
 import { checkCertificateOffThread } from "./check-certificate";
 
 /** Who acts on a project's reductions: the audit log and the verification records name them. */
@@ -33,6 +40,8 @@ export async function decideReduction(
   by: ReductionActor,
   reductionId: string,
   decision: z.output<typeof DecisionBody>,
+  /** Without it nobody is told (the bulk action tells each proposer once, for all their reductions). */
+  notify?: NotifyPeopleDeps,
 ): Promise<ReductionDetail> {
   const r = await reductionOf(db, by.projectId, reductionId);
   const state = decision.decision === "approve" ? "approved" : "rejected";
@@ -61,7 +70,51 @@ export async function decideReduction(
       details: decision.comment ? { comment: decision.comment } : {},
     });
   });
+  if (notify && r.foundBy && r.foundBy.id !== by.user.id) {
+    await notifyPeople(notify, [r.foundBy.id], {
+      kind: "reduction.decided",
+      title: `Your reduction was ${state}`,
+      body: `${by.user.displayName} ${state} ${reductionWords(r)}${decision.comment ? `: "${decision.comment}"` : "."}`,
+      link: `/projects/${by.projectId}/reductions/${r.id}`,
+    });
+  }
   return reductionOf(db, by.projectId, r.id);
+}
+
+/**
+ * The review queue's bulk action: each reduction is decided on its own (approval re-verifies each certificate), and
+ * one that cannot be decided is reported with why instead of failing the others.
+ */
+export async function decideReductions(
+  db: Knex,
+  by: ReductionActor,
+  body: z.output<typeof BulkDecisionBody>,
+  notify?: NotifyPeopleDeps,
+): Promise<BulkDecisionResult> {
+  const decided: string[] = [];
+  const skipped: BulkDecisionResult["skipped"] = [];
+  const byProposer = new Map<string, number>();
+  for (const id of [...new Set(body.reductionIds)]) {
+    try {
+      const r = await decideReduction(db, by, id, { decision: body.decision, comment: body.comment });
+      decided.push(id);
+      if (r.foundBy && r.foundBy.id !== by.user.id)
+        byProposer.set(r.foundBy.id, (byProposer.get(r.foundBy.id) ?? 0) + 1);
+    } catch (err) {
+      if (!(err instanceof HttpError)) throw err;
+      skipped.push({ id, reason: err.message });
+    }
+  }
+  const state = body.decision === "approve" ? "approved" : "rejected";
+  if (notify)
+    for (const [proposer, count] of byProposer)
+      await notifyPeople(notify, [proposer], {
+        kind: "reduction.decided",
+        title: count === 1 ? `Your reduction was ${state}` : `${count} of your reductions were ${state}`,
+        body: `${by.user.displayName} ${state} ${count === 1 ? "one reduction" : `${count} reductions`} you proposed${body.comment ? `: "${body.comment}"` : "."}`,
+        link: `/projects/${by.projectId}/reductions`,
+      });
+  return { decided, skipped };
 }
 
 export async function reverifyReduction(db: Knex, by: ReductionActor, reductionId: string): Promise<ReductionDetail> {
@@ -92,6 +145,7 @@ export async function commentOnReduction(
   by: ReductionActor,
   reductionId: string,
   comment: z.output<typeof CommentBody>,
+  notify?: NotifyPeopleDeps,
 ): Promise<ReductionDetail> {
   const r = await reductionOf(db, by.projectId, reductionId);
   if (comment.parentId && !(await commentBelongsTo(db, comment.parentId, r.id))) {
@@ -114,5 +168,14 @@ export async function commentOnReduction(
       details: { commentId: id },
     });
   });
+  if (notify) {
+    const named = await mentionedMembers(db, by.projectId, comment.body, by.user.id);
+    await notifyPeople(notify, named, {
+      kind: "comment.mention",
+      title: `${by.user.displayName} mentioned you`,
+      body: `${by.user.displayName} mentioned you in a comment on ${reductionWords(r)}: "${comment.body.slice(0, 500)}"`,
+      link: `/projects/${by.projectId}/reductions/${r.id}`,
+    });
+  }
   return reductionOf(db, by.projectId, r.id);
 }

@@ -30,13 +30,17 @@ import type {
   SearchFinding,
 } from "@shared/schemas/reductions";
 import type { ReductionSearchPartial, SearchShard } from "@shared/schemas/run-tasks";
+import { statementFlags } from "./statement-flags";
 
 /** A non-closing coarse-graining lists its groups' dynamics up to this many groups, and its network up to 2^12. */
 export const MAX_LISTED_GROUPS = 64;
 const MAX_QUOTIENT_GROUPS = 4096;
 
-/** Discover keeps the best-ranked targets as findings; the rest are counted, not stored. */
-export const MAX_DISCOVER_FINDINGS = 40;
+/**
+ * Discover keeps this many best-ranked targets on the run as its findings list (a person may propose any of them);
+ * the rest are only counted. Which of them enter review at once is decided when they are stored (store-findings.ts).
+ */
+export const MAX_DISCOVER_FINDINGS = 200;
 const MAX_SHARDS = 8;
 
 export function compileRuleText(ruleText: string): BooleanNetwork {
@@ -151,11 +155,28 @@ export function mergeShards(
   s: SearchBody,
   partials: ReductionSearchPartial[],
 ): ReductionSearchResult {
-  const base = { bounds: { ...s }, reductionIds: [] as string[], coarsest: null };
+  const r = mergeShardsUnflagged(source, target, s, partials);
+  return { ...r, findings: r.findings.map((f) => ({ ...f, flags: statementFlags(f.certificate, f.flags) })) };
+}
+
+function mergeShardsUnflagged(
+  source: BooleanNetwork,
+  target: BooleanNetwork | null,
+  s: SearchBody,
+  partials: ReductionSearchPartial[],
+): ReductionSearchResult {
+  const base = {
+    bounds: { ...s },
+    reductionIds: [] as string[],
+    heldBack: { notListed: 0, flagged: 0, beyondLimit: 0 },
+    coarsest: null,
+  };
   const first = partials[0];
   if (!first) throw new EngineError("BAD_SHARD", "no shard results to merge");
   if (first.mode === "coarse-grain") {
-    const findings = first.certificate ? [{ certificate: first.certificate, flags: [], rank: 0 }] : [];
+    const findings = first.certificate
+      ? [{ certificate: first.certificate, flags: [] as string[], rank: 0, reductionId: null }]
+      : [];
     return {
       ...base,
       mode: "coarse-grain",
@@ -172,8 +193,9 @@ export function mergeShards(
         ? [
             {
               certificate: embeddingCertificate(source, target, first.time, first.map) as SearchFinding["certificate"],
-              flags: [],
+              flags: [] as string[],
               rank: 0,
+              reductionId: null,
             },
           ]
         : [];
@@ -193,8 +215,9 @@ export function mergeShards(
         ? [
             {
               certificate: blockEmulationCertificate(source, target, merged.witness) as SearchFinding["certificate"],
-              flags: [],
+              flags: [] as string[],
               rank: 0,
+              reductionId: null,
             },
           ]
         : [];
@@ -218,6 +241,7 @@ export function mergeShards(
     certificate: blockEmulationCertificate(source, t.target, t.witness) as SearchFinding["certificate"],
     flags: t.trivial ? [...t.flags, "trivial"] : [...t.flags],
     rank,
+    reductionId: null,
   }));
   return {
     ...base,

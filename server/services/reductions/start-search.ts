@@ -1,7 +1,9 @@
 // A search is a run of kind "reduction-search" on the source's latest revision. The networks are fixed at
 // submission (their rule text goes into the run's parameters), so a later edit of either model cannot change what
 // the run proves. What zod cannot check (sizes the engine accepts, node names of the source) is checked here.
+import { isDeepStrictEqual } from "node:util";
 import type { z } from "zod";
+import { networkToCertificate } from "@shared/engine/certificates";
 import type { SearchBody } from "@shared/schemas/reductions";
 import type { Run } from "@shared/schemas/runs";
 import { findRevision } from "../../db/repositories/model-revisions";
@@ -30,6 +32,14 @@ function checkSearch(search: Search, source: RevisionNetwork, target: RevisionNe
       `targetModelId: "${target.modelName}" has ${target.network.names.length} nodes; targets have at most ${MAX_TARGET_NODES}`,
     );
   }
+  if (target && isDeepStrictEqual(networkToCertificate(source.network), networkToCertificate(target.network))) {
+    throw new HttpError(
+      400,
+      "SELF_REDUCTION",
+      `targetModelId: "${target.modelName}" has the same rules as "${source.modelName}" (F = G proves nothing)`,
+      [{ field: "body.targetModelId", message: "the target must differ from the source" }],
+    );
+  }
   if (search.mode === "coarse-grain") {
     const missing = search.observe.filter((name) => !source.network.names.includes(name));
     if (missing.length)
@@ -48,6 +58,14 @@ export async function startSearch(
   search: Search,
 ): Promise<{ run: Run; reused: boolean }> {
   const { db } = deps;
+  if (search.mode === "given-target" && search.targetModelId === search.sourceModelId) {
+    throw new HttpError(
+      400,
+      "SELF_REDUCTION",
+      "targetModelId: choose another model than the source (F = G proves nothing)",
+      [{ field: "body.targetModelId", message: "the target must differ from the source" }],
+    );
+  }
   const source = await latestRevisionNetwork(db, by.projectId, search.sourceModelId, "sourceModelId");
   const target =
     search.mode === "given-target"

@@ -12,6 +12,7 @@ import { proposeReduction } from "./propose-reduction";
 import { latestRevisionNetwork, type RevisionNetwork } from "./revision-network";
 import { reductionOf, type ReductionActor } from "./review";
 import { MAX_TARGET_NODES } from "./search-limits";
+import { isSelfReduction, statementFlags } from "./statement-flags";
 
 export interface CertificateUpload {
   sourceModelId: string;
@@ -35,6 +36,14 @@ export async function uploadCertificate(
       "TOO_LARGE",
       `certificate.target: it has ${certificate.target.nodes.length} nodes; targets have at most ${MAX_TARGET_NODES}`,
       [{ field: "body.certificate.target.nodes", message: `at most ${MAX_TARGET_NODES} nodes` }],
+    );
+  }
+  if (upload.targetModelId === upload.sourceModelId || isSelfReduction(certificate)) {
+    throw new HttpError(
+      400,
+      "SELF_REDUCTION",
+      "certificate.target: it is the source network itself (F = G); a model reduced onto itself proves nothing",
+      [{ field: "body.targetModelId", message: "the target must differ from the source" }],
     );
   }
   const source = await latestRevisionNetwork(db, by.projectId, upload.sourceModelId, "sourceModelId");
@@ -68,7 +77,7 @@ export async function uploadCertificate(
         sourceRevisionId: source.revisionId,
         targetRevisionId,
         certificate,
-        flags: [],
+        flags: statementFlags(certificate, []),
         foundBy: by.user.id,
         foundInRunId: null,
       },

@@ -23,6 +23,9 @@ import { StructureView } from "@/features/models/components/structure-view";
 import { EnsembleView } from "@/features/models/components/ensemble-view";
 import { TrajectoryPanel } from "@/features/models/components/trajectory-panel";
 import { WiringDiagram } from "@/features/models/components/wiring-diagram";
+import { plural } from "@/lib/plural";
+import { useRuleDraft } from "@/features/models/lib/use-rule-draft";
+import { UnsavedChangesGuard } from "@/features/models/components/unsaved-changes-guard";
 
 function Section({ title, children, testId }: { title: string; children: React.ReactNode; testId?: string }) {
   return (
@@ -131,10 +134,16 @@ function EditRules({
   const [, setSearch] = useSearchParams();
   // When the base text changes (another revision is shown), the editor starts again from it: the state is adjusted
   // while rendering, as React recommends, rather than in an effect after a render with the stale text.
-  const [draft, setDraft] = useState({ base: baseText, text: baseText });
+  const stored = useRuleDraft(modelId, baseText);
+  const [draft, setDraft] = useState({ base: baseText, text: stored.restored ?? baseText });
   if (draft.base !== baseText) setDraft({ base: baseText, text: baseText });
   const text = draft.base === baseText ? draft.text : baseText;
-  const setText = (next: string) => setDraft({ base: baseText, text: next });
+  const setText = (next: string) => {
+    setDraft({ base: baseText, text: next });
+    stored.keep(next);
+  };
+  const [savable, setSavable] = useState(false);
+  const isDirty = text !== baseText && !save.isPending;
   const [message, setMessage] = useState("");
   const [submitted, setSubmitted] = useState<string | null>(null);
   const serverErrors = submitted === text ? issuesOf(save.error) : [];
@@ -148,6 +157,7 @@ function EditRules({
           { ruleText: text, message },
           {
             onSuccess: () => {
+              stored.drop();
               setMessage("");
               setSearch({});
             },
@@ -155,7 +165,23 @@ function EditRules({
         );
       }}
     >
-      <RuleEditor projectId={projectId} value={text} onChange={setText} serverErrors={serverErrors} rows={12} />
+      <UnsavedChangesGuard when={isDirty} what="Your rule edits" />
+      {stored.restored !== null && text === stored.restored && (
+        <p className="rounded-md bg-amber-50 px-3 py-2 text-sm text-amber-900" data-testid="draft-restored">
+          Your unsaved edits from last time are back.{" "}
+          <button type="button" className="font-medium underline" onClick={() => setText(baseText)}>
+            Discard them
+          </button>
+        </p>
+      )}
+      <RuleEditor
+        projectId={projectId}
+        value={text}
+        onChange={setText}
+        serverErrors={serverErrors}
+        rows={12}
+        onSavableChange={setSavable}
+      />
       <div className="flex flex-wrap items-end gap-3">
         <label className="flex flex-1 flex-col gap-1 text-sm">
           <span className="text-slate-700">What changed (optional)</span>
@@ -166,7 +192,12 @@ function EditRules({
             className="rounded-md border border-slate-300 px-2 py-1"
           />
         </label>
-        <Button type="submit" data-testid="save-revision" disabled={save.isPending || text === baseText}>
+        <Button
+          type="submit"
+          data-testid="save-revision"
+          disabled={save.isPending || text === baseText || !savable}
+          title={savable ? undefined : "Correct the errors in the rules first"}
+        >
           {save.isPending ? "Saving…" : `Save as revision ${latest + 1}`}
         </Button>
       </div>
@@ -329,7 +360,7 @@ export function ModelDetailRoute() {
               >
                 r{r.revision}
               </button>
-              <span className="text-slate-600">{r.nodeCount} nodes</span>
+              <span className="text-slate-600">{plural(r.nodeCount, "node")}</span>
               <span className="text-slate-600">
                 {r.source === "edit" ? "edited" : r.file ? `imported from ${r.file.fileName}` : r.source}
               </span>

@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { Link, useNavigate, useParams } from "react-router-dom";
 import type { ModelDetail } from "@shared/schemas/models";
+import { can } from "@shared/types/roles";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { useCreateModel } from "@/features/models/api/create-model";
@@ -10,6 +11,7 @@ import { GeneratorForm } from "@/features/models/components/generator-form";
 import { issuesOf } from "@/features/models/components/parse-error-list";
 import { RuleEditor } from "@/features/models/components/rule-editor";
 import { UploadDropZone } from "@/features/models/components/upload-drop-zone";
+import { useProjectOutlet } from "./project-layout";
 
 type Mode = "write" | "upload" | "generate";
 
@@ -25,6 +27,7 @@ function WriteForm({ projectId, onCreated }: { projectId: string; onCreated(d: M
   const [name, setName] = useState("");
   const [text, setText] = useState(starter);
   const [submittedText, setSubmittedText] = useState<string | null>(null);
+  const [savable, setSavable] = useState(false);
   const serverErrors = submittedText === text ? issuesOf(create.error) : [];
   return (
     <form
@@ -45,9 +48,15 @@ function WriteForm({ projectId, onCreated }: { projectId: string; onCreated(d: M
           className="rounded-md border border-slate-300 px-2 py-1"
         />
       </label>
-      <RuleEditor projectId={projectId} value={text} onChange={setText} serverErrors={serverErrors} />
+      <RuleEditor
+        projectId={projectId}
+        value={text}
+        onChange={setText}
+        serverErrors={serverErrors}
+        onSavableChange={setSavable}
+      />
       {create.error && serverErrors.length === 0 && submittedText === text && <Alert>{create.error.message}</Alert>}
-      <Button type="submit" disabled={create.isPending || !name.trim()} data-testid="save-model">
+      <Button type="submit" disabled={create.isPending || !name.trim() || !savable} data-testid="save-model">
         {create.isPending ? "Saving…" : "Save model"}
       </Button>
     </form>
@@ -59,6 +68,21 @@ export function ModelNewRoute() {
   const navigate = useNavigate();
   const [mode, setMode] = useState<Mode>("write");
   const open = (d: ModelDetail) => navigate(`/projects/${projectId}/models/${d.model.id}`);
+  const { project } = useProjectOutlet();
+  // Said before any work: a role that cannot save models sees why, not a form it would fill in for nothing.
+  if (!can(project.role, project.siteRole, "model:write"))
+    return (
+      <section className="space-y-3" data-testid="role-limits">
+        <h2 className="text-lg font-semibold text-slate-900">New model</h2>
+        <Alert tone="info">
+          As a {project.role ?? "non-member"} of this project you can read its models, runs and reductions, but not
+          create or edit models. Ask an owner of the project for the modeler role.
+        </Alert>
+        <Link to={`/projects/${projectId}/models`} className="text-sm text-brand-700 hover:underline">
+          ← Back to the models
+        </Link>
+      </section>
+    );
   const modes: [Mode, string][] = [
     ["write", "Write rules"],
     ["upload", "Upload a file"],

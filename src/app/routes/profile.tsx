@@ -3,6 +3,7 @@ import { useProfile } from "@/features/accounts/api/get-profile";
 import { AccessTokens } from "@/features/accounts/components/access-tokens";
 import { DisplayNameForm, PasswordForm } from "@/features/accounts/components/profile-forms";
 import { useProjects } from "@/features/projects/api/list-projects";
+import { NotificationSettings } from "@/features/runs";
 
 export function ProfileRoute() {
   const { data: profile, error, isPending } = useProfile();
@@ -24,6 +25,10 @@ export function ProfileRoute() {
       <div className="rounded-lg border border-slate-200 bg-white p-5">
         <h2 className="mb-4 text-lg font-semibold">Password</h2>
         <PasswordForm />
+      </div>
+      <div className="rounded-lg border border-slate-200 bg-white p-5">
+        <h2 className="mb-4 text-lg font-semibold">Notifications</h2>
+        <NotificationSettings />
       </div>
       <div className="rounded-lg border border-slate-200 bg-white p-5">
         <h2 className="mb-4 text-lg font-semibold">Access tokens</h2>

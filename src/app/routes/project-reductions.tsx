@@ -1,32 +1,27 @@
-// Reductions tab: start a search (modelers), follow it as a run, and browse the reductions found, by review state.
-import { useState } from "react";
+// Reductions tab: start a search (modelers), follow it as a run and see its findings here, and work through the
+// review queue (filters, sort, bulk decisions for reviewers).
 import { Link, useParams } from "react-router-dom";
-import type { ReviewState } from "@shared/schemas/reductions";
+import { isRunFinished } from "@shared/schemas/runs";
 import { can } from "@shared/types/roles";
-import { Alert } from "@/components/ui/alert";
 import { useModelList } from "@/features/models/api/list-models";
-import { useReductions } from "@/features/reductions/api/list-reductions";
+import { useRefreshWhenSearchEnds } from "@/features/reductions/api/refresh-when-search-ends";
 import { useStartSearch } from "@/features/reductions/api/start-search";
 import { NotionsHelp } from "@/features/reductions/components/notions-help";
-import { ReductionsTable } from "@/features/reductions/components/reductions-table";
+import { ReviewQueue } from "@/features/reductions/components/review-queue";
+import { SearchFindings } from "@/features/reductions/components/search-findings";
 import { SearchForm } from "@/features/reductions/components/search-form";
+import { RunProgress, useRun } from "@/features/runs";
 import { useProjectOutlet } from "./project-layout";
-
-const stateFilters: { value: ReviewState | undefined; label: string }[] = [
-  { value: undefined, label: "All" },
-  { value: "proposed", label: "Proposed" },
-  { value: "approved", label: "Approved" },
-  { value: "rejected", label: "Rejected" },
-];
 
 export function ProjectReductionsRoute() {
   const { projectId = "" } = useParams();
   const { project } = useProjectOutlet();
-  const [state, setState] = useState<ReviewState | undefined>(undefined);
   const models = useModelList(projectId);
-  const reductions = useReductions(projectId, { state });
   const search = useStartSearch(projectId);
+  const followed = useRun(search.data ? projectId : null, search.data?.id ?? null);
+  useRefreshWhenSearchEnds(followed.data);
   const canSearch = can(project.role, project.siteRole, "run:start");
+  const canDecide = can(project.role, project.siteRole, "review:decide");
 
   return (
     <section className="space-y-5">
@@ -54,21 +49,23 @@ export function ProjectReductionsRoute() {
           </Link>
         </p>
       )}
-      <div className="flex flex-wrap gap-2" role="group" aria-label="Filter by review state">
-        {stateFilters.map((f) => (
-          <button
-            key={f.label}
-            type="button"
-            onClick={() => setState(f.value)}
-            aria-pressed={state === f.value}
-            className={`rounded-full px-3 py-1 text-xs font-medium ${state === f.value ? "bg-slate-800 text-white" : "bg-slate-100 text-slate-700 hover:bg-slate-200"}`}
-          >
-            {f.label}
-          </button>
-        ))}
-      </div>
-      {reductions.error && <Alert>{reductions.error.message}</Alert>}
-      {reductions.data && <ReductionsTable projectId={projectId} reductions={reductions.data} />}
+      {followed.data && !isRunFinished(followed.data.state) && <RunProgress run={followed.data} />}
+      {followed.data?.state === "succeeded" && (
+        <SearchFindings
+          projectId={projectId}
+          runId={followed.data.id}
+          result={followed.data.result}
+          canPropose={canSearch}
+        />
+      )}
+      <h3 className="text-sm font-semibold text-slate-900">
+        {canDecide ? "Review queue" : "Reductions of this project"}
+      </h3>
+      <ReviewQueue
+        projectId={projectId}
+        models={(models.data ?? []).map((m) => ({ id: m.id, name: m.name }))}
+        canDecide={canDecide}
+      />
     </section>
   );
 }

@@ -1,5 +1,6 @@
 // The encoding and the eight rows of the definition, as the server's independent verifier checked them.
 import type { WitnessReport } from "@shared/schemas/automata";
+import { plural } from "@/lib/plural";
 
 function Word({ text, k }: { text: string; k: number }) {
   // codeword boundaries in a 3k-cell input are easier to read with a thin gap
@@ -41,7 +42,7 @@ export function WitnessChecks({ report }: { report: WitnessReport }) {
                 u<sub>a</sub> u<sub>b</sub> u<sub>c</sub>
               </th>
               <th className="py-1 pr-4">
-                middle after {report.witness.time} steps of rule {report.source}
+                middle after {plural(report.witness.time, "step")} of rule {report.source}
               </th>
               <th className="py-1">agrees</th>
             </tr>

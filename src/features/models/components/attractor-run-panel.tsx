@@ -5,6 +5,7 @@ import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { RunProgress, useCancelRun, useRun, useStartRun } from "@/features/runs";
 import { modelKeys } from "../api/keys";
+import { plural } from "@/lib/plural";
 
 export interface AttractorRunPanelProps {
   projectId: string;
@@ -47,8 +48,8 @@ export function AttractorRunPanel({
       className="space-y-2 rounded-md border border-slate-200 bg-slate-50 p-3 text-sm"
     >
       <p className="text-slate-700">
-        This model has {nodeCount} nodes ({(2 ** nodeCount).toLocaleString()} states). Its exact synchronous analysis
-        runs in the background; the result is stored with revision {revision} and reused afterwards.
+        This model has {plural(nodeCount, "node")} ({(2 ** nodeCount).toLocaleString()} states). Its exact synchronous
+        analysis runs in the background; the result is stored with revision {revision} and reused afterwards.
       </p>
       {!runId && canStart && (
         <Button data-testid="start-attractor-run" disabled={start.isPending} onClick={startRun}>

@@ -2,6 +2,7 @@
 // selected to paint its first state on the wiring diagram.
 import type { SynchronousResult } from "@shared/schemas/models";
 import { downloadCsv } from "@/lib/download";
+import { plural } from "@/lib/plural";
 
 export function StateCells({ state, nodes, testId }: { state: string; nodes: readonly string[]; testId?: string }) {
   return (
@@ -63,7 +64,7 @@ export function AttractorTable({ result, selected, onSelect, fileName = "attract
             <th className="px-3 py-2 text-right">Basin</th>
             <th className="px-3 py-2 text-right">Share</th>
             {hasPhenotypes && <th className="px-3 py-2">Phenotype ({result.markers.join(", ")})</th>}
-            <th className="px-3 py-2">States ({result.nodes.length} nodes, in model order)</th>
+            <th className="px-3 py-2">States ({plural(result.nodes.length, "node")}, in model order)</th>
           </tr>
         </thead>
         <tbody className="divide-y divide-slate-100">

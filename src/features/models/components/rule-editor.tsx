@@ -21,16 +21,27 @@ export interface RuleEditorProps {
   /** Errors from a failed save, shown until the text changes. */
   serverErrors?: readonly ParseIssue[];
   rows?: number;
+  /** Told whether the text may be saved: false while it has errors or its check has not answered yet. */
+  onSavableChange?(savable: boolean): void;
 }
 
 const lineHeight = "1.5rem";
 
-export function RuleEditor({ projectId, value, onChange, serverErrors = [], rows = 16 }: RuleEditorProps) {
+export function RuleEditor({
+  projectId,
+  value,
+  onChange,
+  serverErrors = [],
+  rows = 16,
+  onSavableChange,
+}: RuleEditorProps) {
   const debounced = useDebounced(value, 300);
   const check = useValidateRules(projectId, debounced, debounced.trim().length > 0);
   const isCurrent = debounced === value && !check.isPlaceholderData;
   const errors = check.data && debounced.trim() ? check.data.errors : [];
   const shownErrors = errors.length ? errors : serverErrors;
+  const savable = value.trim().length > 0 && isCurrent && Boolean(check.data) && errors.length === 0;
+  useEffect(() => onSavableChange?.(savable), [savable, onSavableChange]);
   const backdrop = useRef<HTMLPreElement>(null);
   const gutter = useRef<HTMLDivElement>(null);
   const lines = value.split("\n");

@@ -1,9 +1,10 @@
-// Drag-and-drop (or pick) a model file; the server reads it fully first, so a refused file shows its parse errors
-// here and nothing is stored.
+// Drag-and-drop (or pick) a model file; the server reads it fully first and answers a preview, so a refused file
+// shows its parse errors here, and a readable one is stored only when the person confirms what it holds.
 import { useRef, useState } from "react";
 import { MODEL_UPLOAD_LIMIT_BYTES, type ModelDetail } from "@shared/schemas/models";
-import { useUploadModel } from "../api/upload-model";
+import { usePreviewUpload, useUploadModel } from "../api/upload-model";
 import { issuesOf, ParseErrorList } from "./parse-error-list";
+import { UploadPreviewPanel } from "./upload-preview-panel";
 
 const accepted = ".sbml,.xml,.rules,.txt,.csv";
 
@@ -15,6 +16,8 @@ export function UploadDropZone({
   onUploaded(detail: ModelDetail): void;
 }) {
   const upload = useUploadModel(projectId);
+  const preview = usePreviewUpload(projectId);
+  const [file, setFile] = useState<File | null>(null);
   const input = useRef<HTMLInputElement>(null);
   const [isOver, setOver] = useState(false);
   const [localError, setLocalError] = useState<string | null>(null);
@@ -28,9 +31,12 @@ export function UploadDropZone({
       return;
     }
     setLocalError(null);
-    upload.mutate({ file }, { onSuccess: onUploaded });
+    upload.reset();
+    setFile(file);
+    preview.mutate(file);
   };
-  const issues = issuesOf(upload.error);
+  const failure = preview.error ?? upload.error;
+  const issues = issuesOf(failure);
 
   return (
     <div className="space-y-3">
@@ -56,7 +62,7 @@ export function UploadDropZone({
         <p className="mt-1 text-xs text-slate-500">
           SBML-qual (.sbml, .xml), rule text (.rules, .txt) or truth tables (.csv), up to 5 MB
         </p>
-        {upload.isPending && <p className="mt-2 text-xs text-brand-700">Reading {fileName}…</p>}
+        {preview.isPending && <p className="mt-2 text-xs text-brand-700">Reading {fileName}…</p>}
         <input
           ref={input}
           type="file"
@@ -77,10 +83,24 @@ export function UploadDropZone({
       {issues.length > 0 && (
         <ParseErrorList errors={issues} title={`${fileName} could not be read; nothing was stored`} />
       )}
-      {upload.error && issues.length === 0 && (
+      {failure && issues.length === 0 && (
         <p role="alert" className="text-sm text-red-700">
-          {upload.error.message}
+          {failure.message}
         </p>
+      )}
+      {preview.data && file && !preview.isPending && (
+        <UploadPreviewPanel
+          key={preview.data.fileName + file.lastModified}
+          projectId={projectId}
+          preview={preview.data}
+          isStoring={upload.isPending}
+          onStore={(name) => upload.mutate({ file, name }, { onSuccess: onUploaded })}
+          onCancel={() => {
+            preview.reset();
+            setFile(null);
+          }}
+          onRevised={onUploaded}
+        />
       )}
     </div>
   );

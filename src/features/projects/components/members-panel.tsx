@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { PROJECT_ROLES, type ProjectRole } from "@shared/types/roles";
 import { Alert } from "@/components/ui/alert";
+import { Dialog } from "@/components/ui/dialog";
 import { Button } from "@/components/ui/button";
 import { useChangeMemberRole } from "../api/change-member-role";
 import { useMembers } from "../api/list-members";
@@ -28,14 +29,18 @@ export function MembersPanel({
   const changeRole = useChangeMemberRole(projectId);
   const remove = useRemoveMember(projectId);
   const [actionError, setActionError] = useState<string | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const [confirming, setConfirming] = useState<{ userId: string; displayName: string; role: ProjectRole } | null>(null);
 
   if (isPending) return <p className="text-sm text-slate-500">Loading members…</p>;
   if (error) return <Alert>{error.message}</Alert>;
 
-  const run = async (action: () => Promise<unknown>) => {
+  const run = async (action: () => Promise<unknown>, done?: string) => {
     setActionError(null);
+    setNotice(null);
     try {
       await action();
+      if (done) setNotice(done);
     } catch (err) {
       setActionError((err as Error).message);
     }
@@ -44,6 +49,42 @@ export function MembersPanel({
   return (
     <div className="space-y-3">
       {actionError && <Alert>{actionError}</Alert>}
+      {notice && (
+        <p
+          role="status"
+          className="rounded-md bg-emerald-50 px-3 py-2 text-sm text-emerald-800"
+          data-testid="member-notice"
+        >
+          {notice}
+        </p>
+      )}
+      <Dialog
+        open={confirming !== null}
+        title={`Remove ${confirming?.displayName ?? ""} from the project?`}
+        onClose={() => setConfirming(null)}
+      >
+        <p className="text-sm text-slate-700">
+          {confirming?.displayName} ({confirming?.role}) loses access to this project at once. Their models, runs and
+          comments stay. To undo, invite them again.
+        </p>
+        <div className="flex justify-end gap-2">
+          <Button variant="secondary" onClick={() => setConfirming(null)}>
+            Keep them
+          </Button>
+          <Button
+            variant="danger"
+            data-testid="confirm-remove"
+            onClick={() => {
+              const who = confirming;
+              setConfirming(null);
+              if (who)
+                void run(() => remove.mutateAsync(who.userId), `${who.displayName} was removed from the project.`);
+            }}
+          >
+            Remove
+          </Button>
+        </div>
+      </Dialog>
       <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
         <table className="min-w-full divide-y divide-slate-200 text-sm" data-testid="members-table">
           <thead className="bg-slate-50 text-left text-xs font-semibold uppercase tracking-wide text-slate-600">
@@ -74,7 +115,10 @@ export function MembersPanel({
                       aria-label={`Role of ${m.displayName}`}
                       value={m.role}
                       onChange={(e) =>
-                        run(() => changeRole.mutateAsync({ userId: m.userId, role: e.target.value as ProjectRole }))
+                        run(
+                          () => changeRole.mutateAsync({ userId: m.userId, role: e.target.value as ProjectRole }),
+                          `${m.displayName} is now ${e.target.value} (was ${m.role}): ${roleHelp[e.target.value as ProjectRole]}`,
+                        )
                       }
                       className="rounded-md border border-slate-300 bg-white px-2 py-1 text-sm"
                     >
@@ -95,7 +139,7 @@ export function MembersPanel({
                     <Button
                       variant="ghost"
                       size="sm"
-                      onClick={() => run(() => remove.mutateAsync(m.userId))}
+                      onClick={() => setConfirming({ userId: m.userId, displayName: m.displayName, role: m.role })}
                       aria-label={`Remove ${m.displayName}`}
                     >
                       Remove

@@ -1,9 +1,14 @@
-import type { ReductionNotion, ReviewState } from "@shared/schemas/reductions";
+import type { ReductionNotion, ReductionSort, ReviewState } from "@shared/schemas/reductions";
 
 export interface ReductionFilter {
   state?: ReviewState;
   notion?: ReductionNotion;
   sourceModelId?: string;
+  flag?: "none" | "constant" | "identity" | "decoupled" | "trivial" | "isomorphic";
+  minTargetNodes?: number;
+  maxTargetNodes?: number;
+  runId?: string;
+  sort?: ReductionSort;
 }
 
 export const reductionKeys = {

@@ -4,7 +4,11 @@ import { apiRequest } from "@/lib/api-client";
 import { reductionKeys, reductionsPath, type ReductionFilter } from "./keys";
 
 export function listReductions(projectId: string, f: ReductionFilter) {
-  const q = new URLSearchParams(Object.entries(f).filter(([, v]) => v) as [string, string][]).toString();
+  const q = new URLSearchParams(
+    Object.entries(f)
+      .filter(([, v]) => v !== undefined && v !== "")
+      .map(([k, v]) => [k, String(v)]),
+  ).toString();
   return apiRequest(`${reductionsPath(projectId)}${q ? `?${q}` : ""}`, ReductionList);
 }
 

@@ -13,26 +13,27 @@ import { SceneSigma } from "@/components/graph/scene-sigma";
 import { drawingToSvg } from "@/components/graph/scene-svg";
 import { BLOCK_COLOURS, observableInWords, sourceNodeRoles, targetRuleText } from "../lib/certificate-view";
 import { networkScene } from "../lib/reduction-scene";
+import { plural } from "@/lib/plural";
 
 function sourceCaption(certificate: Certificate, nodeCount: number): string {
   switch (certificate.notion) {
     case "block-emulation":
-      return `Source F (${nodeCount} nodes): colour = the target node its block encodes; grey = context, light for 0 and dark for 1`;
+      return `Source F (${plural(nodeCount, "node")}): colour = the target node its block encodes; grey = context, light for 0 and dark for 1`;
     case "coarse-graining":
-      return `Source F (${nodeCount} nodes): colour = the observable that reads the node; grey = read by no observable`;
+      return `Source F (${plural(nodeCount, "node")}): colour = the observable that reads the node; grey = read by no observable`;
     case "dynamical-embedding":
-      return `Source F (${nodeCount} nodes): G's states are mapped to whole states of F (see the state map below), so no node stands for one node of G`;
+      return `Source F (${plural(nodeCount, "node")}): G's states are mapped to whole states of F (see the state map below), so no node stands for one node of G`;
   }
 }
 
 function targetCaption(certificate: Certificate, nodeCount: number): string {
   switch (certificate.notion) {
     case "block-emulation":
-      return `Target G (${nodeCount} nodes), one colour per node as its block in F`;
+      return `Target G (${plural(nodeCount, "node")}), one colour per node as its block in F`;
     case "coarse-graining":
-      return `Target G (${nodeCount} nodes): the observables of F, one step of G for ${certificate.time} of F`;
+      return `Target G (${plural(nodeCount, "node")}): the observables of F, one step of G for ${certificate.time} of F`;
     case "dynamical-embedding":
-      return `Target G (${nodeCount} nodes)`;
+      return `Target G (${plural(nodeCount, "node")})`;
   }
 }
 

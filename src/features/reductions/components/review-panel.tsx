@@ -120,7 +120,7 @@ export function ReviewPanel({ projectId, reduction, canDecide, canComment }: Rev
             onChange={(e) => setDecisionComment(e.target.value)}
             maxLength={4000}
             rows={2}
-            placeholder="Why (optional, recorded with the decision)"
+            placeholder="Why (recorded with the decision; needed to reject)"
             className="w-full rounded-md border border-slate-300 px-2 py-1 text-sm"
             data-testid="decision-comment"
           />
@@ -141,7 +141,8 @@ export function ReviewPanel({ projectId, reduction, canDecide, canComment }: Rev
             </button>
             <button
               type="button"
-              disabled={decide.isPending}
+              disabled={decide.isPending || decisionComment.trim() === ""}
+              title={decisionComment.trim() === "" ? "Write why it is rejected first" : undefined}
               onClick={() =>
                 decide.mutate(
                   { decision: "reject", comment: decisionComment },
@@ -222,7 +223,7 @@ export function ReviewPanel({ projectId, reduction, canDecide, canComment }: Rev
               onChange={(e) => setCommentBody(e.target.value)}
               maxLength={4000}
               rows={2}
-              placeholder="Add a comment"
+              placeholder="Add a comment (write @ and a member's name to tell them)"
               className="w-full rounded-md border border-slate-300 px-2 py-1 text-sm"
               data-testid="comment-body"
             />

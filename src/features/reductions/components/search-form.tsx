@@ -3,6 +3,7 @@
 import { useState } from "react";
 import type { SearchBody } from "@shared/schemas/reductions";
 import { ApiError } from "@/lib/api-client";
+import { plural } from "@/lib/plural";
 
 export interface ModelChoice {
   id: string;
@@ -125,7 +126,7 @@ export function SearchForm({ models, isPending, error, onSubmit }: SearchFormPro
           >
             {models.map((m) => (
               <option key={m.id} value={m.id}>
-                {m.name} ({m.nodeCount} nodes)
+                {m.name} ({plural(m.nodeCount, "node")})
               </option>
             ))}
           </select>
@@ -142,7 +143,7 @@ export function SearchForm({ models, isPending, error, onSubmit }: SearchFormPro
               >
                 {models.map((m) => (
                   <option key={m.id} value={m.id}>
-                    {m.name} ({m.nodeCount} nodes)
+                    {m.name} ({plural(m.nodeCount, "node")})
                   </option>
                 ))}
               </select>

@@ -5,7 +5,7 @@ import { runKeys } from "./keys";
 
 export const listNotifications = () => apiRequest("/notifications", NotificationList);
 
-/** Checked every 30 s; anonymous visitors get 401, which the bell shows as nothing. */
+/** Checked every 30 s, and only while someone is signed in (anonymous visitors would get 401 each time). */
 export const notificationsQuery = () =>
   queryOptions({
     queryKey: runKeys.notifications(),
@@ -14,6 +14,6 @@ export const notificationsQuery = () =>
     retry: false,
   });
 
-export function useNotifications() {
-  return useQuery(notificationsQuery());
+export function useNotifications(signedIn: boolean) {
+  return useQuery({ ...notificationsQuery(), enabled: signedIn });
 }

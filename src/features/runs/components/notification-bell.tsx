@@ -4,8 +4,8 @@ import { Link } from "react-router-dom";
 import { useNotifications } from "../api/list-notifications";
 import { useMarkNotificationsRead } from "../api/mark-notifications-read";
 
-export function NotificationBell() {
-  const { data } = useNotifications();
+export function NotificationBell({ signedIn }: { signedIn: boolean }) {
+  const { data } = useNotifications(signedIn);
   const markRead = useMarkNotificationsRead();
   const [isOpen, setOpen] = useState(false);
   const ref = useRef<HTMLDivElement>(null);
@@ -19,8 +19,7 @@ export function NotificationBell() {
     return () => document.removeEventListener("mousedown", close);
   }, [isOpen]);
 
-  // Anonymous visitors get 401 and see no bell.
-  if (!data) return null;
+  if (!signedIn || !data) return null;
   const unread = data.unreadCount;
   const toggle = () => {
     setOpen((o) => !o);
@@ -66,7 +65,8 @@ export function NotificationBell() {
           <p className="border-b border-slate-100 px-4 py-2 text-sm font-semibold">Notifications</p>
           {data.items.length === 0 ? (
             <p className="px-4 py-3 text-sm text-slate-500">
-              Nothing yet. Runs that take longer than a minute tell you here when they end.
+              Nothing yet. Decisions on reductions you proposed, reductions waiting for your review, mentions with @,
+              and runs that took longer than a minute appear here.
             </p>
           ) : (
             <ul className="max-h-96 divide-y divide-slate-100 overflow-y-auto">
