@@ -19,7 +19,6 @@ const config = testConfig();
 const log = createLogger(config);
 const mailer = createFakeMailer(t.db, log);
 let projectId: string;
-let modelId: string;
 let revisionId: string;
 let owner: Agent;
 let worker: RunWorker | null = null;
@@ -52,7 +51,7 @@ beforeAll(async () => {
     .post(`/api/projects/${projectId}/models`)
     .send({ name: "Cell cycle with delay line", ruleText: FAURE_WITH_DELAY_LINE });
   expect(model.status).toBe(201);
-  modelId = model.body.data.model.id;
+
   revisionId = model.body.data.revision.id;
   expect(model.body.data.revision.nodeCount).toBe(40);
   worker = await startRunWorker({

@@ -12,6 +12,7 @@ import { can } from "@shared/types/roles";
 import { useStructure } from "@/features/models/api/get-structure";
 import { useRevisionList } from "@/features/models/api/list-revisions";
 import { AttractorRunPanel } from "@/features/models/components/attractor-run-panel";
+import { AnalysisNextStep } from "@/features/models/components/analysis-next-step";
 import { AttractorTable } from "@/features/models/components/attractor-table";
 import { BasinChart } from "@/features/models/components/basin-chart";
 import { Downloads } from "@/features/models/components/downloads";
@@ -253,6 +254,17 @@ export function ModelDetailRoute() {
           setMarkers={setMarkers}
           selected={selected}
           setSelected={setSelected}
+        />
+      </Section>
+
+      <Section title="Analyses for every size: SAT, trap spaces, asynchronous attractors" testId="analyses-section">
+        <AnalysisNextStep
+          key={rev.id}
+          projectId={projectId}
+          revisionId={rev.id}
+          nodeCount={rev.nodeCount}
+          fileBase={baseName}
+          canStart={can(project.role, project.siteRole, "run:start")}
         />
       </Section>
 
