@@ -123,3 +123,77 @@ export const reductionSearchTask = {
   input: ReductionSearchShard,
   partial: ReductionSearchPartial,
 } satisfies ShardTaskSchemas;
+
+// --- sat-cycles, trap-spaces, async-attractors: analyses of models beyond exact state-space analysis, one shard ---
+
+const bitText = z.string().regex(/^[01]*$/);
+const subspaceText = z.string().regex(/^[01-]*$/);
+
+export const SatCyclesShard = z.object({
+  ruleText: z.string().min(1),
+  maxLength: z.number().int().min(1),
+  maxSolutions: z.number().int().min(1),
+});
+export type SatCyclesShard = z.infer<typeof SatCyclesShard>;
+/** Also the run's result. */
+export const SatCyclesResult = z.object({
+  nodes: z.array(z.string()),
+  maxLength: z.number().int(),
+  /** Sorted by length, then by first state; length 1 are the fixed points. */
+  cycles: z.array(z.object({ length: z.number().int(), states: z.array(bitText) })),
+  /** True when every cycle of length up to maxLength is listed; false when maxSolutions cut the list. */
+  complete: z.boolean(),
+});
+export type SatCyclesResult = z.infer<typeof SatCyclesResult>;
+export const satCyclesTask = { input: SatCyclesShard, partial: SatCyclesResult } satisfies ShardTaskSchemas;
+
+export const TrapSpacesShard = z.object({
+  ruleText: z.string().min(1),
+  kind: z.enum(["minimal", "maximal"]),
+  limit: z.number().int().min(1),
+});
+export type TrapSpacesShard = z.infer<typeof TrapSpacesShard>;
+/** Also the run's result. */
+export const TrapSpacesResult = z.object({
+  nodes: z.array(z.string()),
+  kind: z.enum(["minimal", "maximal"]),
+  complete: z.boolean(),
+  /** One character per node: '0', '1', or '-' for a free node; sorted. */
+  trapSpaces: z.array(z.object({ pattern: subspaceText })),
+  percolatedNodes: z.number().int(),
+});
+export type TrapSpacesResult = z.infer<typeof TrapSpacesResult>;
+export const trapSpacesTask = { input: TrapSpacesShard, partial: TrapSpacesResult } satisfies ShardTaskSchemas;
+
+export const AsyncAttractorsShard = z.object({ ruleText: z.string().min(1), trapSpaceLimit: z.number().int().min(1) });
+export type AsyncAttractorsShard = z.infer<typeof AsyncAttractorsShard>;
+/** Also the run's result: the engine's report (shared/engine/trap-spaces/trap-space-attractors.ts). */
+export const AsyncAttractorsResult = z.object({
+  nodes: z.array(z.string()),
+  method: z.enum(["exact", "exact on the percolated subspace", "minimal trap spaces"]),
+  completeness: z.enum(["proved complete", "found so far"]),
+  attractors: z.array(
+    z.object({
+      size: z.number().int(),
+      pattern: subspaceText,
+      states: z.array(bitText).nullable(),
+      trapSpace: z.number().int().nullable(),
+    }),
+  ),
+  minimalTrapSpaces: z.array(
+    z.object({
+      trapSpace: z.object({ pattern: subspaceText }),
+      freeNodes: z.number().int(),
+      verdict: z.enum(["fixed point", "one attractor", "several attractors", "at least one attractor"]),
+      attractorCount: z.number().int().nullable(),
+    }),
+  ),
+  minimalTrapSpacesComplete: z.boolean(),
+  outsideMinimalTrapSpaces: z.enum(["excluded", "found", "not excluded"]),
+  percolatedNodes: z.number().int(),
+});
+export type AsyncAttractorsResult = z.infer<typeof AsyncAttractorsResult>;
+export const asyncAttractorsTask = {
+  input: AsyncAttractorsShard,
+  partial: AsyncAttractorsResult,
+} satisfies ShardTaskSchemas;

@@ -11,7 +11,15 @@ export function isRunFinished(state: RunState): boolean {
   return FINISHED_RUN_STATES.includes(state);
 }
 
-export const RUN_KINDS = ["sleep-count", "eca-hierarchy", "attractors", "reduction-search"] as const;
+export const RUN_KINDS = [
+  "sleep-count",
+  "eca-hierarchy",
+  "attractors",
+  "reduction-search",
+  "sat-cycles",
+  "trap-spaces",
+  "async-attractors",
+] as const;
 
 /** Demonstration kind: sums a deterministic function over [0, itemCount) in shards, sleeping per item. */
 export const SleepCountParams = z.object({
@@ -26,6 +34,26 @@ export type SleepCountResult = z.infer<typeof SleepCountResult>;
 /** Synchronous attractors and basins of the run's model revision, or of a network given as rule text. */
 export const AttractorsParams = z.object({ ruleText: z.string().min(1).max(200_000).optional() });
 export type AttractorsParams = z.infer<typeof AttractorsParams>;
+
+/** Fixed points and synchronous cycles of every length up to maxLength by SAT, for models beyond exact analysis. */
+export const SatCyclesParams = z.object({
+  maxLength: z.number().int().min(1).max(8).default(4),
+  maxSolutions: z.number().int().min(1).max(10_000).default(1_000),
+});
+export type SatCyclesParams = z.infer<typeof SatCyclesParams>;
+
+/** Minimal (or maximal) trap spaces by SAT, up to a number listed. */
+export const TrapSpacesParams = z.object({
+  kind: z.enum(["minimal", "maximal"]).default("minimal"),
+  limit: z.number().int().min(1).max(10_000).default(1_000),
+});
+export type TrapSpacesParams = z.infer<typeof TrapSpacesParams>;
+
+/** Asynchronous attractors: exact when small enough, else located through minimal trap spaces. */
+export const AsyncAttractorsParams = z.object({
+  trapSpaceLimit: z.number().int().min(1).max(10_000).default(1_000),
+});
+export type AsyncAttractorsParams = z.infer<typeof AsyncAttractorsParams>;
 
 export const StartRunBody = z.discriminatedUnion("kind", [
   z.object({
@@ -44,6 +72,9 @@ export const StartRunBody = z.discriminatedUnion("kind", [
     params: HierarchyRunParameters,
   }),
   z.object({ kind: z.literal("reduction-search"), modelRevisionId: z.uuid(), params: ReductionSearchParams }),
+  z.object({ kind: z.literal("sat-cycles"), modelRevisionId: z.uuid(), params: SatCyclesParams }),
+  z.object({ kind: z.literal("trap-spaces"), modelRevisionId: z.uuid(), params: TrapSpacesParams }),
+  z.object({ kind: z.literal("async-attractors"), modelRevisionId: z.uuid(), params: AsyncAttractorsParams }),
 ]);
 export type StartRunBody = z.infer<typeof StartRunBody>;
 

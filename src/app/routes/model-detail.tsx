@@ -13,6 +13,7 @@ import { useStructure } from "@/features/models/api/get-structure";
 import { useRevisionList } from "@/features/models/api/list-revisions";
 import { AttractorRunPanel } from "@/features/models/components/attractor-run-panel";
 import { AttractorStates } from "@/features/models/components/attractor-states";
+import { AnalysisNextStep } from "@/features/models/components/analysis-next-step";
 import { AttractorTable } from "@/features/models/components/attractor-table";
 import { BasinChart } from "@/features/models/components/basin-chart";
 import { Downloads } from "@/features/models/components/downloads";
@@ -296,6 +297,17 @@ export function ModelDetailRoute() {
           setSelected={setSelected}
           inputs={rev.network.inputs}
           fileName={baseName}
+        />
+      </Section>
+
+      <Section title="Analyses for every size: SAT, trap spaces, asynchronous attractors" testId="analyses-section">
+        <AnalysisNextStep
+          key={rev.id}
+          projectId={projectId}
+          revisionId={rev.id}
+          nodeCount={rev.nodeCount}
+          fileBase={baseName}
+          canStart={can(project.role, project.siteRole, "run:start")}
         />
       </Section>
 

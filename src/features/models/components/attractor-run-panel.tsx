@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { RunProgress, useCancelRun, useRun, useStartRun } from "@/features/runs";
 import { modelKeys } from "../api/keys";
 import { plural } from "@/lib/plural";
+import { EXACT_SYNCHRONOUS_MAX_NODES } from "../lib/analysis-methods";
 
 export interface AttractorRunPanelProps {
   projectId: string;
@@ -42,6 +43,18 @@ export function AttractorRunPanel({
       { onSuccess: (r) => setRunId(r.id) },
     );
 
+  // Beyond the exact limit the run could only fail: say so and point to the analyses that fit.
+  if (nodeCount > EXACT_SYNCHRONOUS_MAX_NODES)
+    return (
+      <p
+        data-testid="exact-limit-note"
+        className="rounded-md border border-slate-200 bg-slate-50 p-3 text-sm text-slate-700"
+      >
+        Exact synchronous analysis walks every state and covers at most {EXACT_SYNCHRONOUS_MAX_NODES} nodes; this model
+        has {nodeCount}. Its fixed points, short cycles, trap spaces and asynchronous attractors are found by SAT in the
+        analyses section below.
+      </p>
+    );
   return (
     <div
       data-testid="attractor-run-panel"
