@@ -53,18 +53,22 @@ export async function findCredentials(db: Knex, email: string): Promise<{ user: 
   return row ? { user: toUser(row), passwordHash: row.password_hash! } : null;
 }
 
-export async function insertUser(
-  db: Knex,
-  input: { email: string; displayName: string; passwordHash: string; siteRole?: SiteRole },
-): Promise<User> {
-  const [row] = await db("users")
-    .insert({
-      email: input.email.toLowerCase(),
-      display_name: input.displayName,
-      password_hash: input.passwordHash,
-      site_role: input.siteRole ?? "member",
-    })
-    .returning(columns);
+interface NewUser {
+  email: string;
+  displayName: string;
+  passwordHash: string;
+  siteRole?: SiteRole;
+}
+
+const userRow = (input: NewUser) => ({
+  email: input.email.toLowerCase(),
+  display_name: input.displayName,
+  password_hash: input.passwordHash,
+  site_role: input.siteRole ?? "member",
+});
+
+export async function insertUser(db: Knex, input: NewUser): Promise<User> {
+  const [row] = await db("users").insert(userRow(input)).returning(columns);
   return toUser(row as UserRow);
 }
 
@@ -92,17 +96,9 @@ export async function passwordHashOf(db: Knex, id: string): Promise<string | nul
 }
 
 /** The seed's upsert: an account with this address gets the given name, role and hash, or is created with them. */
-export async function upsertUser(
-  db: Knex,
-  input: { email: string; displayName: string; passwordHash: string; siteRole: SiteRole },
-): Promise<User> {
+export async function upsertUser(db: Knex, input: Required<NewUser>): Promise<User> {
   const [row] = await db("users")
-    .insert({
-      email: input.email.toLowerCase(),
-      display_name: input.displayName,
-      password_hash: input.passwordHash,
-      site_role: input.siteRole,
-    })
+    .insert(userRow(input))
     .onConflict("email")
     .merge(["display_name", "site_role", "password_hash"])
     .returning(columns);
