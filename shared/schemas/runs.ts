@@ -2,6 +2,7 @@
 import { z } from "zod";
 import { HierarchyRunParameters } from "./automata";
 import { ReductionSearchParams } from "./reductions";
+import { ScreenParams } from "./screens";
 
 export const RUN_STATES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
 export const RunState = z.enum(RUN_STATES);
@@ -11,7 +12,14 @@ export function isRunFinished(state: RunState): boolean {
   return FINISHED_RUN_STATES.includes(state);
 }
 
-export const RUN_KINDS = ["sleep-count", "eca-hierarchy", "attractors", "reduction-search"] as const;
+export const RUN_KINDS = [
+  "sleep-count",
+  "eca-hierarchy",
+  "attractors",
+  "reduction-search",
+  "expectation-check",
+  "screen",
+] as const;
 
 /** Demonstration kind: sums a deterministic function over [0, itemCount) in shards, sleeping per item. */
 export const SleepCountParams = z.object({
@@ -44,6 +52,7 @@ export const StartRunBody = z.discriminatedUnion("kind", [
     params: HierarchyRunParameters,
   }),
   z.object({ kind: z.literal("reduction-search"), modelRevisionId: z.uuid(), params: ReductionSearchParams }),
+  z.object({ kind: z.literal("screen"), modelRevisionId: z.uuid(), params: ScreenParams }),
 ]);
 export type StartRunBody = z.infer<typeof StartRunBody>;
 

@@ -2,10 +2,19 @@
 import type { RunKindDefinition } from "../run-kind";
 import { attractorsKind } from "./attractors";
 import { ecaHierarchyKind } from "./eca-hierarchy";
+import { expectationCheckKind } from "./expectation-check";
 import { reductionSearchKind } from "./reduction-search";
+import { screenKind } from "./screen";
 import { sleepCountKind } from "./sleep-count";
 
-const all: RunKindDefinition[] = [sleepCountKind, ecaHierarchyKind, attractorsKind, reductionSearchKind];
+const all: RunKindDefinition[] = [
+  sleepCountKind,
+  ecaHierarchyKind,
+  attractorsKind,
+  reductionSearchKind,
+  expectationCheckKind,
+  screenKind,
+];
 const kinds = new Map(all.map((k) => [k.kind, k]));
 
 export function runKind(kind: string): RunKindDefinition | undefined {
