@@ -17,7 +17,11 @@ export async function up(knex: Knex): Promise<void> {
       .inTable("model_revisions")
       .onDelete("CASCADE")
       .withKeyName("expectation_results_revision_id_fkey");
-    t.uuid("run_id").references("id").inTable("runs").onDelete("SET NULL").withKeyName("expectation_results_run_id_fkey");
+    t.uuid("run_id")
+      .references("id")
+      .inTable("runs")
+      .onDelete("SET NULL")
+      .withKeyName("expectation_results_run_id_fkey");
     t.text("body_hash").notNullable();
     t.text("status").notNullable();
     t.text("method").notNullable();

@@ -115,8 +115,7 @@ export function expectationsRoutes(runs: LifecycleDeps): RouteGroup {
     params: ExpectationParams,
     body: ExpectationInput,
     response: StoredExpectation,
-    handler: ({ params, body, user }) =>
-      editExpectation(runs, actor(params, user.id), params.expectationId, body),
+    handler: ({ params, body, user }) => editExpectation(runs, actor(params, user.id), params.expectationId, body),
   });
 
   routes.delete("/:expectationId", {

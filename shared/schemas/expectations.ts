@@ -28,7 +28,9 @@ export const ExpectedOutcome = z.discriminatedUnion("kind", [
 /** One expectation as written by people: the engine's Expectation. */
 export const ExpectationInput = z
   .object({
-    id: z.string().regex(EXPECTATION_KEY_PATTERN, "1 to 64 letters, digits, _, - or ., starting with a letter or digit"),
+    id: z
+      .string()
+      .regex(EXPECTATION_KEY_PATTERN, "1 to 64 letters, digits, _, - or ., starting with a letter or digit"),
     update: z.enum(["synchronous", "asynchronous"]).default("synchronous"),
     condition: ExpectationCondition.default({ knockOut: [], overExpress: [], inputs: {} }),
     outcome: ExpectedOutcome,

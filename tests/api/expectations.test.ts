@@ -74,7 +74,10 @@ beforeAll(async () => {
     databaseUrl: config.DATABASE_URL,
     mailer,
     publicUrl: config.publicUrl,
-    settings: { ...loadRunSettings({ RUN_HEARTBEAT_MS: "200", RUN_REAP_EVERY_MS: "500" }, 2), notifyAfterSeconds: 3600 },
+    settings: {
+      ...loadRunSettings({ RUN_HEARTBEAT_MS: "200", RUN_REAP_EVERY_MS: "500" }, 2),
+      notifyAfterSeconds: 3600,
+    },
   });
 });
 
@@ -106,7 +109,11 @@ describe("expectations table", () => {
       .patch(`${expectationsPath(modelId)}/${rowId}`)
       .send({ ...body, outcome: { kind: "fixed-point-count", comparison: "exactly", count: 2 } });
     expect(edited.status).toBe(200);
-    expect(edited.body.data.expectation.outcome).toEqual({ kind: "fixed-point-count", comparison: "exactly", count: 2 });
+    expect(edited.body.data.expectation.outcome).toEqual({
+      kind: "fixed-point-count",
+      comparison: "exactly",
+      count: 2,
+    });
     const list = await viewer.get(expectationsPath(modelId));
     expect(list.body.data).toHaveLength(1);
     expect((await owner.delete(`${expectationsPath(modelId)}/${rowId}`)).status).toBe(204);
@@ -144,9 +151,7 @@ describe("expectations table", () => {
     const exported = await viewer.get(`${expectationsPath(modelId)}/export`);
     expect(exported.status).toBe(200);
     expect(exported.headers["content-type"]).toContain("text/csv");
-    const again = await owner
-      .post(`${expectationsPath(modelId)}/import`)
-      .send({ csv: exported.text, mode: "replace" });
+    const again = await owner.post(`${expectationsPath(modelId)}/import`).send({ csv: exported.text, mode: "replace" });
     expect(again.body.data).toMatchObject({ added: 0, replaced: 2, removed: 0 });
     const list = (await viewer.get(expectationsPath(modelId))).body.data as { expectation: object }[];
     expect(list.map((s) => s.expectation)).toEqual([

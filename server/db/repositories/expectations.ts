@@ -31,11 +31,15 @@ function toStored(r: ExpectationRow): StoredExpectation {
 }
 
 function baseQuery(db: Knex) {
-  return db("expectations as e").leftJoin("users as u", "u.id", "e.created_by").select("e.*", "u.display_name as created_by_name");
+  return db("expectations as e")
+    .leftJoin("users as u", "u.id", "e.created_by")
+    .select("e.*", "u.display_name as created_by_name");
 }
 
 export async function listExpectations(db: Knex, modelId: string): Promise<StoredExpectation[]> {
-  const rows = (await baseQuery(db).where("e.model_id", modelId).orderBy([{ column: "e.created_at" }, { column: "e.key" }])) as ExpectationRow[];
+  const rows = (await baseQuery(db)
+    .where("e.model_id", modelId)
+    .orderBy([{ column: "e.created_at" }, { column: "e.key" }])) as ExpectationRow[];
   return rows.map(toStored);
 }
 
@@ -116,11 +120,7 @@ export async function insertResults(db: Knex, results: NewResult[]): Promise<voi
  */
 export async function currentResults(db: Knex, modelId: string): Promise<(MatrixCell & { revisionId: string })[]> {
   const rows = (await db
-    .select(
-      db.raw(
-        "distinct on (res.expectation_id, res.revision_id) res.*, r.revision as revision_number",
-      ),
-    )
+    .select(db.raw("distinct on (res.expectation_id, res.revision_id) res.*, r.revision as revision_number"))
     .from("expectation_results as res")
     .join("expectations as e", function () {
       this.on("e.id", "=", "res.expectation_id").andOn("e.body_hash", "=", "res.body_hash");

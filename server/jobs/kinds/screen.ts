@@ -38,8 +38,7 @@ export const screenKind = defineRunKind({
   merge(partials, p): ScreenRunResult {
     const merged = mergeScreenShards(partials.map((q) => q.shard));
     const traps = new Map<number, TrapSpaceCount>();
-    for (const q of partials)
-      q.shard.rows.forEach((row, k) => q.trapSpaces && traps.set(row.unit, q.trapSpaces[k]!));
+    for (const q of partials) q.shard.rows.forEach((row, k) => q.trapSpaces && traps.set(row.unit, q.trapSpaces[k]!));
     return {
       ...merged,
       update: p.update,

@@ -8,7 +8,7 @@ import type { ExpectationCheckParams } from "@shared/schemas/expectations";
 import { currentResults, insertResults, listExpectations, type NewResult } from "../../db/repositories/expectations";
 import { insertNotification } from "../../db/repositories/notifications";
 import { RunRequestError } from "../../jobs/run-errors";
-import { submitRun, type LifecycleDeps } from "../../jobs/run-lifecycle";
+import { paramsHash, submitRun, type LifecycleDeps } from "../../jobs/run-lifecycle";
 
 export interface CheckRequest {
   projectId: string;
@@ -29,6 +29,14 @@ export async function startExpectationCheck(
     modelId: req.modelId,
     items: stored.map((s) => ({ rowId: s.id, bodyHash: s.bodyHash, expectation: s.expectation })),
   };
+  // The run system reuses only finished results; an identical check still going is answered as it is, so two
+  // changes in quick succession never leave two equal runs that could not both be stored as succeeded.
+  const going = await runs
+    .db("runs")
+    .where({ kind: "expectation-check", model_revision_id: req.revisionId, params_hash: paramsHash(params) })
+    .whereIn("state", ["queued", "running"])
+    .first("id");
+  if (going) return { runId: going.id as string, reused: true };
   const out = await submitRun(runs, {
     projectId: req.projectId,
     startedBy: req.startedBy,
@@ -65,8 +73,7 @@ export async function storeCheckResults(
     .join("model_revisions as r", "r.id", "x.model_revision_id")
     .where("x.id", run.id)
     .first("r.id", "r.revision", "r.created_by", "r.model_id")) as
-    | { id: string; revision: number; created_by: string | null; model_id: string }
-    | undefined;
+    { id: string; revision: number; created_by: string | null; model_id: string } | undefined;
   if (!revision) return;
   const earlier = (await currentResults(trx, params.modelId)).filter((c) => c.revision < revision.revision);
   const previous = new Map<string, { revision: number; status: string }>();
@@ -76,7 +83,14 @@ export async function storeCheckResults(
   }
   // Rows deleted while the run was going have nothing to attach a result to.
   const live = new Set(
-    (await trx("expectations").whereIn("id", params.items.map((i) => i.rowId)).select("id")).map((r) => r.id as string),
+    (
+      await trx("expectations")
+        .whereIn(
+          "id",
+          params.items.map((i) => i.rowId),
+        )
+        .select("id")
+    ).map((r) => r.id as string),
   );
   const rows: NewResult[] = [];
   results.forEach((r, q) => {
@@ -96,7 +110,9 @@ export async function storeCheckResults(
     });
   });
   await insertResults(trx, rows);
-  const broken = rows.filter((r) => r.broke).map((r) => results[params.items.findIndex((i) => i.rowId === r.expectationId)]!.id);
+  const broken = rows
+    .filter((r) => r.broke)
+    .map((r) => results[params.items.findIndex((i) => i.rowId === r.expectationId)]!.id);
   if (broken.length > 0 && revision.created_by) {
     await insertNotification(trx, {
       userId: revision.created_by,

@@ -35,10 +35,10 @@ export default shardTask(screenTask, ({ input, cursor, partial }, ctx): ScreenTa
           traps.push(trapSpacePhenotypeCount(network, screenUnit(spec, row.unit).perturbation, input.phenotype, stop));
         const next = row.unit + 1;
         ctx.checkpoint((next - first) / span, "perturbations", next, {
-            shard: { ...header, range: { start: first, end: next }, rows: [...rows] },
-            trapSpaces: asynchronous ? [...traps] : null,
-            baselineTrapSpaces,
-          });
+          shard: { ...header, range: { start: first, end: next }, rows: [...rows] },
+          trapSpaces: asynchronous ? [...traps] : null,
+          baselineTrapSpaces,
+        });
       },
     },
   );
