@@ -225,7 +225,7 @@ describe("screen runs", () => {
     const ruleText = "A' = !B\nB' = !A\nC' = A & !C\n";
     const modelId = await createModel("Toggle screen", ruleText);
     const revisionId = (await t.db("model_revisions").where({ model_id: modelId }).first()).id as string;
-    const params = { nodes: ["A", "B", "C"], pairs: true, phenotype: { A: 1 } };
+    const params = { nodes: ["A", "B", "C"], pairs: true, phenotype: { A: 1 as const } };
     const res = await owner
       .post(`/api/projects/${projectId}/runs`)
       .send({ kind: "screen", modelRevisionId: revisionId, params });
