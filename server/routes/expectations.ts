@@ -1,6 +1,5 @@
 // /api/projects/:projectId/models/:modelId/expectations: the model's expectations (list, add, edit, remove, CSV
 // import and export), the expectation-by-revision matrix, and starting a check of one revision.
-import type { Knex } from "knex";
 import {
   CheckExpectationsBody,
   CheckStarted,
