@@ -19,6 +19,7 @@ import { createMailer, type Mailer } from "./mail/mailer";
 import { auditRoutes } from "./routes/audit";
 import { authRoutes } from "./routes/auth";
 import { automataRoutes } from "./routes/automata";
+import { expectationsRoutes } from "./routes/expectations";
 import { healthRoutes } from "./routes/health";
 import { invitationsRoutes, projectInvitationsRoutes } from "./routes/invitations";
 import { mailboxRoutes } from "./routes/mailbox";
@@ -101,13 +102,14 @@ export function createApp(deps: AppDeps): Express {
     membersRoutes(accounts),
     projectInvitationsRoutes(accounts),
     auditRoutes(accounts),
-    modelsRoutes(deps),
+    modelsRoutes({ ...deps, runs }),
     runsRoutes(runs),
     notificationsRoutes(deps),
     reductionsRoutes({ ...runs, notify: { db: deps.db, log: deps.log, mailer, publicUrl: deps.config.publicUrl } }),
     modelHierarchyRoutes(deps),
     automataRoutes(deps),
     openApiRoutes(deps),
+    expectationsRoutes(runs),
   ])
     registry.mount(api, group);
   api.use(notFound);

@@ -30,7 +30,10 @@ import {
 import { ProjectParams } from "@shared/schemas/projects";
 import { findModelFile } from "../db/repositories/model-files";
 import { listModels } from "../db/repositories/models";
+import type { Logger } from "pino";
 import { HttpError } from "../http/errors";
+import type { LifecycleDeps } from "../jobs/run-lifecycle";
+import { checkInBackground } from "../services/expectations/expectation-check";
 import { project, routeGroup, type RouteGroup } from "../http/route-group";
 import { modelDetail, modelRevisions, storedRevision } from "../services/models/model-detail";
 import { exportModel } from "../services/models/model-formats";
@@ -71,7 +74,7 @@ const readUploadForm: RequestHandler = (req, res, next) => {
   });
 };
 
-export function modelsRoutes(deps: { db: Knex }): RouteGroup {
+export function modelsRoutes(deps: { db: Knex; log: Logger; runs: LifecycleDeps }): RouteGroup {
   const { db } = deps;
   const routes = routeGroup({ mountPath: "/projects/:projectId/models", tag: "models", db });
   const read = project("project:read");
@@ -174,8 +177,17 @@ export function modelsRoutes(deps: { db: Knex }): RouteGroup {
     body: NewRevisionBody,
     response: ModelDetail,
     status: 201,
-    handler: ({ params, body, project, user }) =>
-      reviseModel(db, { projectId: project.id, userId: user.id }, params.modelId, body),
+    async handler({ params, body, project, user }) {
+      const detail = await reviseModel(db, { projectId: project.id, userId: user.id }, params.modelId, body);
+      // Every new revision is checked against the model's expectations, in the background.
+      await checkInBackground(deps.runs, deps.log, {
+        projectId: project.id,
+        modelId: params.modelId,
+        revisionId: detail.revision.id,
+        startedBy: user.id,
+      });
+      return detail;
+    },
   });
 
   routes.get("/:modelId/revisions/:revision", {

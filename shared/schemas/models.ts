@@ -8,7 +8,7 @@ export const INLINE_ANALYSIS_MAX_NODES = 16;
 
 // `__proto__` is refused by name: as a key of a record (`fixed`) zod would otherwise drop it without a word, because
 // assigning it to a plain object sets the prototype instead of adding the key. Rule text refuses it too.
-const nodeName = z
+export const nodeName = z
   .string()
   .regex(/^[A-Za-z_][A-Za-z0-9_]*$/, "must be a node name")
   .refine((name) => name !== "__proto__", PROTOTYPE_KEY_MESSAGE);

@@ -14,6 +14,8 @@ import type {
   EmulationSearchResult,
   TargetFlag,
 } from "../engine/emulation";
+import type { ExpectationResult } from "../engine/expectations";
+import type { ScreenShard } from "../engine/screens";
 import { Certificate, CoarsestGrouping, ReductionSearchParams } from "./reductions";
 
 /** A task's resume point: the position in its shard's units (or items) where the next attempt continues. */
@@ -197,3 +199,53 @@ export const asyncAttractorsTask = {
   input: AsyncAttractorsShard,
   partial: AsyncAttractorsResult,
 } satisfies ShardTaskSchemas;
+
+// --- expectation-check: a share of a model's expectations (whole condition groups) on one revision ---
+
+export const ExpectationCheckShard = z.object({
+  ruleText: z.string().min(1),
+  /** Positions in the run's item list, and the expectations at them (checked by the engine's evaluator). */
+  items: z.array(z.object({ index: z.number().int().min(0), expectation: z.unknown() })),
+});
+export type ExpectationCheckShard = z.infer<typeof ExpectationCheckShard>;
+export const ExpectationCheckPartial = z.object({
+  results: z.array(
+    z.object({
+      index: z.number().int().min(0),
+      result: engineResult<ExpectationResult>("an expectation result", ["id", "status", "method", "detail"]),
+    }),
+  ),
+});
+export type ExpectationCheckPartial = z.infer<typeof ExpectationCheckPartial>;
+export const expectationCheckTask = {
+  input: ExpectationCheckShard,
+  partial: ExpectationCheckPartial,
+} satisfies ShardTaskSchemas;
+
+/** Minimal trap spaces of one network: how many, how many fix the phenotype, and whether the list is complete. */
+export const TrapSpaceCount = z.object({
+  total: z.number().int(),
+  withPhenotype: z.number().int(),
+  complete: z.boolean(),
+});
+export type TrapSpaceCount = z.infer<typeof TrapSpaceCount>;
+
+// --- screen: a contiguous range of a perturbation screen's units ---
+
+export const ScreenTaskShard = z.object({
+  ruleText: z.string().min(1),
+  nodes: z.array(z.string()).min(1),
+  pairs: z.boolean(),
+  phenotype: z.record(z.string(), z.union([z.literal(0), z.literal(1)])),
+  update: z.enum(["synchronous", "asynchronous"]),
+  range: z.object({ start: z.number().int().min(0), end: z.number().int().min(0) }),
+});
+export type ScreenTaskShard = z.infer<typeof ScreenTaskShard>;
+export const ScreenTaskPartial = z.object({
+  shard: engineResult<ScreenShard>("a screen shard", ["range", "rows", "baseline"]),
+  /** Under asynchronous update: per unit of the range, minimal trap spaces and those with the phenotype. */
+  trapSpaces: z.array(TrapSpaceCount).nullable(),
+  baselineTrapSpaces: TrapSpaceCount.nullable(),
+});
+export type ScreenTaskPartial = z.infer<typeof ScreenTaskPartial>;
+export const screenTask = { input: ScreenTaskShard, partial: ScreenTaskPartial } satisfies ShardTaskSchemas;

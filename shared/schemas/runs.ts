@@ -2,6 +2,7 @@
 import { z } from "zod";
 import { HierarchyRunParameters } from "./automata";
 import { ReductionSearchParams } from "./reductions";
+import { ScreenParams } from "./screens";
 
 export const RUN_STATES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
 export const RunState = z.enum(RUN_STATES);
@@ -19,6 +20,8 @@ export const RUN_KINDS = [
   "sat-cycles",
   "trap-spaces",
   "async-attractors",
+  "expectation-check",
+  "screen",
 ] as const;
 
 /** Demonstration kind: sums a deterministic function over [0, itemCount) in shards, sleeping per item. */
@@ -75,6 +78,7 @@ export const StartRunBody = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("sat-cycles"), modelRevisionId: z.uuid(), params: SatCyclesParams }),
   z.object({ kind: z.literal("trap-spaces"), modelRevisionId: z.uuid(), params: TrapSpacesParams }),
   z.object({ kind: z.literal("async-attractors"), modelRevisionId: z.uuid(), params: AsyncAttractorsParams }),
+  z.object({ kind: z.literal("screen"), modelRevisionId: z.uuid(), params: ScreenParams }),
 ]);
 export type StartRunBody = z.infer<typeof StartRunBody>;
 

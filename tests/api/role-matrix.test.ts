@@ -56,6 +56,8 @@ interface Fixture {
   failedRunId: string;
   /** A two-node model with one revision that was uploaded from a file. */
   modelId: string;
+  /** An expectation of that model. */
+  expectationId: string;
   /** A proposed reduction of that model onto a one-node oscillator, with the certificate that proves it. */
   reductionId: string;
   certificate: object;
@@ -289,6 +291,50 @@ const rows: Row[] = [
     path: "/api/projects/{projectId}/models/{modelId}/revisions/1/structure",
     expected: [401, 404, 200, 200, 200, 200, 200],
   },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/expectations",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/{modelId}/expectations",
+    body: () => ({ id: "matrix-new", outcome: { kind: "some-attractor", pattern: { A: 1 } }, source: "matrix" }),
+    expected: [401, 404, 403, 403, 201, 201, 201],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/expectations/export",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/{modelId}/expectations/import",
+    body: () => ({ csv: "id,outcome,pattern,source\nmatrix-csv,some-attractor,B=1,matrix\n" }),
+    expected: [401, 404, 403, 403, 200, 200, 200],
+  },
+  {
+    method: "get",
+    path: "/api/projects/{projectId}/models/{modelId}/expectations/matrix",
+    expected: [401, 404, 200, 200, 200, 200, 200],
+  },
+  {
+    method: "post",
+    path: "/api/projects/{projectId}/models/{modelId}/expectations/check",
+    body: () => ({}),
+    expected: [401, 404, 403, 403, 200, 200, 200],
+  },
+  {
+    method: "patch",
+    path: "/api/projects/{projectId}/models/{modelId}/expectations/{expectationId}",
+    body: () => ({ id: "matrix-e", outcome: { kind: "no-attractor", pattern: { A: 1 } }, source: "matrix" }),
+    expected: [401, 404, 403, 403, 200, 200, 200],
+  },
+  {
+    method: "delete",
+    path: "/api/projects/{projectId}/models/{modelId}/expectations/{expectationId}",
+    expected: [401, 404, 403, 403, 204, 204, 204],
+  },
   { method: "get", path: "/api/projects/{projectId}/reductions", expected: [401, 404, 200, 200, 200, 200, 200] },
   {
     method: "post",
@@ -465,8 +511,23 @@ async function makeFixture(): Promise<Fixture> {
     .returning("id");
   const modelId = await insertMatrixModel(projectId);
   const { reductionId, certificate } = await insertMatrixReduction(projectId, modelId);
+  const [expectation] = await t
+    .db("expectations")
+    .insert({
+      model_id: modelId,
+      key: "matrix-e",
+      body: JSON.stringify({
+        update: "synchronous",
+        condition: { knockOut: [], overExpress: [], inputs: {} },
+        outcome: { kind: "some-attractor", pattern: { A: 1 } },
+      }),
+      body_hash: "matrix",
+      source: "matrix fixture",
+    })
+    .returning("id");
   return {
     modelId,
+    expectationId: (expectation as { id: string }).id,
     reductionId,
     certificate,
     runId: (queuedRun as { id: string }).id,

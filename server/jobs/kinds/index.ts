@@ -3,8 +3,10 @@ import type { RunKindDefinition } from "../run-kind";
 import { asyncAttractorsKind } from "./async-attractors";
 import { attractorsKind } from "./attractors";
 import { ecaHierarchyKind } from "./eca-hierarchy";
+import { expectationCheckKind } from "./expectation-check";
 import { reductionSearchKind } from "./reduction-search";
 import { satCyclesKind } from "./sat-cycles";
+import { screenKind } from "./screen";
 import { sleepCountKind } from "./sleep-count";
 import { trapSpacesKind } from "./trap-spaces";
 
@@ -16,6 +18,8 @@ const all: RunKindDefinition[] = [
   satCyclesKind,
   trapSpacesKind,
   asyncAttractorsKind,
+  expectationCheckKind,
+  screenKind,
 ];
 const kinds = new Map(all.map((k) => [k.kind, k]));
 

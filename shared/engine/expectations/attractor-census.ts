@@ -20,6 +20,7 @@ export type UndecidedReason =
   | "solution-cap"
   | "trajectory-bound"
   | "needs-trap-spaces"
+  | "outside-trap-spaces"
   | "unknown-values"
   | "no-method";
 

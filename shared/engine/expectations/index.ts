@@ -36,6 +36,7 @@ export {
   satCyclesMethod,
   satFixedPointsMethod,
 } from "./census-methods";
+export { trapSpaceMethod, TRAP_SPACE_METHOD } from "./trap-space-method";
 export { judgeOutcome, describeAttractor, type ExpectationStatus, type Judgement } from "./judge-outcome";
 export {
   evaluateExpectations,

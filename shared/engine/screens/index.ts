@@ -23,3 +23,4 @@ export {
   type ScreenShard,
   type ScreenResult,
 } from "./run-screen";
+export { trapSpacePhenotypeCount, type TrapSpaceCount } from "./trap-space-count";
