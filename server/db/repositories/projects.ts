@@ -26,7 +26,16 @@ interface ProjectRow {
   updated_at: Date;
 }
 
-const columns = ["p.id", "p.name", "p.description", "p.archived_at", "p.created_at", "p.updated_at"];
+// "Last change" is the newest of the project's own edits, its audit log (models, revisions, runs started or
+// cancelled, reductions, members) and its runs' ends, which no person records; both lookups use a
+// (project_id, ...) index, so the cost stays flat as the project grows.
+const lastChange = `greatest(p.updated_at,
+  (select max(a.created_at) from audit_log a where a.project_id = p.id),
+  (select max(r.finished_at) from runs r where r.project_id = p.id)) as updated_at`;
+
+function projectColumns(db: Knex) {
+  return ["p.id", "p.name", "p.description", "p.archived_at", "p.created_at", db.raw(lastChange)];
+}
 
 function toProject(r: ProjectRow): Project {
   return {
@@ -41,7 +50,7 @@ function toProject(r: ProjectRow): Project {
 }
 
 export async function findProject(db: Knex, id: string): Promise<Project | null> {
-  const row = await db("projects as p").select(columns).where("p.id", id).first();
+  const row = await db("projects as p").select(projectColumns(db)).where("p.id", id).first();
   return row ? toProject(row as ProjectRow) : null;
 }
 
@@ -52,7 +61,7 @@ export async function listProjectsFor(db: Knex, user: { id: string; siteRole: st
       this.on("mine.project_id", "p.id").andOnVal("mine.user_id", user.id);
     })
     .select([
-      ...columns,
+      ...projectColumns(db),
       "mine.role as role",
       db.raw("(select count(*)::int from memberships c where c.project_id = p.id) as member_count"),
     ])

@@ -1,9 +1,11 @@
 // The project's first tab: what it is about, where things stand (models, searches running, reductions waiting
 // for review), and the owners' settings.
 import type { ReactNode } from "react";
+import { useQuery } from "@tanstack/react-query";
 import { Link, useNavigate } from "react-router-dom";
 import { can } from "@shared/types/roles";
 import { useModelList } from "@/features/models/api/list-models";
+import { projectQuery } from "@/features/projects/api/get-project";
 import { ProjectSettings } from "@/features/projects/components/project-settings";
 import { useReductions } from "@/features/reductions/api/list-reductions";
 import { useRunList } from "@/features/runs";
@@ -29,6 +31,9 @@ export function ProjectOverviewRoute() {
   const models = useModelList(project.id);
   const proposed = useReductions(project.id, { state: "proposed" });
   const running = useRunList(project.id, { state: "running" });
+  // Work done in other tabs moves "last change" on the server; read it afresh whenever the overview opens.
+  const fresh = useQuery({ ...projectQuery(project.id), staleTime: 0 });
+  const lastChange = fresh.data?.updatedAt ?? project.updatedAt;
   const base = `/projects/${project.id}`;
   return (
     <div className="space-y-6">
@@ -47,7 +52,9 @@ export function ProjectOverviewRoute() {
         <p className="text-sm text-slate-700">{project.description || "No description yet."}</p>
         <p className="mt-3 text-xs text-slate-500">
           Created {new Date(project.createdAt).toLocaleDateString()} · last change{" "}
-          {new Date(project.updatedAt).toLocaleString()}
+          <time dateTime={lastChange} data-testid="project-last-change">
+            {new Date(lastChange).toLocaleString()}
+          </time>
         </p>
       </div>
       {canManage && <ProjectSettings project={project} onDeleted={() => navigate("/projects", { replace: true })} />}

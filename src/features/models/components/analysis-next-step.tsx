@@ -13,6 +13,9 @@ export interface AnalysisNextStepProps {
   canStart: boolean;
 }
 
+// Only the first letter: a sentence keeps the acronyms in the titles ("SAT") as they are.
+const inSentence = (title: string) => title.charAt(0).toLowerCase() + title.slice(1);
+
 export function AnalysisNextStep({ projectId, revisionId, nodeCount, fileBase, canStart }: AnalysisNextStepProps) {
   const step = nextStepFor(nodeCount);
   const props = { projectId, revisionId, fileBase, canStart };
@@ -29,7 +32,7 @@ export function AnalysisNextStep({ projectId, revisionId, nodeCount, fileBase, c
   return (
     <div className="space-y-3" data-testid="analysis-next-step">
       <p className="rounded-md bg-brand-50 p-3 text-sm text-slate-800" data-testid="next-step-text">
-        <strong>Next step: {step.methods.map((m) => METHOD_TEXT[m].title.toLowerCase()).join(" and ")}.</strong>{" "}
+        <strong>Next step: {step.methods.map((m) => inSentence(METHOD_TEXT[m].title)).join(" and ")}.</strong>{" "}
         {step.reason}
       </p>
       {order.map((m) => views[m])}
