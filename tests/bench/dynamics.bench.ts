@@ -7,6 +7,7 @@ import { fileURLToPath } from "node:url";
 import seedrandom from "seedrandom";
 import { networkFromFunctions, type BooleanNetwork } from "@shared/engine/network";
 import { analyseSynchronous } from "@shared/engine/state-graph";
+import { measureCli, writeModelFile } from "./cli-measure";
 
 function randomNK(n: number, k: number, seed: number): BooleanNetwork {
   const rng = seedrandom(String(seed));
@@ -148,6 +149,12 @@ function main(): void {
         `${String(fast.attractors).padStart(10)}  ${String(fast.biggestBasin).padStart(9)}  ${String(fast.maxTransient).padStart(13)}`,
     );
   }
+  const file = writeModelFile(randomNK(24, 2, 3), "random-n24-k2");
+  const cli = measureCli(["attractors", file, "--json"]);
+  console.log(
+    `Issue 16 row, exact synchronous analysis, random n=24 in-degree 2 (emulant attractors --json, start-up included): ` +
+      `${cli.seconds.toFixed(2)} s, ${cli.maxRssMB.toFixed(0)} MB peak | target <= 3 s, <= 200 MB peak`,
+  );
 }
 
 main();

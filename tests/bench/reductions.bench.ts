@@ -20,6 +20,7 @@ import { findDynamicalEmbedding } from "@shared/engine/embedding";
 import { coarseGrain, nodeObservable } from "@shared/engine/coarse-graining";
 import { checkNetwork } from "@shared/engine/network";
 import { blockEmulationCertificate, embeddingCertificate, verifyCertificate } from "@shared/engine/certificates";
+import { measureCli, writeModelFile } from "./cli-measure";
 
 const rows: string[][] = [];
 const time = <T>(f: () => T): [T, number] => {
@@ -31,13 +32,41 @@ const verdict = (seconds: number, limit: number) => (seconds < limit ? "ok" : "O
 
 const rng = seedrandom("reductions-bench");
 /** A 3-node target with interactions between its nodes (random ones are often constant or decoupled). */
-function interactingTarget(prefix: string) {
+function interactingTarget(prefix: string, random = rng) {
   for (;;) {
-    const G = randomNetwork(rng, 3, 3, prefix);
+    const G = randomNetwork(random, 3, 3, prefix);
     const succ = successorsOfNetwork(G);
     if (trivialityFlags(succ, 3).length === 0 && interactionCount(succ, 3) >= 3) return G;
   }
 }
+// Issue 16's discovery rows, as one CLI process each (start-up included), printed at once because the rest is long.
+{
+  // Its own generator, so that the rows below keep drawing the same networks as before.
+  const own = seedrandom("issue-16");
+  const { source } = plantEmulation(own, interactingTarget("g", own), 12, 3);
+  const file = writeModelFile(source, "planted-n12");
+  console.log("Issue 16 rows (emulant discover on a 12-node planted model, start-up included):");
+  for (const [t, limit] of [
+    [4, 5],
+    [1, 2],
+  ] as const) {
+    const r = measureCli([
+      "discover",
+      file,
+      "--max-target-nodes",
+      "4",
+      "--time",
+      String(t),
+      "--max-block",
+      "3",
+      "--json",
+    ]);
+    console.log(
+      `  discover n=12 m<=4 t=${t} blocks<=3: ${r.seconds.toFixed(2)} s, ${r.maxRssMB.toFixed(0)} MB peak | target <= ${limit} s`,
+    );
+  }
+}
+
 for (const n of [16, 24, 32, 64]) {
   for (const t of [1, 2, 3]) {
     const G = interactingTarget("g");

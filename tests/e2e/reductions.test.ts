@@ -12,6 +12,7 @@ const TIDE_CLOCK_MODEL = "00000000-0000-4000-8000-000000000302";
 let browser: BrowserSession;
 let server: BrowserSession["server"];
 let projectId: string;
+let searchRunUrl: string;
 
 beforeAll(async () => {
   browser = await openBrowserSession({ withWorker: true });
@@ -65,6 +66,8 @@ describe("reductions in the browser", () => {
       .poll(() => page.getByTestId("run-state").getAttribute("data-state"), { timeout: 60_000 })
       .toBe("succeeded");
 
+    searchRunUrl = page.url();
+
     await page.goto(`${server.baseUrl}/projects/${projectId}/reductions`);
     await page.getByTestId("reductions-table").waitFor();
     await page.getByTestId("reductions-table").getByRole("link").first().click();
@@ -92,5 +95,25 @@ describe("reductions in the browser", () => {
     await page.locator('[data-testid="model-hierarchy-graph"] circle').first().waitFor();
     await screenshot(page, "reductions-model-hierarchy");
     expect(errors).toEqual([]);
+  });
+
+  it("lists the search's ranked findings on its run page and proposes a held-back one from there", async () => {
+    const { page } = browser;
+    await browser.signIn("modeler@demo.emulant.test");
+    await page.goto(searchRunUrl);
+    await page.getByTestId("search-findings").waitFor();
+    const rows = page.getByTestId("finding-row");
+    const propose = page.getByTestId("propose-finding");
+    const inReview = page.getByTestId("search-findings").getByRole("link", { name: "In review" });
+    expect(await rows.count()).toBeGreaterThan(0);
+    // The ten best enter review by themselves; the uninformative ones wait for a modeler.
+    const heldBack = await propose.count();
+    expect(heldBack).toBeGreaterThan(0);
+    const reviewedBefore = await inReview.count();
+    expect(reviewedBefore + heldBack).toBe(await rows.count());
+    await propose.first().click();
+    await expect.poll(() => propose.count()).toBe(heldBack - 1);
+    expect(await inReview.count()).toBe(reviewedBefore + 1);
+    await screenshot(page, "reductions-run-findings");
   });
 });

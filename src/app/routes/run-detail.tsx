@@ -4,6 +4,7 @@ import { Link, useParams } from "react-router-dom";
 import { can } from "@shared/types/roles";
 import { Alert } from "@/components/ui/alert";
 import { SaveRulesAsModel } from "@/features/models/components/save-rules-as-model";
+import { SearchFindings } from "@/features/reductions/components/search-findings";
 import { RunActions, RunProgress, RunResultView, RunStateBadge, runTitle, useRun } from "@/features/runs";
 import { ApiError } from "@/lib/api-client";
 import { downloadJson, fileNameOf } from "@/lib/download";
@@ -125,6 +126,9 @@ export function RunDetailRoute() {
                 : undefined
             }
           />
+          {run.kind === "reduction-search" && (
+            <SearchFindings projectId={projectId} runId={run.id} result={run.result} canPropose={mayAct} />
+          )}
         </div>
       )}
     </section>
