@@ -73,7 +73,8 @@ export interface SearchFormProps {
 
 export function SearchForm({ models, isPending, error, onSubmit }: SearchFormProps) {
   const [mode, setMode] = useState<Mode>("discover");
-  const [sourceModelId, setSource] = useState(models[0]?.id ?? "");
+  // Discovery, the form's first mode, takes sources up to 20 nodes: start on a model it can search.
+  const [sourceModelId, setSource] = useState((models.find((m) => m.nodeCount <= 20) ?? models[0])?.id ?? "");
   const [targetModelId, setTarget] = useState(models[1]?.id ?? models[0]?.id ?? "");
   const [notion, setNotion] = useState<"block-emulation" | "dynamical-embedding">("block-emulation");
   const [maxTargetNodes, setMaxTargetNodes] = useState(2);
