@@ -1,5 +1,6 @@
 // Model page: one revision of a model with its wiring diagram, synchronous attractors (table, basin chart,
-// phenotype labels), trajectory raster, perturbation comparison, downloads, rule editing and revision history.
+// phenotype labels), trajectory raster, perturbation comparison, expectations with their by-revision matrix,
+// downloads, rule editing and revision history.
 import { useState } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { Alert } from "@/components/ui/alert";
@@ -22,6 +23,8 @@ import { PerturbationPanel } from "@/features/models/components/perturbation-pan
 import { RuleEditor } from "@/features/models/components/rule-editor";
 import { StructureView } from "@/features/models/components/structure-view";
 import { EnsembleView } from "@/features/models/components/ensemble-view";
+import { ExpectationMatrix } from "@/features/models/components/expectation-matrix";
+import { ExpectationsEditor } from "@/features/models/components/expectations-editor";
 import { TrajectoryPanel } from "@/features/models/components/trajectory-panel";
 import { WiringDiagram } from "@/features/models/components/wiring-diagram";
 import { plural } from "@/lib/plural";
@@ -341,6 +344,19 @@ export function ModelDetailRoute() {
           />
         </Section>
       </div>
+
+      <Section
+        title="Expectations: what the model must reproduce, checked on every revision"
+        testId="expectations-section"
+      >
+        <ExpectationMatrix
+          projectId={projectId}
+          modelId={modelId}
+          revision={rev.revision}
+          canRun={can(project.role, project.siteRole, "run:start")}
+        />
+        <ExpectationsEditor projectId={projectId} modelId={modelId} canWrite={canWrite} />
+      </Section>
 
       <Section title="Structure" testId="structure-section">
         <StructureView ruleText={rev.ruleText} fileName={baseName} />
