@@ -1,6 +1,6 @@
 // Model page: one revision of a model with its wiring diagram, synchronous attractors (table, basin chart,
 // phenotype labels), trajectory raster, perturbation comparison, expectations with their by-revision matrix,
-// downloads, rule editing and revision history.
+// a perturbation screen, downloads, rule editing and revision history.
 import { useState } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { Alert } from "@/components/ui/alert";
@@ -21,6 +21,7 @@ import { Downloads } from "@/features/models/components/downloads";
 import { issuesOf } from "@/features/models/components/parse-error-list";
 import { PerturbationPanel } from "@/features/models/components/perturbation-panel";
 import { RuleEditor } from "@/features/models/components/rule-editor";
+import { ScreenPanel } from "@/features/models/components/screen-panel";
 import { StructureView } from "@/features/models/components/structure-view";
 import { EnsembleView } from "@/features/models/components/ensemble-view";
 import { ExpectationMatrix } from "@/features/models/components/expectation-matrix";
@@ -356,6 +357,20 @@ export function ModelDetailRoute() {
           canRun={can(project.role, project.siteRole, "run:start")}
         />
         <ExpectationsEditor projectId={projectId} modelId={modelId} canWrite={canWrite} />
+      </Section>
+
+      <Section
+        title="Perturbation screen: which knock-outs and over-expressions move a phenotype"
+        testId="screen-section"
+      >
+        <ScreenPanel
+          key={rev.id}
+          projectId={projectId}
+          revisionId={rev.id}
+          nodes={nodes}
+          fileName={baseName}
+          canStart={can(project.role, project.siteRole, "run:start")}
+        />
       </Section>
 
       <Section title="Structure" testId="structure-section">
