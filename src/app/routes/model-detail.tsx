@@ -1,5 +1,6 @@
 // Model page: one revision of a model with its wiring diagram, synchronous attractors (table, basin chart,
-// phenotype labels), trajectory raster, perturbation comparison, downloads, rule editing and revision history.
+// phenotype labels), trajectory raster, perturbation comparison, expectations with their by-revision matrix,
+// a perturbation screen, downloads, rule editing and revision history.
 import { useState } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { Alert } from "@/components/ui/alert";
@@ -20,8 +21,11 @@ import { Downloads } from "@/features/models/components/downloads";
 import { issuesOf } from "@/features/models/components/parse-error-list";
 import { PerturbationPanel } from "@/features/models/components/perturbation-panel";
 import { RuleEditor } from "@/features/models/components/rule-editor";
+import { ScreenPanel } from "@/features/models/components/screen-panel";
 import { StructureView } from "@/features/models/components/structure-view";
 import { EnsembleView } from "@/features/models/components/ensemble-view";
+import { ExpectationMatrix } from "@/features/models/components/expectation-matrix";
+import { ExpectationsEditor } from "@/features/models/components/expectations-editor";
 import { TrajectoryPanel } from "@/features/models/components/trajectory-panel";
 import { WiringDiagram } from "@/features/models/components/wiring-diagram";
 import { plural } from "@/lib/plural";
@@ -341,6 +345,33 @@ export function ModelDetailRoute() {
           />
         </Section>
       </div>
+
+      <Section
+        title="Expectations: what the model must reproduce, checked on every revision"
+        testId="expectations-section"
+      >
+        <ExpectationMatrix
+          projectId={projectId}
+          modelId={modelId}
+          revision={rev.revision}
+          canRun={can(project.role, project.siteRole, "run:start")}
+        />
+        <ExpectationsEditor projectId={projectId} modelId={modelId} canWrite={canWrite} />
+      </Section>
+
+      <Section
+        title="Perturbation screen: which knock-outs and over-expressions move a phenotype"
+        testId="screen-section"
+      >
+        <ScreenPanel
+          key={rev.id}
+          projectId={projectId}
+          revisionId={rev.id}
+          nodes={nodes}
+          fileName={baseName}
+          canStart={can(project.role, project.siteRole, "run:start")}
+        />
+      </Section>
 
       <Section title="Structure" testId="structure-section">
         <StructureView ruleText={rev.ruleText} fileName={baseName} />
