@@ -91,9 +91,14 @@ export function UserMenu() {
               role="menuitem"
               type="button"
               className="block w-full px-4 py-2 text-left hover:bg-slate-100"
-              onClick={() => {
+              onClick={async () => {
                 setOpen(false);
-                signOut.mutate(undefined, { onSuccess: () => navigate("/sign-in") });
+                // mutateAsync, not mutate's callbacks: those are dropped when the signed-in menu unmounts, which
+                // left the sign-in page pointing the next person back at the page the last one had open.
+                await signOut.mutateAsync().then(
+                  () => navigate("/sign-in", { replace: true }),
+                  () => undefined, // the mutation's error state is enough; the person is still signed in
+                );
               }}
             >
               Sign out
