@@ -11,12 +11,12 @@ import { runScreen } from "@shared/engine/screens";
 import { ExpectationMatrix } from "@shared/schemas/expectations";
 import type { Run } from "@shared/schemas/runs";
 import { ScreenRunResult } from "@shared/schemas/screens";
-import { getRun } from "../../server/db/repositories/runs";
 import { loadRunSettings } from "../../server/jobs/run-settings";
 import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
 import { createLogger } from "../../server/logger";
 import { createFakeMailer } from "../../server/mail/mailer";
 import { signInAs, type Agent } from "../support/sessions";
+import { waitForRunEnd } from "../support/runs";
 import { buildTestApp, testConfig } from "../support/test-app";
 
 const t = buildTestApp();
@@ -32,15 +32,7 @@ let projectId = "";
 // (common practice: the textbook toggle switch).
 const TOGGLE = "A' = !B\nB' = !A\n";
 
-async function finished(runId: string, timeoutMs = 60_000): Promise<Run> {
-  const started = Date.now();
-  for (;;) {
-    const run = await getRun(t.db, runId);
-    if (run && ["succeeded", "failed", "cancelled"].includes(run.state)) return run;
-    if (Date.now() - started > timeoutMs) throw new Error(`run ${runId} still ${run?.state}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
+const finished = (runId: string, timeoutMs?: number): Promise<Run> => waitForRunEnd(t.db, runId, timeoutMs);
 
 async function createModel(name: string, ruleText: string): Promise<string> {
   const res = await owner.post(`/api/projects/${projectId}/models`).send({ name, ruleText });

@@ -3,7 +3,6 @@
 // published (tests/support/large-model-fixtures.ts), and node elimination saved as a model of the project.
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { getRun } from "../../server/db/repositories/runs";
 import { loadRunSettings } from "../../server/jobs/run-settings";
 import { startRunWorker, type RunWorker } from "../../server/jobs/run-worker";
 import { createLogger } from "../../server/logger";
@@ -12,6 +11,7 @@ import { AsyncAttractorsResult, SatCyclesResult, TrapSpacesResult } from "@share
 import type { Run } from "@shared/schemas/runs";
 import { DELAY_LINE_LENGTH, FAURE_STABLE_STATE, FAURE_WITH_DELAY_LINE } from "../support/large-model-fixtures";
 import { signInAs, type Agent } from "../support/sessions";
+import { waitForRunEnd } from "../support/runs";
 import { buildTestApp, testConfig } from "../support/test-app";
 
 const t = buildTestApp();
@@ -23,15 +23,7 @@ let revisionId: string;
 let owner: Agent;
 let worker: RunWorker | null = null;
 
-async function finished(runId: string, timeoutMs = 60_000): Promise<Run> {
-  const started = Date.now();
-  for (;;) {
-    const run = await getRun(t.db, runId);
-    if (run && ["succeeded", "failed", "cancelled"].includes(run.state)) return run;
-    if (Date.now() - started > timeoutMs) throw new Error(`run ${runId} still ${run?.state}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
+const finished = (runId: string, timeoutMs?: number): Promise<Run> => waitForRunEnd(t.db, runId, timeoutMs);
 
 async function runToEnd(kind: string, params: object): Promise<Run> {
   const res = await owner.post(`/api/projects/${projectId}/runs`).send({ kind, modelRevisionId: revisionId, params });
