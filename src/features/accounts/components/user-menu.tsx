@@ -1,7 +1,7 @@
 // The header's account corner: "Sign in" for visitors; for a signed-in person their name opens a menu with the
 // profile and sign-out. Admins also get the Mailbox link while the local mail fake is in use.
 import { useEffect, useRef, useState } from "react";
-import { Link, NavLink, useNavigate } from "react-router-dom";
+import { Link, NavLink } from "react-router-dom";
 import { useSession } from "../api/get-session";
 import { useSignOut } from "../api/sign-out";
 
@@ -11,7 +11,6 @@ const linkClass = ({ isActive }: { isActive: boolean }) =>
 export function UserMenu() {
   const { data: session } = useSession();
   const signOut = useSignOut();
-  const navigate = useNavigate();
   const [isOpen, setOpen] = useState(false);
   const menuRef = useRef<HTMLDivElement>(null);
 
@@ -91,14 +90,9 @@ export function UserMenu() {
               role="menuitem"
               type="button"
               className="block w-full px-4 py-2 text-left hover:bg-slate-100"
-              onClick={async () => {
+              onClick={() => {
                 setOpen(false);
-                // mutateAsync, not mutate's callbacks: those are dropped when the signed-in menu unmounts, which
-                // left the sign-in page pointing the next person back at the page the last one had open.
-                await signOut.mutateAsync().then(
-                  () => navigate("/sign-in", { replace: true }),
-                  () => undefined, // the mutation's error state is enough; the person is still signed in
-                );
+                signOut.mutate();
               }}
             >
               Sign out
