@@ -70,7 +70,7 @@ export function SearchFindings({
                 <tr key={f.rank} className="border-t border-slate-100" data-testid="finding-row">
                   <td className="px-3 py-2">{f.rank + 1}</td>
                   <td className="px-3 py-2 text-slate-700">
-                    {plural(f.certificate.target.nodes.length, "node")}:{" "}
+                    {f.certificate.notion.replace(/-/g, " ")} onto {plural(f.certificate.target.nodes.length, "node")}:{" "}
                     {f.certificate.target.nodes.map((n) => n.name).join(", ")}
                   </td>
                   <td className="px-3 py-2">{f.certificate.time}</td>

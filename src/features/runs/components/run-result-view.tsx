@@ -11,6 +11,7 @@ import { oscillatingNodes } from "@/components/state-grid/grid-layout";
 import { StateGrid, type StateGridRow } from "@/components/state-grid/state-grid";
 import { Alert } from "@/components/ui/alert";
 import { downloadCsv, fileNameOf } from "@/lib/download";
+import { plural } from "@/lib/plural";
 import { nothingFoundSentence, runTitle, searchBounds } from "../lib/run-title";
 
 export interface RunResultViewProps {
@@ -113,33 +114,9 @@ function SearchView({
         <div className="space-y-2">
           <p className="text-sm font-medium text-slate-900" data-testid="search-found">
             {result.mode === "discover"
-              ? `Found ${result.distinctTargets} smaller network${result.distinctTargets === 1 ? "" : "s"}` +
-                (result.distinctTargets > result.findings.length
-                  ? `; the ${result.findings.length} best are stored as proposed reductions.`
-                  : ", each stored as a proposed reduction.")
-              : "Found one, stored as a proposed reduction with its certificate."}
+              ? `Found ${plural(result.distinctTargets, "smaller network")}. The findings below say which are in review.`
+              : "Found one, with its certificate. The findings below say whether it is in review."}
           </p>
-          <ul className="list-inside list-disc text-sm" data-testid="search-reductions">
-            {result.findings.map((f, i) => {
-              const id = result.reductionIds[i];
-              const label = `${f.certificate.notion.replace(/-/g, " ")} onto ${f.certificate.target.nodes.length} node${f.certificate.target.nodes.length === 1 ? "" : "s"} (${f.certificate.target.nodes.map((n) => n.name).join(", ")}) at t = ${f.certificate.time}`;
-              return (
-                <li key={i}>
-                  {id ? (
-                    <Link
-                      to={`/projects/${run.projectId}/reductions/${id}`}
-                      className="font-medium text-brand-700 hover:underline"
-                      data-testid="search-reduction-link"
-                    >
-                      {label}
-                    </Link>
-                  ) : (
-                    label
-                  )}
-                </li>
-              );
-            })}
-          </ul>
         </div>
       ) : (
         <p className="text-base font-medium text-slate-900" data-testid="search-nothing">
