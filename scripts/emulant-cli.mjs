@@ -60,7 +60,8 @@ if (!existsSync(out)) {
   }
   for (const entry of readdirSync(bundles)) {
     const path = join(bundles, entry);
-    if (path !== outdir && Date.now() - statSync(path).mtimeMs > STALE_MS) rmSync(path, { recursive: true, force: true });
+    if (path !== outdir && Date.now() - statSync(path).mtimeMs > STALE_MS)
+      rmSync(path, { recursive: true, force: true });
   }
 }
 await import(pathToFileURL(out).href);
