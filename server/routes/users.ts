@@ -7,14 +7,14 @@ import {
   CreatedAccessToken,
   NewAccessTokenBody,
 } from "@shared/schemas/access-tokens";
-import { listAccessTokens, revokeAccessToken } from "../db/repositories/access-tokens";
+import { listAccessTokens } from "../db/repositories/access-tokens";
 import { findUserById, passwordHashOf, updateDisplayName, updatePassword, type User } from "../db/repositories/users";
 import { HttpError } from "../http/errors";
 import { hashPassword, verifyPassword } from "../http/password-hash";
 import { routeGroup, signedIn, type RouteGroup } from "../http/route-group";
 import { endSessionsOf } from "../db/repositories/sessions";
 import { startSession } from "../http/session-store";
-import { createAccessToken } from "../services/access-tokens/access-tokens";
+import { createAccessToken, revokeToken } from "../services/access-tokens/access-tokens";
 
 function profile(u: User): Profile {
   return { id: u.id, email: u.email, displayName: u.displayName, siteRole: u.siteRole, createdAt: u.createdAt };
@@ -87,7 +87,7 @@ export function usersRoutes(deps: { db: Knex; sessionSecret: string }): RouteGro
     params: AccessTokenParams,
     status: 204,
     async handler({ params, user }) {
-      if (!(await revokeAccessToken(deps.db, user.id, params.tokenId)))
+      if (!(await revokeToken(deps.db, user.id, params.tokenId)))
         throw new HttpError(404, "NOT_FOUND", "You have no live token with this id");
     },
   });

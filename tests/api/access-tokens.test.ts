@@ -83,6 +83,24 @@ describe("personal access tokens", () => {
     expect(create.status).toBe(403);
   });
 
+  it("creating and revoking a token is written to the audit log of each project it reaches, and only those", async () => {
+    const p = await personWithProjects();
+    const actions = async (projectId: string) =>
+      ((await p.agent.get(`/api/projects/${projectId}/audit`)).body.data as { action: string; target: string }[])
+        .filter((e) => e.action.startsWith("token."))
+        .map((e) => `${e.action} ${e.target}`);
+    const onlyA = await p.agent
+      .post("/api/users/me/tokens")
+      .send({ name: "only A", scope: "read", expiresInDays: 7, projectIds: [p.projectA] });
+    const everywhere = await p.agent
+      .post("/api/users/me/tokens")
+      .send({ name: "all mine", scope: "write", expiresInDays: 7 });
+    expect((await p.agent.delete(`/api/users/me/tokens/${onlyA.body.data.id}`)).status).toBe(204);
+    expect(everywhere.status).toBe(201);
+    expect(await actions(p.projectA)).toEqual(["token.revoke only A", "token.create all mine", "token.create only A"]);
+    expect(await actions(p.projectB)).toEqual(["token.create all mine"]);
+  });
+
   it("POST /api/users/me/tokens refuses projects the person is not in, naming the field, and bad scopes", async () => {
     const p = await personWithProjects();
     const stranger = await personWithProjects();

@@ -84,13 +84,14 @@ export async function listAccessTokens(db: Knex, userId: string): Promise<Access
   return rows.map(toToken);
 }
 
-/** Revokes one of the user's tokens; false when the user has no such token (or it was revoked already). */
-export async function revokeAccessToken(db: Knex, userId: string, tokenId: string): Promise<boolean> {
-  const n = await db("access_tokens")
+/** Revokes one of the user's tokens; null when the user has no such token (or it was revoked already). */
+export async function revokeAccessToken(db: Knex, userId: string, tokenId: string): Promise<AccessToken | null> {
+  const [row] = (await db("access_tokens")
     .where({ id: tokenId, user_id: userId })
     .whereNull("revoked_at")
-    .update({ revoked_at: db.fn.now() });
-  return n > 0;
+    .update({ revoked_at: db.fn.now() })
+    .returning(columns)) as TokenRow[];
+  return row ? toToken(row) : null;
 }
 
 export interface LiveToken extends AccessToken {

@@ -31,6 +31,9 @@ const verbs: Record<string, (e: AuditEntry) => string> = {
   "reduction.comment": () => "commented on a reduction",
   "reduction.save-target": () => "saved a discovered target as a model",
   "run.start": () => "started a run",
+  "token.create": (e) =>
+    `created the ${String(e.details.scope)} access token "${e.target ?? ""}", which can act in this project`,
+  "token.revoke": (e) => `revoked the access token "${e.target ?? ""}"`,
 };
 
 const isId = (s: string | null) =>
