@@ -1,6 +1,9 @@
-// The front page: what Emulant is, and for a visitor who is not signed in, how to get in.
+// The front page: what Emulant is; for a visitor who is not signed in, how to get in; for someone signed in, their
+// recently changed projects and what waits for them.
 import { Link } from "react-router-dom";
 import { useSession } from "@/features/accounts/api/get-session";
+import { RecentProjects } from "@/features/projects/components/recent-projects";
+import { RecentNotifications } from "@/features/runs";
 
 export function HomeRoute() {
   const session = useSession();
@@ -35,11 +38,10 @@ export function HomeRoute() {
         </div>
       )}
       {user && (
-        <p className="text-sm">
-          <Link to="/projects" className="font-medium text-brand-700 hover:underline">
-            Go to your projects
-          </Link>
-        </p>
+        <div className="grid max-w-5xl gap-6 md:grid-cols-2">
+          <RecentProjects />
+          <RecentNotifications />
+        </div>
       )}
     </section>
   );

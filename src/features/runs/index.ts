@@ -11,6 +11,7 @@ export { useRetryRun } from "./api/retry-run";
 export { useDeleteRun } from "./api/delete-run";
 export { NotificationBell } from "./components/notification-bell";
 export { NotificationSettings } from "./components/notification-settings";
+export { RecentNotifications } from "./components/recent-notifications";
 export { RunActions } from "./components/run-actions";
 export { RunFilters } from "./components/run-filters";
 export { RunProgress } from "./components/run-progress";
