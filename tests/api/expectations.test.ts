@@ -210,6 +210,36 @@ describe("automatic checks and the matrix", () => {
     expect(again.status).toBe(200);
     expect(again.body.data.reused).toBe(true);
   });
+
+  it("the demo bloom switch opens with its matrix filled, and a check run of revision 2 agrees with the seeded results", async () => {
+    const demo = "00000000-0000-4000-8000-000000000001";
+    const bloom = "00000000-0000-4000-8000-000000000301";
+    const path = `/api/projects/${demo}/models/${bloom}/expectations`;
+    const seeded = ExpectationMatrix.parse((await owner.get(`${path}/matrix`)).body.data);
+    expect(seeded.expectations).toHaveLength(9);
+    expect(seeded.cells).toHaveLength(18);
+    const cell = (m: ExpectationMatrix, key: string, revision: number) =>
+      m.cells.find((c) => c.revision === revision && c.expectationId === m.expectations.find((e) => e.key === key)!.id);
+    expect(cell(seeded, "pigment-in-light", 1)).toMatchObject({ status: "undecided", reason: "unknown-node" });
+    expect(cell(seeded, "pigment-in-light", 2)).toMatchObject({ status: "pass" });
+    expect(cell(seeded, "drmk-ko-stays-out-of-cyst", 2)).toMatchObject({ status: "fail", broke: false });
+    expect(seeded.cells.filter((c) => c.status === "pass")).toHaveLength(15);
+
+    const started = await owner.post(`${path}/check`).send({ revision: 2 });
+    expect(started.status, JSON.stringify(started.body)).toBe(200);
+    expect((await finished(started.body.data.runId as string)).state).toBe("succeeded");
+    const checked = ExpectationMatrix.parse((await owner.get(`${path}/matrix`)).body.data);
+    for (const e of seeded.expectations) {
+      const a = cell(seeded, e.key, 2)!;
+      const b = cell(checked, e.key, 2)!;
+      expect(b.runId).not.toBeNull();
+      expect({ status: b.status, method: b.method, detail: b.detail }).toEqual({
+        status: a.status,
+        method: a.method,
+        detail: a.detail,
+      });
+    }
+  });
 });
 
 describe("screen runs", () => {

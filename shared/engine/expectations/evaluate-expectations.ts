@@ -215,7 +215,14 @@ function evaluateOne(
     censuses.set(key, census);
   }
   const o = e.outcome;
-  const patternText = o.kind === "fixed-point-count" || o.kind === "attractor-count" ? "" : formatAssignment(o.pattern);
+  // In the model's node order: a stored expectation's key order is not the author's (JSON columns sort keys), and
+  // the same expectation must read the same whether it was checked in the seed, a run or the CLI.
+  const patternText =
+    o.kind === "fixed-point-count" || o.kind === "attractor-count"
+      ? ""
+      : formatAssignment(
+          Object.fromEntries(Object.entries(o.pattern).sort(([a], [b]) => net.names.indexOf(a) - net.names.indexOf(b))),
+        );
   const judgement = judgeOutcome(o, pattern, census, patternText);
   return { id: e.id, method: census.method, ...judgement };
 }

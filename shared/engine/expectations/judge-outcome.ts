@@ -98,7 +98,9 @@ export function judgeOutcome(
         const detail =
           list.length === 0
             ? `no ${scopeWord} was found`
-            : `none of the ${plural(list.length, scopeWord)} has ${patternText}`;
+            : list.length === 1
+              ? `the only ${scopeWord} does not have ${patternText}`
+              : `none of the ${plural(list.length, scopeWord)} has ${patternText}`;
         return { status: expectsOne ? "fail" : "pass", detail, reason: null, witness: null };
       }
       return undecided(census, `the method cannot tell whether an ${scopeWord} has ${patternText}`);
@@ -116,7 +118,10 @@ export function judgeOutcome(
       if (census.complete && truths.every((t) => t === "yes"))
         return {
           status: "pass",
-          detail: `all ${plural(list.length, "attractor")} have ${patternText}`,
+          detail:
+            list.length === 1
+              ? `the only attractor has ${patternText}`
+              : `all ${plural(list.length, "attractor")} have ${patternText}`,
           reason: null,
           witness: null,
         };
