@@ -172,6 +172,7 @@ export function ExpectationsEditor({
             <span className="font-mono font-medium">{s.expectation.id}</span>
             <span className="text-slate-700">{describe(s)}</span>
             <span className="text-xs italic text-slate-500">— {s.expectation.source}</span>
+            {s.expectation.note && <span className="text-xs text-slate-500">({s.expectation.note})</span>}
             {canWrite && (
               <span className="ml-auto flex gap-1">
                 <Button size="sm" variant="secondary" onClick={() => setDraft(draftOf(s))}>
