@@ -109,7 +109,7 @@ describe("screen heatmap and the model under one perturbation", () => {
     expect(await focusedCell.evaluate((el) => el === document.activeElement)).toBe(true);
     expect(await heatmap.locator('[tabindex="0"]').count()).toBe(1);
     const detail = (await heatmap.getByTestId("heatmap-detail").textContent())!;
-    expect(detail).toMatch(/^Light knocked out, DrmK knocked out: basin share with the phenotype \d+\.\d %/);
+    expect(detail).toMatch(/^Light knocked out, GlfB knocked out: basin share with the phenotype \d+\.\d %/);
     const cellShare = /phenotype (\d+\.\d) %/.exec(detail)![1]!;
     await screenshot(page, "screen-heatmap-focused");
 
@@ -117,7 +117,7 @@ describe("screen heatmap and the model under one perturbation", () => {
     await page.getByTestId("perturbed-comparison").waitFor({ timeout: 60_000 });
     expect(page.url()).toContain("/perturbed?");
     expect(await page.getByTestId("perturbed-title").textContent()).toContain(
-      "with Light knocked out, DrmK knocked out",
+      "with Light knocked out, GlfB knocked out",
     );
     // The browser's own analysis of the perturbed model gives the share the screen run computed on the server.
     const summary = (await page.getByTestId("perturbed-summary").textContent())!;
