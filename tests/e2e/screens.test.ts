@@ -112,6 +112,7 @@ describe("screen heatmap and the model under one perturbation", () => {
     expect(detail).toMatch(/^Light knocked out, GlfB knocked out: basin share with the phenotype \d+\.\d %/);
     const cellShare = /phenotype (\d+\.\d) %/.exec(detail)![1]!;
     await screenshot(page, "screen-heatmap-focused");
+    await heatmap.screenshot({ path: new URL("./screenshots/screen-heatmap-close.png", import.meta.url).pathname });
 
     await page.keyboard.press("Enter");
     await page.getByTestId("perturbed-comparison").waitFor({ timeout: 60_000 });
