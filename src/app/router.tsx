@@ -12,6 +12,7 @@ import { AutomataRuleRoute } from "./routes/automata-rule";
 import { HomeRoute } from "./routes/home";
 import { MailboxRoute } from "./routes/mailbox";
 import { ModelDetailRoute } from "./routes/model-detail";
+import { ModelPerturbedRoute } from "./routes/model-perturbed";
 import { ModelNewRoute } from "./routes/model-new";
 import { NotFoundRoute } from "./routes/not-found";
 import { ProfileRoute } from "./routes/profile";
@@ -65,6 +66,7 @@ export const routes = [
               { path: "models", element: <ProjectModelsRoute /> },
               { path: "models/new", element: <ModelNewRoute /> },
               { path: "models/:modelId", element: <ModelDetailRoute /> },
+              { path: "models/:modelId/perturbed", element: <ModelPerturbedRoute /> },
               { path: "runs", element: <ProjectRunsRoute /> },
               { path: "runs/:runId", element: <RunDetailRoute /> },
               { path: "reductions", element: <ProjectReductionsRoute /> },

@@ -366,6 +366,8 @@ export function ModelDetailRoute() {
         <ScreenPanel
           key={rev.id}
           projectId={projectId}
+          modelId={modelId}
+          revision={rev.revision}
           revisionId={rev.id}
           nodes={nodes}
           fileName={baseName}

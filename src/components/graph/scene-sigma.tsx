@@ -231,7 +231,8 @@ function Behaviours({
     return () => {
       sigma.off("beforeRender", before);
       sigma.off("afterRender", draw);
-      sigma.killLayer(layer);
+      // Leaving the page kills sigma (and with it every layer) before this cleanup runs.
+      if (sigma.getCanvases()[layer]) sigma.killLayer(layer);
     };
   }, [sigma, counts, container]);
 

@@ -1,28 +1,29 @@
 // Perturbation screen of one revision: the person chooses nodes and a phenotype ("X=1, Y=0"), singles or also pairs,
 // and starts a `screen` run; its rows read as a table ranked by the share of the basin that ends in attractors with
-// the phenotype (rows without a share last), with a CSV download of the same table.
+// the phenotype (rows without a share last), with a CSV download of the same table, or as a heatmap. The run and
+// the view are kept in the address (?screen=<run>&screenView=heatmap), so a screen survives a reload and the way back
+// from a perturbation it opened; each row and cell links to the model under its perturbation.
 import { useState } from "react";
+import { Link, useSearchParams } from "react-router-dom";
 import { parseAssignment } from "@shared/engine/expectations";
 import { ScreenRunResult, type ScreenRunRow } from "@shared/schemas/screens";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { RunProgress, useCancelRun, useRun, useStartRun } from "@/features/runs";
 import { downloadCsv } from "@/lib/download";
+import { perturbedViewPath } from "../lib/perturbed-link";
+import { perturbationWords, ScreenHeatmapView } from "./screen-heatmap";
 
 const percent = (x: number | null) => (x === null ? "—" : `${(100 * x).toFixed(1)} %`);
 const signedPercent = (x: number | null) => (x === null ? "—" : `${x > 0 ? "+" : ""}${(100 * x).toFixed(1)} %`);
-
-function perturbationText(p: Readonly<Record<string, 0 | 1>>): string {
-  return Object.entries(p)
-    .map(([n, v]) => `${n} ${v === 0 ? "knocked out" : "over-expressed"}`)
-    .join(", ");
-}
 
 function ranked(rows: readonly ScreenRunRow[]): ScreenRunRow[] {
   return [...rows].sort((a, b) => (b.basinShare ?? -1) - (a.basinShare ?? -1) || a.unit - b.unit);
 }
 
-function ScreenTable({ result, fileName }: { result: ScreenRunResult; fileName: string }) {
+type LinkFor = (perturbation: Readonly<Record<string, 0 | 1>>) => string;
+
+function ScreenTable({ result, fileName, linkFor }: { result: ScreenRunResult; fileName: string; linkFor: LinkFor }) {
   const rows = ranked(result.rows);
   const asynchronous = result.update === "asynchronous";
   const csv = () =>
@@ -55,10 +56,6 @@ function ScreenTable({ result, fileName }: { result: ScreenRunResult; fileName: 
     );
   return (
     <div className="space-y-2" data-testid="screen-result">
-      <p className="text-sm text-slate-700" data-testid="screen-baseline">
-        Unperturbed: {percent(result.baseline.basinShare)} of the states end in {result.counted} with the phenotype (
-        {result.baseline.phenotypeAttractors} of {result.baseline.attractors}). Method: {result.method}.
-      </p>
       <div className="overflow-x-auto">
         <table className="min-w-full text-sm">
           <thead>
@@ -76,7 +73,15 @@ function ScreenTable({ result, fileName }: { result: ScreenRunResult; fileName: 
           <tbody>
             {rows.map((r) => (
               <tr key={r.unit} className="border-t border-slate-100" data-testid="screen-row">
-                <td className="py-1 pr-3">{perturbationText(r.perturbation)}</td>
+                <td className="py-1 pr-3">
+                  <Link
+                    to={linkFor(r.perturbation)}
+                    className="text-brand-700 hover:underline"
+                    title="Open the model under this perturbation, attractors before and after"
+                  >
+                    {perturbationWords(r.perturbation)}
+                  </Link>
+                </td>
                 <td className="px-2 text-right tabular-nums">{percent(r.basinShare)}</td>
                 <td className="px-2 text-right tabular-nums">{signedPercent(r.basinShareChange)}</td>
                 <td className="px-2 text-right tabular-nums">
@@ -102,14 +107,68 @@ function ScreenTable({ result, fileName }: { result: ScreenRunResult; fileName: 
   );
 }
 
+function ScreenResultView({
+  result,
+  fileName,
+  linkFor,
+}: {
+  result: ScreenRunResult;
+  fileName: string;
+  linkFor: LinkFor;
+}) {
+  const [search, setSearch] = useSearchParams();
+  const view = search.get("screenView") === "heatmap" ? "heatmap" : "table";
+  const show = (v: "table" | "heatmap") =>
+    setSearch(
+      (s) => {
+        const next = new URLSearchParams(s);
+        if (v === "heatmap") next.set("screenView", v);
+        else next.delete("screenView");
+        return next;
+      },
+      { replace: true },
+    );
+  const choice = (v: "table" | "heatmap", label: string) => (
+    <button
+      type="button"
+      aria-pressed={view === v}
+      onClick={() => show(v)}
+      className={`rounded-md border px-2.5 py-1 text-xs font-medium ${view === v ? "border-brand-700 bg-brand-700 text-white" : "border-slate-300 text-slate-700 hover:border-brand-600"}`}
+    >
+      {label}
+    </button>
+  );
+  return (
+    <div className="space-y-2">
+      <p className="text-sm text-slate-700" data-testid="screen-baseline">
+        Unperturbed: {percent(result.baseline.basinShare)} of the states end in {result.counted} with the phenotype (
+        {result.baseline.phenotypeAttractors} of {result.baseline.attractors}). Method: {result.method}.
+      </p>
+      <div className="flex gap-1" role="group" aria-label="Screen view">
+        {choice("table", "Table")}
+        {choice("heatmap", "Heatmap")}
+      </div>
+      {view === "table" ? (
+        <ScreenTable result={result} fileName={fileName} linkFor={linkFor} />
+      ) : (
+        <ScreenHeatmapView result={result} linkFor={linkFor} />
+      )}
+    </div>
+  );
+}
+
 export function ScreenPanel({
   projectId,
+  modelId,
+  revision,
   revisionId,
   nodes,
   fileName,
   canStart,
 }: {
   projectId: string;
+  modelId: string;
+  revision: number;
   revisionId: string;
   nodes: readonly string[];
   fileName: string;
@@ -122,10 +181,20 @@ export function ScreenPanel({
   const [pairs, setPairs] = useState(false);
   const [update, setUpdate] = useState<"synchronous" | "asynchronous">("synchronous");
   const [problem, setProblem] = useState<string | null>(null);
-  const [runId, setRunId] = useState<string | null>(null);
+  const [search, setSearch] = useSearchParams();
+  const runId = search.get("screen");
+  const setRunId = (id: string) =>
+    setSearch((s) => {
+      const next = new URLSearchParams(s);
+      next.set("screen", id);
+      next.delete("screenView");
+      return next;
+    });
   const run = useRun(projectId, runId);
-  const state = run.data?.state;
-  const parsed = state === "succeeded" ? ScreenRunResult.safeParse(run.data?.result) : null;
+  // The address may name a run of another kind or revision (an edited link, another revision picked): not shown here.
+  const ours = run.data?.kind === "screen" && run.data.modelRevisionId === revisionId ? run.data : null;
+  const state = ours?.state;
+  const parsed = state === "succeeded" ? ScreenRunResult.safeParse(ours?.result) : null;
 
   const submit = (e: React.FormEvent) => {
     e.preventDefault();
@@ -204,17 +273,27 @@ export function ScreenPanel({
       ) : (
         <p className="text-sm text-slate-600">Ask a modeler or the project owner to start a screen.</p>
       )}
-      {run.data && (state === "queued" || state === "running") && (
+      {ours && (state === "queued" || state === "running") && (
         <div className="space-y-2">
-          <RunProgress run={run.data} label="Screen progress" />
-          <Button variant="secondary" size="sm" disabled={cancel.isPending} onClick={() => cancel.mutate(run.data)}>
+          <RunProgress run={ours} label="Screen progress" />
+          <Button variant="secondary" size="sm" disabled={cancel.isPending} onClick={() => cancel.mutate(ours)}>
             Cancel
           </Button>
         </div>
       )}
-      {run.data?.error && <Alert>{run.data.error.message}</Alert>}
+      {ours?.error && <Alert>{ours.error.message}</Alert>}
+      {run.error && <Alert>The screen named in the address could not be read: {run.error.message}</Alert>}
+      {run.data && !ours && (
+        <p className="text-sm text-slate-600">The screen named in the address is not a screen of this revision.</p>
+      )}
       {state === "cancelled" && <p className="text-sm text-slate-600">The screen was cancelled.</p>}
-      {parsed?.success && <ScreenTable result={parsed.data} fileName={fileName} />}
+      {parsed?.success && (
+        <ScreenResultView
+          result={parsed.data}
+          fileName={fileName}
+          linkFor={(p) => perturbedViewPath(projectId, modelId, revision, p, parsed.data.phenotype, runId)}
+        />
+      )}
       {parsed && !parsed.success && <Alert>The screen's result could not be read.</Alert>}
     </div>
   );
