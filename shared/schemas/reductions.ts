@@ -58,6 +58,10 @@ export const Certificate = z.discriminatedUnion("notion", [
       observables: z
         .array(z.object({ target: nodeName, inputs: z.array(nodeName).max(20), table: bits("an observable's table") }))
         .min(1),
+      /** Sources above 22 nodes: the source nodes each target node's check reads, and how it is decided. */
+      cones: z
+        .array(z.object({ target: nodeName, support: z.array(nodeName), method: z.enum(["table", "sat"]) }))
+        .optional(),
     }),
   }),
 ]);
@@ -256,15 +260,34 @@ export const CoarsestGrouping = z.object({
 });
 export type CoarsestGrouping = z.infer<typeof CoarsestGrouping>;
 
+/**
+ * A coarse-graining of a large source decided by SAT whose observed nodes do not close: two source states (0/1 text
+ * in source node order) equal on the observed nodes, their images after t steps, and the observed nodes on which the
+ * images differ. `nodes` names the source nodes, so the view needs nothing else.
+ */
+export const ClosureCounterexample = z.object({
+  nodes: z.array(z.string()),
+  observe: z.array(z.string()),
+  states: z.tuple([bits("a state"), bits("a state")]),
+  images: z.tuple([bits("a state"), bits("a state")]),
+  differingNodes: z.array(z.string()).min(1),
+});
+export type ClosureCounterexample = z.infer<typeof ClosureCounterexample>;
+
 export const ReductionSearchResult = z.object({
   mode: z.enum(["given-target", "discover", "coarse-grain"]),
   found: z.boolean(),
   findings: z.array(SearchFinding),
   /** Discover: how many distinct targets were found in all (only the best are kept as findings). */
   distinctTargets: z.number().int(),
-  /** Coarse-graining: size of the coarsest compatible refinement of the observables. */
+  /** Coarse-graining: size of the coarsest compatible refinement of the observables (unknown when decided by SAT). */
   groups: z.number().int().nullable(),
   coarsest: CoarsestGrouping.nullable().default(null),
+  /** Coarse-graining: "states" when every source state was tabulated, "sat" for sources above 22 nodes. */
+  method: z.enum(["states", "sat"]).default("states"),
+  counterexample: ClosureCounterexample.nullable().default(null),
+  /** Coarse-graining by SAT: source nodes that can influence the observed ones within t steps. */
+  coneNodes: z.number().int().nullable().default(null),
   bounds: z.record(z.string(), z.unknown()),
   reductionIds: z.array(z.string()).default([]),
   /**

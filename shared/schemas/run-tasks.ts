@@ -16,7 +16,7 @@ import type {
 } from "../engine/emulation";
 import type { ExpectationResult } from "../engine/expectations";
 import type { ScreenShard } from "../engine/screens";
-import { Certificate, CoarsestGrouping, ReductionSearchParams } from "./reductions";
+import { Certificate, ClosureCounterexample, CoarsestGrouping, ReductionSearchParams } from "./reductions";
 
 /** A task's resume point: the position in its shard's units (or items) where the next attempt continues. */
 export const ShardCursor = z.number().int().min(0);
@@ -115,9 +115,12 @@ export const ReductionSearchPartial = z.discriminatedUnion("mode", [
   z.object({
     mode: z.literal("coarse-grain"),
     certificate: Certificate.nullable(),
-    groups: z.number().int(),
+    groups: z.number().int().nullable(),
     closes: z.boolean(),
     coarsest: CoarsestGrouping.nullable().default(null),
+    method: z.enum(["states", "sat"]).default("states"),
+    counterexample: ClosureCounterexample.nullable().default(null),
+    coneNodes: z.number().int().nullable().default(null),
   }),
 ]);
 export type ReductionSearchPartial = z.infer<typeof ReductionSearchPartial>;

@@ -12,12 +12,22 @@ function verification(
 ): Verification {
   return {
     isValid: report.valid,
-    message: report.valid
-      ? `valid: ${report.statesChecked} states re-simulated${occasion}`
-      : report.problems.join("; "),
+    message: report.valid ? `valid: ${checkedWhat(report)}${occasion}` : report.problems.join("; "),
     checkedAt: new Date().toISOString(),
     checkedBy,
   };
+}
+
+function checkedWhat(report: ReturnType<typeof verifyCertificate>): string {
+  if (!report.cones) return `${report.statesChecked} states re-simulated`;
+  const bySat = report.cones.filter((c) => c.method === "sat").length;
+  const byTable = report.cones.length - bySat;
+  return `each observed node's update checked on its cone (${[
+    byTable ? `${byTable} by truth table, ${report.statesChecked} assignments` : "",
+    bySat ? `${bySat} by SAT` : "",
+  ]
+    .filter(Boolean)
+    .join("; ")})`;
 }
 
 /** In the calling thread: for worker tasks and merges, which run off the request thread already. */

@@ -8,11 +8,12 @@ import {
   networkFromCertificate,
   networkToCertificate,
 } from "@shared/engine/certificates";
-import { coarseGrain, nodeObservable } from "@shared/engine/coarse-graining";
+import { coarseGrain, coarseGrainBySat, nodeObservable } from "@shared/engine/coarse-graining";
 import {
   discoverShard,
   discoverUnitCount,
   emulationUnitCount,
+  MAX_TABULATED_NODES,
   mergeDiscoverShards,
   mergeEmulationShards,
   searchBlockEmulation,
@@ -91,12 +92,14 @@ export function searchShard(
   control: SearchControl,
 ): ReductionSearchPartial {
   if (s.mode === "coarse-grain") {
-    const observables = s.observe.map((name) => {
+    const observed = s.observe.map((name) => {
       const i = source.names.indexOf(name);
       if (i < 0) throw new EngineError("BAD_OBSERVABLE", `observe: "${name}" is not a node of the source model`);
-      return nodeObservable(source, i);
+      return i;
     });
+    const observables = observed.map((i) => nodeObservable(source, i));
     const time = s.time ?? 1;
+    if (source.names.length > MAX_TABULATED_NODES) return coarseGrainLargeSource(source, observed, time, control);
     const r = coarseGrain(source, observables, time, control);
     const certificate =
       r.closes && r.target
@@ -112,7 +115,16 @@ export function searchShard(
           label: listed ? Array.from(r.groupLabel) : null,
           ruleText: r.groups <= MAX_QUOTIENT_GROUPS ? printRuleText(networkToDefinition(r.quotient)) : null,
         };
-    return { mode: "coarse-grain", certificate, groups: r.groups, closes: r.closes, coarsest };
+    return {
+      mode: "coarse-grain",
+      certificate,
+      groups: r.groups,
+      closes: r.closes,
+      coarsest,
+      method: "states",
+      counterexample: null,
+      coneNodes: null,
+    };
   }
   if (s.mode === "given-target") {
     if (!target) throw new EngineError("BAD_TARGET", "a given-target search needs a target model");
@@ -139,6 +151,47 @@ export function searchShard(
       ...result,
       targets: result.targets.map((t) => ({ ...t, target: networkToCertificate(t.target), flags: [...t.flags] })),
     },
+  };
+}
+
+/**
+ * Sources too large to tabulate: closure decided by SAT on the cone of the observed nodes. The answer is a
+ * certificate checked cone by cone, or two states the observed nodes cannot tell apart; no grouping is computed.
+ */
+function coarseGrainLargeSource(
+  source: BooleanNetwork,
+  observed: number[],
+  time: number,
+  control: SearchControl,
+): ReductionSearchPartial {
+  const r = coarseGrainBySat(source, observed, time, control);
+  const certificate =
+    r.closes && r.target
+      ? (coarseGrainingCertificate(
+          source,
+          r.target,
+          time,
+          observed.map((i) => nodeObservable(source, i)),
+        ) as SearchFinding["certificate"])
+      : null;
+  const counterexample = r.counterexample
+    ? {
+        nodes: [...source.names],
+        observe: r.observed,
+        states: r.counterexample.states,
+        images: r.counterexample.images,
+        differingNodes: r.counterexample.differingNodes,
+      }
+    : null;
+  return {
+    mode: "coarse-grain",
+    certificate,
+    groups: null,
+    closes: r.closes,
+    coarsest: null,
+    method: "sat",
+    counterexample,
+    coneNodes: r.coneNodes,
   };
 }
 
@@ -170,6 +223,9 @@ function mergeShardsUnflagged(
     reductionIds: [] as string[],
     heldBack: { notListed: 0, flagged: 0, beyondLimit: 0 },
     coarsest: null,
+    method: "states" as const,
+    counterexample: null,
+    coneNodes: null,
   };
   const first = partials[0];
   if (!first) throw new EngineError("BAD_SHARD", "no shard results to merge");
@@ -185,6 +241,9 @@ function mergeShardsUnflagged(
       distinctTargets: findings.length,
       groups: first.groups,
       coarsest: first.coarsest ?? null,
+      method: first.method,
+      counterexample: first.counterexample,
+      coneNodes: first.coneNodes,
     };
   }
   if (first.mode === "embedding") {

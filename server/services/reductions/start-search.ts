@@ -4,6 +4,7 @@
 import { isDeepStrictEqual } from "node:util";
 import type { z } from "zod";
 import { networkToCertificate } from "@shared/engine/certificates";
+import { MAX_SAT_COARSE_GRAINING_NODES } from "@shared/engine/coarse-graining";
 import type { SearchBody } from "@shared/schemas/reductions";
 import type { Run } from "@shared/schemas/runs";
 import { findRevision } from "../../db/repositories/model-revisions";
@@ -16,8 +17,15 @@ type Search = z.output<typeof SearchBody>;
 
 function checkSearch(search: Search, source: RevisionNetwork, target: RevisionNetwork | null): void {
   const n = source.network.names.length;
-  const tabulates =
-    search.mode === "coarse-grain" || (search.mode === "given-target" && search.notion === "dynamical-embedding");
+  // Coarse-graining of a larger source is decided by SAT on the observed nodes' cone (search-plan.ts).
+  const tabulates = search.mode === "given-target" && search.notion === "dynamical-embedding";
+  if (search.mode === "coarse-grain" && n > MAX_SAT_COARSE_GRAINING_NODES) {
+    throw new HttpError(
+      400,
+      "TOO_LARGE",
+      `sourceModelId: "${source.modelName}" has ${n} nodes; coarse-graining by SAT accepts at most ${MAX_SAT_COARSE_GRAINING_NODES}`,
+    );
+  }
   if (tabulates && n > MAX_TABULATED_SOURCE_NODES) {
     throw new HttpError(
       400,
@@ -41,6 +49,10 @@ function checkSearch(search: Search, source: RevisionNetwork, target: RevisionNe
     );
   }
   if (search.mode === "coarse-grain") {
+    if (new Set(search.observe).size !== search.observe.length)
+      throw new HttpError(400, "INVALID_INPUT", "observe: a node is listed twice", [
+        { field: "body.observe", message: "listed twice" },
+      ]);
     const missing = search.observe.filter((name) => !source.network.names.includes(name));
     if (missing.length)
       throw new HttpError(

@@ -3,6 +3,8 @@
 // The notions are those of Ollinger (TCS, 2003) for block emulation and Israeli & Goldenfeld (PRE, 2006) for coarse-graining.
 import { EngineError } from "../errors";
 import { checkNetwork, stateToString, type BooleanNetwork } from "../network";
+import { planCone } from "./cone-check";
+import { MAX_VERIFIED_SOURCE_NODES } from "./verify-certificate";
 
 export const CERTIFICATE_FORMAT = "emulant-reduction";
 export const CERTIFICATE_VERSION = 1;
@@ -43,8 +45,17 @@ export interface CertificateObservable {
   readonly table: string;
 }
 
+/** What the verifier reads to check one target node of a coarse-graining of a large source (docs/certificates.md). */
+export interface CertificateCone {
+  readonly target: string;
+  readonly support: string[];
+  readonly method: "table" | "sat";
+}
+
 export interface CoarseGrainingWitnessJson {
   readonly observables: CertificateObservable[];
+  /** Stated for sources above 22 nodes, whose certificates are checked cone by cone. */
+  readonly cones?: CertificateCone[];
 }
 
 interface CertificateBase {
@@ -145,13 +156,29 @@ export function embeddingCertificate(
   };
 }
 
-/** Certificate for a coarse-graining: observable k defines target node k. */
+/**
+ * Certificate for a coarse-graining: observable k defines target node k. Above MAX_VERIFIED_SOURCE_NODES source
+ * nodes it states the cone each target node is checked on, so the JSON says what its check reads.
+ */
 export function coarseGrainingCertificate(
   source: BooleanNetwork,
   target: BooleanNetwork,
   time: number,
   observables: readonly { readonly inputs: readonly number[]; readonly table: ArrayLike<number> }[],
 ): ReductionCertificate {
+  const obs = observables.map((o) => ({ inputs: [...o.inputs], table: Uint8Array.from(o.table) }));
+  const wordNet = (net: BooleanNetwork) => ({
+    names: net.names,
+    inputs: net.regulators.map((r) => Array.from(r)),
+    tables: net.tables,
+  });
+  const cones =
+    source.names.length > MAX_VERIFIED_SOURCE_NODES
+      ? target.names.map((name, j) => {
+          const plan = planCone(wordNet(source), wordNet(target), obs, j, time);
+          return { target: name, support: plan.support.map((v) => source.names[v]!), method: plan.method };
+        })
+      : null;
   return {
     format: CERTIFICATE_FORMAT,
     version: CERTIFICATE_VERSION,
@@ -165,6 +192,7 @@ export function coarseGrainingCertificate(
         inputs: o.inputs.map((v) => source.names[v]!),
         table: Array.from(o.table, (b) => (b ? "1" : "0")).join(""),
       })),
+      ...(cones ? { cones } : {}),
     },
   };
 }

@@ -12,6 +12,7 @@ export {
   type CertificateNode,
   type CertificateBlock,
   type CertificateObservable,
+  type CertificateCone,
   type BlockEmulationWitnessJson,
   type EmbeddingWitnessJson,
   type CoarseGrainingWitnessJson,

@@ -14,6 +14,7 @@ import {
   tableWord,
   type WordNet,
 } from "./word-simulation";
+import { checkCone, MAX_CONE_CLAUSES, planCone, type ConeObservable } from "./cone-check";
 
 export interface VerificationReport {
   readonly valid: boolean;
@@ -21,11 +22,16 @@ export interface VerificationReport {
   readonly time: number | null;
   /** Why the certificate fails (empty when valid). */
   readonly problems: string[];
-  /** Target (or, for coarse-graining, source) states re-simulated. */
+  /** Target (or, for coarse-graining, source) states re-simulated; for a check by cones, support assignments. */
   readonly statesChecked: number;
+  /**
+   * A coarse-graining of a source above MAX_VERIFIED_SOURCE_NODES is checked target node by target node on the cone
+   * of its observable (cone-check.ts): the source nodes each check read and how it was decided.
+   */
+  readonly cones?: { target: string; support: string[]; method: "table" | "sat" }[];
 }
 
-/** Largest source for which coarse-graining certificates are checked state by state. */
+/** Largest source for which coarse-graining certificates are checked state by state; larger ones by cones. */
 export const MAX_VERIFIED_SOURCE_NODES = 22;
 
 /**
@@ -127,6 +133,7 @@ export function verifyCertificate(input: unknown): VerificationReport {
   let notion: string | null = null;
   let time: number | null = null;
   let statesChecked = 0;
+  let cones: VerificationReport["cones"];
   try {
     if (!isRecord(input)) fail("a certificate must be a JSON object");
     if (input.format !== "emulant-reduction") fail('"format" must be "emulant-reduction"');
@@ -143,12 +150,12 @@ export function verifyCertificate(input: unknown): VerificationReport {
     if (!isRecord(w)) fail('"witness" must be an object');
     const m = G.names.length;
     if (m > 24) fail("targets of more than 24 nodes are not checked");
-    const counter = { add: (k: number) => (statesChecked += k) };
+    const counter: Counter = { add: (k: number) => (statesChecked += k), cones: (c) => (cones = c) };
     if (notion === "block-emulation") checkBlocks(F, G, w, time, counter);
     else if (notion === "dynamical-embedding") checkEmbedding(F, G, w, time, counter);
     else if (notion === "coarse-graining") checkCoarseGraining(F, G, w, time, counter);
     else fail(`unknown notion "${notion}"`);
-    return { valid: true, notion, time, problems: [], statesChecked };
+    return { valid: true, notion, time, problems: [], statesChecked, ...(cones ? { cones } : {}) };
   } catch (e) {
     if (e instanceof Invalid) return { valid: false, notion, time, problems: [e.message], statesChecked };
     throw e;
@@ -157,6 +164,7 @@ export function verifyCertificate(input: unknown): VerificationReport {
 
 interface Counter {
   add(states: number): void;
+  cones(reports: NonNullable<VerificationReport["cones"]>): void;
 }
 
 function checkBlocks(F: Net, G: Net, w: Record<string, unknown>, t: number, counter: Counter): void {
@@ -291,9 +299,6 @@ function checkCoarseGraining(F: Net, G: Net, w: Record<string, unknown>, t: numb
   if (!Array.isArray(w.observables)) fail('a coarse-graining witness needs "observables"');
   const n = F.names.length;
   const m = G.names.length;
-  if (n > MAX_VERIFIED_SOURCE_NODES)
-    fail(`coarse-graining certificates are checked for sources of at most ${MAX_VERIFIED_SOURCE_NODES} nodes`);
-  boundWork(2 ** n, t, n);
   const obs = new Array<{ inputs: number[]; table: Uint8Array } | null>(m).fill(null);
   for (const raw of w.observables as unknown[]) {
     if (!isRecord(raw) || typeof raw.target !== "string") fail("each observable names its target node");
@@ -311,10 +316,19 @@ function checkCoarseGraining(F: Net, G: Net, w: Record<string, unknown>, t: numb
   obs.forEach((o, j) => {
     if (!o) fail(`target node "${G.names[j]}" has no observable`);
   });
+  if (n > MAX_VERIFIED_SOURCE_NODES) checkByCones(F, G, obs as ConeObservable[], w, t, counter);
+  else if (w.cones !== undefined) fail('"cones" are stated only for sources of more than 22 nodes');
+  else checkAllStates(F, G, obs as ConeObservable[], t, counter);
+}
+
+function checkAllStates(F: Net, G: Net, obs: ConeObservable[], t: number, counter: Counter): void {
+  const n = F.names.length;
+  const m = G.names.length;
+  boundWork(2 ** n, t, n);
   const observe = (s: Int32Array, out: Int32Array) => {
-    obs.forEach((o, j) => (out[j] = tableWord(o!.table, o!.inputs, s, scratch)));
+    obs.forEach((o, j) => (out[j] = tableWord(o.table, o.inputs, s, scratch)));
   };
-  const obsNet: WordNet = { inputs: obs.map((o) => o!.inputs), tables: obs.map((o) => o!.table) };
+  const obsNet: WordNet = { inputs: obs.map((o) => o.inputs), tables: obs.map((o) => o.table) };
   const scratch = scratchFor(F, G, obsNet);
   const xs = new Int32Array(n);
   const a = new Int32Array(n);
@@ -339,4 +353,59 @@ function checkCoarseGraining(F: Net, G: Net, w: Record<string, unknown>, t: numb
     }
     counter.add(lanesIn(batch, count));
   }
+}
+
+/**
+ * Sources above MAX_VERIFIED_SOURCE_NODES: each target node's equation is checked on the cone of its observable
+ * (cone-check.ts), every cost bounded before any check runs. The certificate may state each check's support and
+ * method ("cones"); a stated one must be what the verifier computes, so a reader of the JSON sees what was checked.
+ */
+function checkByCones(
+  F: Net,
+  G: Net,
+  obs: ConeObservable[],
+  w: Record<string, unknown>,
+  t: number,
+  counter: Counter,
+): void {
+  if (t > 64) fail("coarse-graining certificates of sources above 22 nodes are checked up to time scale 64");
+  const plans = G.names.map((_, j) => planCone(F, G, obs, j, t));
+  const tableWork = plans.reduce((sum, p) => sum + (p.method === "table" ? p.cost : 0), 0);
+  if (tableWork > MAX_CHECK_WORK)
+    fail(`checking the cones needs ${tableWork} word evaluations; at most ${MAX_CHECK_WORK} are done`);
+  plans.forEach((p, j) => {
+    if (p.method === "sat" && p.cost > MAX_CONE_CLAUSES)
+      fail(
+        `the check of target node "${G.names[j]}" reads ${p.support.length} source nodes and needs ${p.cost} clauses; at most ${MAX_CONE_CLAUSES} are written`,
+      );
+  });
+  const reports = plans.map((p, j) => ({
+    target: G.names[j]!,
+    support: p.support.map((v) => F.names[v]!),
+    method: p.method,
+  }));
+  if (w.cones !== undefined) {
+    if (!Array.isArray(w.cones) || w.cones.length !== G.names.length)
+      fail(`"cones" must list one entry per target node (${G.names.length})`);
+    (w.cones as unknown[]).forEach((raw, j) => {
+      const want = reports[j]!;
+      if (!isRecord(raw) || raw.target !== want.target)
+        fail(`cone ${j + 1} must be that of target node "${want.target}"`);
+      const stated = stringList(raw.support, `cone of "${want.target}" support`);
+      if (stated.length !== want.support.length || stated.some((name, q) => name !== want.support[q]))
+        fail(
+          `cone of "${want.target}": the stated support is not the one its check reads (${want.support.join(", ")})`,
+        );
+      if (raw.method !== want.method) fail(`cone of "${want.target}": the method is "${want.method}"`);
+    });
+  }
+  plans.forEach((p, j) => {
+    const failure = checkCone(F, G, obs, j, t, p);
+    if (failure)
+      fail(
+        `source state ${failure.state}: after ${t} step${t === 1 ? "" : "s"} observable "${failure.target}" is ${failure.got} but the target predicts ${failure.want}`,
+      );
+    counter.add(p.method === "table" ? 2 ** p.support.length : 0);
+  });
+  counter.cones(reports);
 }
