@@ -64,10 +64,29 @@ export const Certificate = z.discriminatedUnion("notion", [
         .optional(),
     }),
   }),
+  z.object({
+    ...base,
+    notion: z.literal("node-elimination"),
+    witness: z.object({ eliminated: z.array(nodeName).min(1) }),
+  }),
+  z.object({
+    ...base,
+    notion: z.literal("constant-percolation"),
+    witness: z.object({
+      held: nodeRecord(nodeName, z.union([z.literal(0), z.literal(1)])),
+      fixed: nodeRecord(nodeName, z.union([z.literal(0), z.literal(1)])),
+    }),
+  }),
 ]);
 export type Certificate = z.infer<typeof Certificate>;
 
-export const ReductionNotion = z.enum(["block-emulation", "dynamical-embedding", "coarse-graining"]);
+export const ReductionNotion = z.enum([
+  "block-emulation",
+  "dynamical-embedding",
+  "coarse-graining",
+  "node-elimination",
+  "constant-percolation",
+]);
 export type ReductionNotion = z.infer<typeof ReductionNotion>;
 export const ReviewState = z.enum(["proposed", "approved", "rejected"]);
 export type ReviewState = z.infer<typeof ReviewState>;

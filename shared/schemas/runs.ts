@@ -22,6 +22,7 @@ export const RUN_KINDS = [
   "async-attractors",
   "expectation-check",
   "screen",
+  "node-elimination",
 ] as const;
 
 /** Demonstration kind: sums a deterministic function over [0, itemCount) in shards, sleeping per item. */
@@ -58,6 +59,33 @@ export const AsyncAttractorsParams = z.object({
 });
 export type AsyncAttractorsParams = z.infer<typeof AsyncAttractorsParams>;
 
+const eliminationNodeName = z.string().trim().min(1).max(120);
+
+/**
+ * Node elimination (shared/engine/elimination): the named nodes in order, every eligible node, or the percolation of
+ * constants with some nodes (typically inputs) held at a value.
+ */
+export const NodeEliminationParams = z.discriminatedUnion("mode", [
+  z.object({
+    mode: z.literal("nodes"),
+    nodes: z
+      .array(eliminationNodeName)
+      .min(1, "choose at least one node to eliminate")
+      .max(10_000)
+      .refine((list) => new Set(list).size === list.length, "a node is named twice"),
+  }),
+  z.object({ mode: z.literal("all-eligible") }),
+  z.object({
+    mode: z.literal("percolate"),
+    hold: z
+      .array(z.object({ node: eliminationNodeName, value: z.union([z.literal(0), z.literal(1)]) }))
+      .max(10_000)
+      .default([])
+      .refine((list) => new Set(list.map((h) => h.node)).size === list.length, "a node is held twice"),
+  }),
+]);
+export type NodeEliminationParams = z.infer<typeof NodeEliminationParams>;
+
 export const StartRunBody = z.discriminatedUnion("kind", [
   z.object({
     kind: z.literal("sleep-count"),
@@ -79,6 +107,7 @@ export const StartRunBody = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("trap-spaces"), modelRevisionId: z.uuid(), params: TrapSpacesParams }),
   z.object({ kind: z.literal("async-attractors"), modelRevisionId: z.uuid(), params: AsyncAttractorsParams }),
   z.object({ kind: z.literal("screen"), modelRevisionId: z.uuid(), params: ScreenParams }),
+  z.object({ kind: z.literal("node-elimination"), modelRevisionId: z.uuid(), params: NodeEliminationParams }),
 ]);
 export type StartRunBody = z.infer<typeof StartRunBody>;
 
