@@ -16,7 +16,7 @@ import type {
 } from "../engine/emulation";
 import type { ExpectationResult } from "../engine/expectations";
 import type { ScreenShard } from "../engine/screens";
-import { NodeEliminationParams } from "./runs";
+import { NodeEliminationParams } from "./elimination";
 import { Certificate, ClosureCounterexample, CoarsestGrouping, ReductionSearchParams } from "./reductions";
 
 /** A task's resume point: the position in its shard's units (or items) where the next attempt continues. */
