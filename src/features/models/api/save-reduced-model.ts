@@ -4,7 +4,7 @@ import { SavedReducedModel } from "@shared/schemas/reductions";
 import { apiRequest } from "@/lib/api-client";
 
 export const saveReducedModel = (projectId: string, body: { runId: string; name: string }) =>
-  apiRequest(`/api/projects/${projectId}/reductions/reduced-models`, SavedReducedModel, { method: "POST", body });
+  apiRequest(`/projects/${projectId}/reductions/reduced-models`, SavedReducedModel, { method: "POST", body });
 
 /** The model lists and the project's reductions (keyed under "reductions", see features/reductions) go stale. */
 export function useSaveReducedModel(projectId: string) {
