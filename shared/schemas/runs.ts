@@ -62,7 +62,6 @@ export const AsyncAttractorsParams = z.object({
 });
 export type AsyncAttractorsParams = z.infer<typeof AsyncAttractorsParams>;
 
-
 export const StartRunBody = z.discriminatedUnion("kind", [
   z.object({
     kind: z.literal("sleep-count"),

@@ -14,7 +14,6 @@ export default shardTask(nodeEliminationTask, ({ input }, ctx): NodeEliminationR
   const source = compileDefinition(readRuleText(input.ruleText));
   const p = input.params;
   const eligible = new Set(eligibleNodes(source));
-  const selfRegulated = source.names.filter((name) => !eligible.has(name));
   const reduced =
     p.mode === "percolate"
       ? (() => {

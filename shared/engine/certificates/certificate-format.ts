@@ -10,11 +10,7 @@ export const CERTIFICATE_FORMAT = "emulant-reduction";
 export const CERTIFICATE_VERSION = 1;
 
 export type ReductionNotion =
-  | "block-emulation"
-  | "dynamical-embedding"
-  | "coarse-graining"
-  | "node-elimination"
-  | "constant-percolation";
+  "block-emulation" | "dynamical-embedding" | "coarse-graining" | "node-elimination" | "constant-percolation";
 
 export interface CertificateNode {
   readonly name: string;

@@ -112,7 +112,9 @@ function compare(
     const got = stated.table[rowOf(stated, value)]!;
     if (want !== got) {
       const at = free.map((u) => `${source.names[u]}=${value(u)}`).join(", ") || "its only row";
-      fail(`target node "${target.names[j]}" gives ${got} at ${at}, but the source with the substitutions gives ${want}`);
+      fail(
+        `target node "${target.names[j]}" gives ${got} at ${at}, but the source with the substitutions gives ${want}`,
+      );
     }
   }
   return rows;
@@ -211,7 +213,7 @@ export function checkPercolation(
     held.has(v) ? { inputs: [], table: Uint8Array.of(held.get(v)!) } : f,
   );
   const confirmed = new Map<number, number>();
-  for (let progress = true; progress; ) {
+  for (let progress = true; progress;) {
     progress = false;
     for (const [v, value] of fixed) {
       if (confirmed.has(v)) continue;

@@ -170,7 +170,8 @@ export function verifyCertificate(input: unknown): VerificationReport {
     else fail(`unknown notion "${notion}"`);
     return { valid: true, notion, time, problems: [], statesChecked, ...(cones ? { cones } : {}) };
   } catch (e) {
-    if (e instanceof Invalid || e instanceof SubstitutionProblem) return { valid: false, notion, time, problems: [e.message], statesChecked };
+    if (e instanceof Invalid || e instanceof SubstitutionProblem)
+      return { valid: false, notion, time, problems: [e.message], statesChecked };
     throw e;
   }
 }
