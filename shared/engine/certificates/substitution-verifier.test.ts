@@ -17,6 +17,7 @@ import {
   type CertificateNetwork,
   type ReductionCertificate,
 } from "./certificate-format";
+import { composeCertificates } from "./compose-certificates";
 import { verifyCertificate } from "./verify-certificate";
 
 const rules = (t: string) => compileDefinition(readRuleText(t));
@@ -159,6 +160,25 @@ describe("node-elimination certificates", () => {
     );
     // The property must have met reorderings that break the certificate, or it checked only one side.
     expect(rejected).toBeGreaterThan(0);
+  });
+
+  it("two eliminations in a row compose into one certificate the verifier accepts", () => {
+    fc.assert(
+      fc.property(cases, (c) => {
+        const { net, r } = elimination(c);
+        if (r.eliminated.length < 2 || r.network.names.length === 0) return;
+        const half = r.eliminated.slice(0, Math.ceil(r.eliminated.length / 2));
+        const middle = eliminateNodes(net, half).network;
+        const rest = r.eliminated.filter((name) => !half.includes(name));
+        const last = eliminateNodes(middle, rest).network;
+        const composed = composeCertificates(
+          eliminationCertificate(net, middle, half),
+          eliminationCertificate(middle, last, rest),
+        );
+        expect(verifyCertificate(composed).problems).toEqual([]);
+      }),
+      { seed: 4105, numRuns: 100 },
+    );
   });
 
   it("the verifier rejects eliminating a node that regulates itself at its turn", () => {
