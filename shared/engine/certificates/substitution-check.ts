@@ -49,18 +49,18 @@ function essential(f: SourceFunction, budget: Budget): SourceFunction {
   budget.spend(f.table.length);
   const keep: number[] = [];
   f.inputs.forEach((_, j) => {
-    const bit = 2 ** j;
+    const bit = 1 << j;
     for (let row = 0; row < f.table.length; row++)
-      if (Math.floor(row / bit) % 2 === 0 && f.table[row] !== f.table[row + bit]) {
+      if ((row & bit) === 0 && f.table[row] !== f.table[row | bit]) {
         keep.push(j);
         return;
       }
   });
   if (keep.length === f.inputs.length) return f;
-  const table = new Uint8Array(2 ** keep.length);
+  const table = new Uint8Array(1 << keep.length);
   for (let row = 0; row < table.length; row++) {
     let full = 0;
-    keep.forEach((j, q) => (full += (Math.floor(row / 2 ** q) % 2) * 2 ** j));
+    for (let q = 0; q < keep.length; q++) full |= ((row >> q) & 1) << keep[q]!;
     table[row] = f.table[full]!;
   }
   return { inputs: keep.map((j) => f.inputs[j]!), table };
@@ -72,13 +72,18 @@ function substitute(f: SourceFunction, v: number, g: SourceFunction, budget: Bud
   for (const u of g.inputs) if (!merged.includes(u)) merged.push(u);
   if (merged.length > MAX_SUBSTITUTION_INPUTS)
     fail(`${what} would read ${merged.length} nodes; at most ${MAX_SUBSTITUTION_INPUTS} are checked`);
-  const position = new Map(merged.map((u, j) => [u, j] as const));
-  const table = new Uint8Array(2 ** merged.length);
+  // Where each input of g and of f sits in a row of the merged table (-1: f's input v, which takes g's value).
+  const gAt = g.inputs.map((u) => merged.indexOf(u));
+  const fAt = f.inputs.map((u) => (u === v ? -1 : merged.indexOf(u)));
+  const table = new Uint8Array(1 << merged.length);
   budget.spend(table.length);
   for (let row = 0; row < table.length; row++) {
-    const value = (u: number) => Math.floor(row / 2 ** position.get(u)!) % 2;
-    const gv = g.table[rowOf(g, value)]!;
-    table[row] = f.table[rowOf(f, (u) => (u === v ? gv : value(u)))]!;
+    let gRow = 0;
+    for (let j = 0; j < gAt.length; j++) gRow |= ((row >> gAt[j]!) & 1) << j;
+    const gv = g.table[gRow]!;
+    let fRow = 0;
+    for (let j = 0; j < fAt.length; j++) fRow |= (fAt[j]! < 0 ? gv : (row >> fAt[j]!) & 1) << j;
+    table[row] = f.table[fRow]!;
   }
   return essential({ inputs: merged, table }, budget);
 }
