@@ -9,6 +9,11 @@ import { shardTask } from "../task-context";
 
 /** The certificate format's largest network (shared/schemas/reductions.ts). */
 const MAX_CERTIFICATE_NODES = 2000;
+/**
+ * Most truth-table rows a stored certificate's reduced network may hold (one character each in the JSON): beyond it
+ * the run's result and the reduction row would carry tens of megabytes, and the verifier would refuse it anyway.
+ */
+const MAX_CERTIFICATE_TABLE_ROWS = 2 ** 24;
 
 export default shardTask(nodeEliminationTask, ({ input }, ctx): NodeEliminationResult => {
   const source = compileDefinition(readRuleText(input.ruleText));
@@ -55,13 +60,16 @@ export default shardTask(nodeEliminationTask, ({ input }, ctx): NodeEliminationR
           };
         })();
   const empty = reduced.network.names.length === 0;
+  const tableRows = reduced.network.tables.reduce((sum, t) => sum + t.length, 0);
   const certificateNote = empty
     ? "Every node was removed, so there is no reduced model to save."
     : reduced.eliminated.length === 0
       ? "No node was removed, so the reduced model is the model itself."
       : source.names.length > MAX_CERTIFICATE_NODES
         ? `Certificates hold networks of at most ${MAX_CERTIFICATE_NODES} nodes; this model has ${source.names.length}.`
-        : null;
+        : tableRows > MAX_CERTIFICATE_TABLE_ROWS
+          ? `The reduced model's truth tables hold ${tableRows} rows; a certificate holds at most ${MAX_CERTIFICATE_TABLE_ROWS}, so it cannot be saved as a reduction.`
+          : null;
   return {
     mode: p.mode,
     nodesBefore: source.names.length,

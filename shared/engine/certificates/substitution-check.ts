@@ -66,24 +66,45 @@ function essential(f: SourceFunction, budget: Budget): SourceFunction {
   return { inputs: keep.map((j) => f.inputs[j]!), table };
 }
 
+/**
+ * For each value x of `width` consecutive row bits starting at bit `from`: the bits of a function's row they set,
+ * where `at[j]` is the row bit that feeds input j.
+ */
+function spread(at: readonly number[], from: number, width: number): Int32Array {
+  const out = new Int32Array(1 << width);
+  for (let x = 0; x < out.length; x++) {
+    let r = 0;
+    for (let j = 0; j < at.length; j++) {
+      const p = at[j]! - from;
+      if (p >= 0 && p < width) r |= ((x >> p) & 1) << j;
+    }
+    out[x] = r;
+  }
+  return out;
+}
+
 /** f with g's function put in place of input v, tabulated row by row over the union of their other inputs. */
 function substitute(f: SourceFunction, v: number, g: SourceFunction, budget: Budget, what: string): SourceFunction {
   const merged = f.inputs.filter((u) => u !== v);
   for (const u of g.inputs) if (!merged.includes(u)) merged.push(u);
   if (merged.length > MAX_SUBSTITUTION_INPUTS)
     fail(`${what} would read ${merged.length} nodes; at most ${MAX_SUBSTITUTION_INPUTS} are checked`);
-  // Where each input of g and of f sits in a row of the merged table (-1: f's input v, which takes g's value).
+  // Where each input of g and of f sits in a row of the merged table (-1: f's input v, which takes g's value). A row's
+  // bits go to g's and f's rows bit by bit, so each half of the row is looked up in a table made once.
   const gAt = g.inputs.map((u) => merged.indexOf(u));
   const fAt = f.inputs.map((u) => (u === v ? -1 : merged.indexOf(u)));
+  const vBit = 1 << fAt.indexOf(-1);
+  const low = merged.length >> 1;
+  const lowMask = (1 << low) - 1;
+  const [gLow, gHigh] = [spread(gAt, 0, low), spread(gAt, low, merged.length - low)];
+  const [fLow, fHigh] = [spread(fAt, 0, low), spread(fAt, low, merged.length - low)];
   const table = new Uint8Array(1 << merged.length);
   budget.spend(table.length);
   for (let row = 0; row < table.length; row++) {
-    let gRow = 0;
-    for (let j = 0; j < gAt.length; j++) gRow |= ((row >> gAt[j]!) & 1) << j;
-    const gv = g.table[gRow]!;
-    let fRow = 0;
-    for (let j = 0; j < fAt.length; j++) fRow |= (fAt[j]! < 0 ? gv : (row >> fAt[j]!) & 1) << j;
-    table[row] = f.table[fRow]!;
+    const lo = row & lowMask;
+    const hi = row >> low;
+    const gv = g.table[gLow[lo]! | gHigh[hi]!]!;
+    table[row] = f.table[fLow[lo]! | fHigh[hi]! | (gv ? vBit : 0)]!;
   }
   return essential({ inputs: merged, table }, budget);
 }
@@ -108,15 +129,24 @@ function compare(
   for (const u of derived.inputs) if (fixedValue(u) === undefined && !free.includes(u)) free.push(u);
   if (free.length > MAX_SUBSTITUTION_INPUTS)
     fail(`target node "${target.names[j]}" is compared on ${free.length} inputs; at most 20 are checked`);
-  const position = new Map(free.map((u, q) => [u, q] as const));
   const rows = 2 ** free.length;
   budget.spend(rows);
+  // Row bits to the two functions' rows, half a row at a time; fixed nodes feed derived's row a constant.
+  const statedAt = stated.inputs.map((u) => free.indexOf(u));
+  const derivedAt = derived.inputs.map((u) => (fixedValue(u) === undefined ? free.indexOf(u) : -1));
+  let derivedFixed = 0;
+  derived.inputs.forEach((u, q) => (derivedFixed |= (fixedValue(u) ?? 0) << q));
+  const low = free.length >> 1;
+  const lowMask = (1 << low) - 1;
+  const [sLow, sHigh] = [spread(statedAt, 0, low), spread(statedAt, low, free.length - low)];
+  const [dLow, dHigh] = [spread(derivedAt, 0, low), spread(derivedAt, low, free.length - low)];
   for (let row = 0; row < rows; row++) {
-    const value = (u: number) => fixedValue(u) ?? Math.floor(row / 2 ** position.get(u)!) % 2;
-    const want = derived.table[rowOf(derived, value)]!;
-    const got = stated.table[rowOf(stated, value)]!;
+    const lo = row & lowMask;
+    const hi = row >> low;
+    const want = derived.table[dLow[lo]! | dHigh[hi]! | derivedFixed]!;
+    const got = stated.table[sLow[lo]! | sHigh[hi]!]!;
     if (want !== got) {
-      const at = free.map((u) => `${source.names[u]}=${value(u)}`).join(", ") || "its only row";
+      const at = free.map((u, q) => `${source.names[u]}=${(row >> q) & 1}`).join(", ") || "its only row";
       fail(
         `target node "${target.names[j]}" gives ${got} at ${at}, but the source with the substitutions gives ${want}`,
       );
