@@ -15,6 +15,8 @@ import {
   ReductionListQuery,
   ReductionParams,
   ProposeFindingBody,
+  SaveReducedModelBody,
+  SavedReducedModel,
   SaveTargetBody,
   SearchBody,
 } from "@shared/schemas/reductions";
@@ -31,6 +33,7 @@ import {
   reductionOf,
   reverifyReduction,
 } from "../services/reductions/review";
+import { saveReducedModel } from "../services/reductions/save-reduced-model";
 import { saveTargetAsModel } from "../services/reductions/save-target";
 import { startSearch } from "../services/reductions/start-search";
 import { uploadCertificate } from "../services/reductions/upload-certificate";
@@ -96,6 +99,21 @@ export function reductionsRoutes(deps: {
       if (isNew && notify)
         await notifyReviewWaiting(notify, project.id, user.id, 1, `${user.displayName} proposed a search finding.`);
       return reply(isNew ? 201 : 200, reduction);
+    },
+  });
+
+  routes.post("/reduced-models", {
+    summary: "Save a node-elimination run's reduced network as a new model, proposed as a reduction of its source",
+    access: project("model:write"),
+    params: ProjectParams,
+    body: SaveReducedModelBody,
+    response: SavedReducedModel,
+    status: 201,
+    async handler({ body, project, user }) {
+      const saved = await saveReducedModel(db, { projectId: project.id, user }, body);
+      if (notify)
+        await notifyReviewWaiting(notify, project.id, user.id, 1, `${user.displayName} saved a reduced model.`);
+      return reply(201, saved);
     },
   });
 

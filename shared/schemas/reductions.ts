@@ -64,10 +64,29 @@ export const Certificate = z.discriminatedUnion("notion", [
         .optional(),
     }),
   }),
+  z.object({
+    ...base,
+    notion: z.literal("node-elimination"),
+    witness: z.object({ eliminated: z.array(nodeName).min(1) }),
+  }),
+  z.object({
+    ...base,
+    notion: z.literal("constant-percolation"),
+    witness: z.object({
+      held: nodeRecord(nodeName, z.union([z.literal(0), z.literal(1)])),
+      fixed: nodeRecord(nodeName, z.union([z.literal(0), z.literal(1)])),
+    }),
+  }),
 ]);
 export type Certificate = z.infer<typeof Certificate>;
 
-export const ReductionNotion = z.enum(["block-emulation", "dynamical-embedding", "coarse-graining"]);
+export const ReductionNotion = z.enum([
+  "block-emulation",
+  "dynamical-embedding",
+  "coarse-graining",
+  "node-elimination",
+  "constant-percolation",
+]);
 export type ReductionNotion = z.infer<typeof ReductionNotion>;
 export const ReviewState = z.enum(["proposed", "approved", "rejected"]);
 export type ReviewState = z.infer<typeof ReviewState>;
@@ -134,6 +153,8 @@ export const ReductionDetail = ReductionSummary.extend({
   comments: z.array(ReductionComment),
 });
 export type ReductionDetail = z.infer<typeof ReductionDetail>;
+export const SavedReducedModel = z.object({ modelId: z.string(), reduction: ReductionDetail });
+export type SavedReducedModel = z.infer<typeof SavedReducedModel>;
 
 export const ReductionParams = z.object({ projectId: z.uuid(), reductionId: z.uuid() });
 /** Flags a reviewer may filter by; "none" keeps the unflagged reductions. */
@@ -179,6 +200,9 @@ export const CommentBody = z.object({
 });
 export type CommentBody = z.input<typeof CommentBody>;
 export const SaveTargetBody = z.object({ name: z.string().trim().min(1).max(120) });
+/** Save a node-elimination run's reduced network as a new model, linked to its source by a proposed reduction. */
+export const SaveReducedModelBody = z.object({ runId: z.uuid(), name: z.string().trim().min(1).max(120) });
+export type SaveReducedModelBody = z.input<typeof SaveReducedModelBody>;
 
 /** Bounds of a reduction search, validated before a run is queued. */
 export const SearchBody = z.discriminatedUnion("mode", [

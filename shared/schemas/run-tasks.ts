@@ -16,6 +16,7 @@ import type {
 } from "../engine/emulation";
 import type { ExpectationResult } from "../engine/expectations";
 import type { ScreenShard } from "../engine/screens";
+import { NodeEliminationParams } from "./elimination";
 import { Certificate, ClosureCounterexample, CoarsestGrouping, ReductionSearchParams } from "./reductions";
 
 /** A task's resume point: the position in its shard's units (or items) where the next attempt continues. */
@@ -252,3 +253,34 @@ export const ScreenTaskPartial = z.object({
 });
 export type ScreenTaskPartial = z.infer<typeof ScreenTaskPartial>;
 export const screenTask = { input: ScreenTaskShard, partial: ScreenTaskPartial } satisfies ShardTaskSchemas;
+
+// --- node-elimination: a reduced model by node elimination or percolation of constants, in one shard ---
+
+export const NodeEliminationShard = z.object({ ruleText: z.string().min(1), params: NodeEliminationParams });
+export type NodeEliminationShard = z.infer<typeof NodeEliminationShard>;
+/** Also the run's result. */
+export const NodeEliminationResult = z.object({
+  mode: z.enum(["nodes", "all-eligible", "percolate"]),
+  nodesBefore: z.number().int(),
+  nodesAfter: z.number().int(),
+  /** In the order they were removed (node order for percolation). */
+  eliminated: z.array(z.string()),
+  kept: z.array(z.string()),
+  /** Nodes left in, with why: self-regulation, or an elimination that would break the regulator limit. */
+  notEliminated: z.array(z.object({ node: z.string(), reason: z.string() })),
+  /** Percolation: the value of each fixed node (held ones included); empty for elimination. */
+  fixed: z.array(z.object({ node: z.string(), value: z.union([z.literal(0), z.literal(1)]) })),
+  held: z.array(z.object({ node: z.string(), value: z.union([z.literal(0), z.literal(1)]) })),
+  /** The reduced model; empty when every node was eliminated or fixed. */
+  ruleText: z.string(),
+  preserves: z.string(),
+  /** The re-verifiable statement, or null when the model is beyond the certificate format's size. */
+  certificate: Certificate.nullable(),
+  /** Why there is no certificate (or no model to save). */
+  certificateNote: z.string().nullable(),
+});
+export type NodeEliminationResult = z.infer<typeof NodeEliminationResult>;
+export const nodeEliminationTask = {
+  input: NodeEliminationShard,
+  partial: NodeEliminationResult,
+} satisfies ShardTaskSchemas;

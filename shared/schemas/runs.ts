@@ -1,8 +1,11 @@
 // Runs as the API and the client see them, plus the parameters each run kind accepts.
 import { z } from "zod";
 import { HierarchyRunParameters } from "./automata";
+import { NodeEliminationParams } from "./elimination";
 import { ReductionSearchParams } from "./reductions";
 import { ScreenParams } from "./screens";
+
+export { NodeEliminationParams };
 
 export const RUN_STATES = ["queued", "running", "succeeded", "failed", "cancelled"] as const;
 export const RunState = z.enum(RUN_STATES);
@@ -22,6 +25,7 @@ export const RUN_KINDS = [
   "async-attractors",
   "expectation-check",
   "screen",
+  "node-elimination",
 ] as const;
 
 /** Demonstration kind: sums a deterministic function over [0, itemCount) in shards, sleeping per item. */
@@ -79,6 +83,7 @@ export const StartRunBody = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("trap-spaces"), modelRevisionId: z.uuid(), params: TrapSpacesParams }),
   z.object({ kind: z.literal("async-attractors"), modelRevisionId: z.uuid(), params: AsyncAttractorsParams }),
   z.object({ kind: z.literal("screen"), modelRevisionId: z.uuid(), params: ScreenParams }),
+  z.object({ kind: z.literal("node-elimination"), modelRevisionId: z.uuid(), params: NodeEliminationParams }),
 ]);
 export type StartRunBody = z.infer<typeof StartRunBody>;
 

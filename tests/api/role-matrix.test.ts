@@ -12,7 +12,10 @@ import { routeRegistry } from "../../server/http/route-registry";
 import { sessionCookieFor } from "../support/sessions";
 import { insertReduction } from "../../server/db/repositories/reductions";
 import { statementKey } from "../../server/services/reductions/statement-key";
-import { blockEmulationCertificate } from "@shared/engine/certificates";
+import { blockEmulationCertificate, eliminationCertificate } from "@shared/engine/certificates";
+import { eliminateNodes } from "@shared/engine/elimination";
+import { printRuleText, networkToDefinition } from "@shared/engine/rules";
+import type { NodeEliminationResult } from "@shared/schemas/run-tasks";
 import { compileDefinition, readRuleText } from "@shared/engine/rules";
 import type { Certificate } from "@shared/schemas/reductions";
 import { buildTestApp, testConfig } from "../support/test-app";
@@ -54,6 +57,8 @@ interface Fixture {
   /** A queued run (read, cancel, delete) and a failed one (retry). */
   runId: string;
   failedRunId: string;
+  /** A succeeded node-elimination run of the model (A eliminated), whose reduced model can be saved. */
+  eliminationRunId: string;
   /** A two-node model with one revision that was uploaded from a file. */
   modelId: string;
   /** An expectation of that model. */
@@ -357,6 +362,12 @@ const rows: Row[] = [
   },
   {
     method: "post",
+    path: "/api/projects/{projectId}/reductions/reduced-models",
+    body: (f) => ({ runId: f.eliminationRunId, name: "Matrix reduced" }),
+    expected: [401, 404, 403, 403, 201, 201, 201],
+  },
+  {
+    method: "post",
     path: "/api/projects/{projectId}/reductions/decisions",
     body: (f) => ({ decision: "approve", reductionIds: [f.reductionId] }),
     expected: [401, 404, 403, 200, 403, 200, 200],
@@ -511,6 +522,7 @@ async function makeFixture(): Promise<Fixture> {
     .returning("id");
   const modelId = await insertMatrixModel(projectId);
   const { reductionId, certificate } = await insertMatrixReduction(projectId, modelId);
+  const eliminationRunId = await insertEliminationRun(projectId, modelId);
   const [expectation] = await t
     .db("expectations")
     .insert({
@@ -532,6 +544,7 @@ async function makeFixture(): Promise<Fixture> {
     certificate,
     runId: (queuedRun as { id: string }).id,
     failedRunId: (failedRun as { id: string }).id,
+    eliminationRunId,
     projectId,
     projectName,
     targetUserId,
@@ -610,6 +623,45 @@ async function insertMatrixReduction(
     foundInRunId: null,
   });
   return { reductionId: stored.id, certificate };
+}
+
+/** A finished node-elimination run of the toggle: eliminating A leaves B' = B (the result the worker would store). */
+async function insertEliminationRun(projectId: string, modelId: string): Promise<string> {
+  const revision = (await t
+    .db("model_revisions")
+    .where({ model_id: modelId, revision: 1 })
+    .first("id", "rule_text")) as { id: string; rule_text: string };
+  const net = compileDefinition(readRuleText(revision.rule_text));
+  const reduced = eliminateNodes(net, ["A"]);
+  const result: NodeEliminationResult = {
+    mode: "nodes",
+    nodesBefore: 2,
+    nodesAfter: 1,
+    eliminated: reduced.eliminated,
+    kept: [...reduced.network.names],
+    notEliminated: [{ node: "B", reason: "regulates itself" }],
+    fixed: [],
+    held: [],
+    ruleText: printRuleText(networkToDefinition(reduced.network)),
+    preserves: reduced.preserves,
+    certificate: eliminationCertificate(net, reduced.network, reduced.eliminated) as Certificate,
+    certificateNote: null,
+  };
+  const [run] = await t
+    .db("runs")
+    .insert({
+      project_id: projectId,
+      model_revision_id: revision.id,
+      kind: "node-elimination",
+      params: JSON.stringify({ mode: "nodes", nodes: ["A"] }),
+      params_hash: "matrix-elimination",
+      time_limit_seconds: 60,
+      shard_count: 0,
+      state: "succeeded",
+      result: JSON.stringify(result),
+    })
+    .returning("id");
+  return (run as { id: string }).id;
 }
 
 beforeAll(async () => {

@@ -19,6 +19,10 @@ export function run(args: string[]): Promise<number> {
     }
     const report = verifyCertificate(certificate);
     if (values.json) process.stdout.write(JSON.stringify(report) + "\n");
+    else if (report.valid && (report.notion === "node-elimination" || report.notion === "constant-percolation"))
+      process.stdout.write(
+        `valid ${report.notion} certificate: ${report.statesChecked} truth-table rows re-derived and compared\n`,
+      );
     else if (report.valid)
       process.stdout.write(
         `valid ${report.notion} certificate, time scale ${report.time}: ${report.statesChecked} states re-simulated\n`,

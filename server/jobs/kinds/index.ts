@@ -4,6 +4,7 @@ import { asyncAttractorsKind } from "./async-attractors";
 import { attractorsKind } from "./attractors";
 import { ecaHierarchyKind } from "./eca-hierarchy";
 import { expectationCheckKind } from "./expectation-check";
+import { nodeEliminationKind } from "./node-elimination";
 import { reductionSearchKind } from "./reduction-search";
 import { satCyclesKind } from "./sat-cycles";
 import { screenKind } from "./screen";
@@ -20,6 +21,7 @@ const all: RunKindDefinition[] = [
   asyncAttractorsKind,
   expectationCheckKind,
   screenKind,
+  nodeEliminationKind,
 ];
 const kinds = new Map(all.map((k) => [k.kind, k]));
 

@@ -9,7 +9,8 @@ import { MAX_VERIFIED_SOURCE_NODES } from "./verify-certificate";
 export const CERTIFICATE_FORMAT = "emulant-reduction";
 export const CERTIFICATE_VERSION = 1;
 
-export type ReductionNotion = "block-emulation" | "dynamical-embedding" | "coarse-graining";
+export type ReductionNotion =
+  "block-emulation" | "dynamical-embedding" | "coarse-graining" | "node-elimination" | "constant-percolation";
 
 export interface CertificateNode {
   readonly name: string;
@@ -58,6 +59,18 @@ export interface CoarseGrainingWitnessJson {
   readonly cones?: CertificateCone[];
 }
 
+export interface NodeEliminationWitnessJson {
+  /** Source nodes in the order they were substituted away. */
+  readonly eliminated: string[];
+}
+
+export interface PercolationWitnessJson {
+  /** Source nodes held at a value by the caller (their rules replaced by the constant). */
+  readonly held: Record<string, 0 | 1>;
+  /** Every removed node with its forced value, held ones included. */
+  readonly fixed: Record<string, 0 | 1>;
+}
+
 interface CertificateBase {
   readonly format: typeof CERTIFICATE_FORMAT;
   readonly version: typeof CERTIFICATE_VERSION;
@@ -69,7 +82,9 @@ interface CertificateBase {
 export type ReductionCertificate =
   | (CertificateBase & { readonly notion: "block-emulation"; readonly witness: BlockEmulationWitnessJson })
   | (CertificateBase & { readonly notion: "dynamical-embedding"; readonly witness: EmbeddingWitnessJson })
-  | (CertificateBase & { readonly notion: "coarse-graining"; readonly witness: CoarseGrainingWitnessJson });
+  | (CertificateBase & { readonly notion: "coarse-graining"; readonly witness: CoarseGrainingWitnessJson })
+  | (CertificateBase & { readonly notion: "node-elimination"; readonly witness: NodeEliminationWitnessJson })
+  | (CertificateBase & { readonly notion: "constant-percolation"; readonly witness: PercolationWitnessJson });
 
 export function networkToCertificate(net: BooleanNetwork): CertificateNetwork {
   return {
@@ -194,5 +209,43 @@ export function coarseGrainingCertificate(
       })),
       ...(cones ? { cones } : {}),
     },
+  };
+}
+
+/**
+ * Certificate for node elimination: the reduced network's functions are those of the source with the eliminated
+ * nodes substituted in the order listed. The statement is about fixed points, so the time scale is 1.
+ */
+export function eliminationCertificate(
+  source: BooleanNetwork,
+  target: BooleanNetwork,
+  eliminated: readonly string[],
+): ReductionCertificate {
+  return {
+    format: CERTIFICATE_FORMAT,
+    version: CERTIFICATE_VERSION,
+    notion: "node-elimination",
+    time: 1,
+    source: networkToCertificate(source),
+    target: networkToCertificate(target),
+    witness: { eliminated: [...eliminated] },
+  };
+}
+
+/** Certificate for the percolation of constants, with the nodes the caller held and every node fixed. */
+export function percolationCertificate(
+  source: BooleanNetwork,
+  target: BooleanNetwork,
+  held: Record<string, 0 | 1>,
+  fixed: Record<string, 0 | 1>,
+): ReductionCertificate {
+  return {
+    format: CERTIFICATE_FORMAT,
+    version: CERTIFICATE_VERSION,
+    notion: "constant-percolation",
+    time: 1,
+    source: networkToCertificate(source),
+    target: networkToCertificate(target),
+    witness: { held: { ...held }, fixed: { ...fixed } },
   };
 }

@@ -78,6 +78,25 @@ export function composeCertificates(first: ReductionCertificate, second: Reducti
       witness: { observables: composeObservables(first, second.witness.observables) },
     };
   }
+  // Substitutions in a row are one substitution: the second continues where the first stopped.
+  if (first.notion === "node-elimination" && second.notion === "node-elimination")
+    return {
+      ...base,
+      notion: "node-elimination",
+      witness: { eliminated: [...first.witness.eliminated, ...second.witness.eliminated] },
+    };
+  if (first.notion === "constant-percolation" && second.notion === "constant-percolation")
+    return {
+      ...base,
+      notion: "constant-percolation",
+      witness: {
+        held: { ...first.witness.held, ...second.witness.held },
+        fixed: { ...first.witness.fixed, ...second.witness.fixed },
+      },
+    };
+  for (const notion of ["node-elimination", "constant-percolation"] as const)
+    if (first.notion === notion || second.notion === notion)
+      throw new EngineError("NOT_COMPOSABLE", `a ${notion} composes only with another ${notion}`);
   if (first.notion === "coarse-graining" || second.notion === "coarse-graining") {
     throw new EngineError("NOT_COMPOSABLE", "a coarse-graining composes only with another coarse-graining");
   }

@@ -6,6 +6,8 @@ export {
   blockEmulationCertificate,
   embeddingCertificate,
   coarseGrainingCertificate,
+  eliminationCertificate,
+  percolationCertificate,
   type ReductionNotion,
   type ReductionCertificate,
   type CertificateNetwork,
@@ -16,6 +18,8 @@ export {
   type BlockEmulationWitnessJson,
   type EmbeddingWitnessJson,
   type CoarseGrainingWitnessJson,
+  type NodeEliminationWitnessJson,
+  type PercolationWitnessJson,
 } from "./certificate-format";
 export {
   verifyCertificate,

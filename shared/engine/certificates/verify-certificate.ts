@@ -15,6 +15,7 @@ import {
   type WordNet,
 } from "./word-simulation";
 import { checkCone, MAX_CONE_CLAUSES, planCone, type ConeObservable } from "./cone-check";
+import { checkNodeElimination, checkPercolation, SubstitutionProblem } from "./substitution-check";
 
 export interface VerificationReport {
   readonly valid: boolean;
@@ -22,7 +23,10 @@ export interface VerificationReport {
   readonly time: number | null;
   /** Why the certificate fails (empty when valid). */
   readonly problems: string[];
-  /** Target (or, for coarse-graining, source) states re-simulated; for a check by cones, support assignments. */
+  /**
+   * Target (or, for coarse-graining, source) states re-simulated; for a check by cones, support assignments; for
+   * node elimination and percolation, truth-table rows compared with the target.
+   */
   readonly statesChecked: number;
   /**
    * A coarse-graining of a source above MAX_VERIFIED_SOURCE_NODES is checked target node by target node on the cone
@@ -148,6 +152,15 @@ export function verifyCertificate(input: unknown): VerificationReport {
     const G = readNet(input.target, "target");
     const w = input.witness;
     if (!isRecord(w)) fail('"witness" must be an object');
+    if (notion === "node-elimination" || notion === "constant-percolation") {
+      // Statements about fixed points and attractors, not about t steps: checked function by function, at any size.
+      if (time !== 1) fail(`"time" of a ${notion} certificate must be 1`);
+      statesChecked =
+        notion === "node-elimination"
+          ? checkNodeElimination(F, G, stringList(w.eliminated, "the eliminated nodes"))
+          : checkPercolation(F, G, w.held, w.fixed);
+      return { valid: true, notion, time, problems: [], statesChecked };
+    }
     const m = G.names.length;
     if (m > 24) fail("targets of more than 24 nodes are not checked");
     const counter: Counter = { add: (k: number) => (statesChecked += k), cones: (c) => (cones = c) };
@@ -157,7 +170,8 @@ export function verifyCertificate(input: unknown): VerificationReport {
     else fail(`unknown notion "${notion}"`);
     return { valid: true, notion, time, problems: [], statesChecked, ...(cones ? { cones } : {}) };
   } catch (e) {
-    if (e instanceof Invalid) return { valid: false, notion, time, problems: [e.message], statesChecked };
+    if (e instanceof Invalid || e instanceof SubstitutionProblem)
+      return { valid: false, notion, time, problems: [e.message], statesChecked };
     throw e;
   }
 }

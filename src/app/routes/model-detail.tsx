@@ -15,6 +15,7 @@ import { useRevisionList } from "@/features/models/api/list-revisions";
 import { AttractorRunPanel } from "@/features/models/components/attractor-run-panel";
 import { AttractorStates } from "@/features/models/components/attractor-states";
 import { AnalysisNextStep } from "@/features/models/components/analysis-next-step";
+import { EliminationPanel } from "@/features/models/components/elimination-panel";
 import { AttractorTable } from "@/features/models/components/attractor-table";
 import { BasinChart } from "@/features/models/components/basin-chart";
 import { Downloads } from "@/features/models/components/downloads";
@@ -312,6 +313,20 @@ export function ModelDetailRoute() {
           nodeCount={rev.nodeCount}
           fileBase={baseName}
           canStart={can(project.role, project.siteRole, "run:start")}
+        />
+      </Section>
+
+      <Section title="Reduce by elimination: fewer nodes, same fixed points" testId="elimination-section">
+        <EliminationPanel
+          key={rev.id}
+          projectId={projectId}
+          revisionId={rev.id}
+          modelName={model.name}
+          nodes={nodes}
+          structure={structure.data}
+          fileBase={baseName}
+          canStart={can(project.role, project.siteRole, "run:start")}
+          canSave={canWrite}
         />
       </Section>
 

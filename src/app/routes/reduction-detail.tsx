@@ -15,6 +15,8 @@ const notionText = {
   "block-emulation": "emulates",
   "dynamical-embedding": "embeds",
   "coarse-graining": "coarse-grains onto",
+  "node-elimination": "reduces by node elimination to",
+  "constant-percolation": "reduces by percolation of constants to",
 } as const;
 
 export function ReductionDetailRoute() {
@@ -23,6 +25,7 @@ export function ReductionDetailRoute() {
   const { data: r, error, isPending } = useReduction(projectId, reductionId);
   if (isPending) return <p className="text-sm text-slate-500">Loading the reduction…</p>;
   if (error || !r) return <Alert>{error?.message ?? "No such reduction"}</Alert>;
+  const isSubstitution = r.notion === "node-elimination" || r.notion === "constant-percolation";
   const targetLabel = r.target
     ? `${r.target.modelName} (revision ${r.target.revision})`
     : `a ${r.targetNodeCount}-node network (${r.targetNames.join(", ")})`;
@@ -52,13 +55,16 @@ export function ReductionDetailRoute() {
       )}
       <ReductionDiagrams certificate={r.certificate} />
       <section className="space-y-2">
-        <h3 className="font-semibold text-slate-800">Encoding</h3>
+        <h3 className="font-semibold text-slate-800">{isSubstitution ? "What was removed" : "Encoding"}</h3>
         <CodewordTable certificate={r.certificate} />
       </section>
-      <section className="space-y-2">
-        <h3 className="font-semibold text-slate-800">Runs side by side</h3>
-        <PairedTrajectories certificate={r.certificate} />
-      </section>
+      {/* Elimination and percolation state which attractors correspond, not a step-by-step simulation. */}
+      {!isSubstitution && (
+        <section className="space-y-2">
+          <h3 className="font-semibold text-slate-800">Runs side by side</h3>
+          <PairedTrajectories certificate={r.certificate} />
+        </section>
+      )}
       <p>
         <a
           href={`/api/projects/${projectId}/reductions/${r.id}/certificate`}

@@ -5,7 +5,7 @@ import { useState } from "react";
 import { isRunFinished, type Run, type StartRunBody } from "@shared/schemas/runs";
 import { useCancelRun, useRun, useRunList, useStartRun } from "@/features/runs";
 
-type AnalysisKind = "sat-cycles" | "trap-spaces" | "async-attractors";
+type AnalysisKind = "sat-cycles" | "trap-spaces" | "async-attractors" | "node-elimination";
 type ParamsOf<K extends AnalysisKind> = Extract<StartRunBody, { kind: K }>["params"];
 
 export function useAnalysisRun<K extends AnalysisKind>(projectId: string, revisionId: string, kind: K) {

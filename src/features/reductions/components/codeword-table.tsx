@@ -7,6 +7,42 @@ import { BLOCK_COLOURS, observableInWords } from "../lib/certificate-view";
 const cellClass = "border-b border-slate-100 px-3 py-1.5 text-left";
 
 export function CodewordTable({ certificate }: { certificate: Certificate }) {
+  if (certificate.notion === "node-elimination")
+    return (
+      <div className="space-y-1 text-sm text-slate-700" data-testid="eliminated-order">
+        <p>Eliminated in this order, each function substituted into the nodes it regulated:</p>
+        <ol className="list-decimal pl-5">
+          {certificate.witness.eliminated.map((name) => (
+            <li key={name}>{name}</li>
+          ))}
+        </ol>
+      </div>
+    );
+  if (certificate.notion === "constant-percolation") {
+    const held = certificate.witness.held;
+    return (
+      <div className="overflow-x-auto">
+        <table className="min-w-full text-sm" data-testid="fixed-values-table">
+          <thead className="bg-slate-50 text-xs uppercase text-slate-500">
+            <tr>
+              <th className={cellClass}>Fixed node</th>
+              <th className={cellClass}>Value</th>
+              <th className={cellClass}>Why</th>
+            </tr>
+          </thead>
+          <tbody>
+            {Object.entries(certificate.witness.fixed).map(([name, value]) => (
+              <tr key={name}>
+                <td className={cellClass}>{name}</td>
+                <td className={`${cellClass} font-mono`}>{value}</td>
+                <td className={cellClass}>{Object.hasOwn(held, name) ? "held" : "forced"}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    );
+  }
   if (certificate.notion === "block-emulation") {
     const context = Object.entries(certificate.witness.context);
     return (

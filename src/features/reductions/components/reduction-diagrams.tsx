@@ -23,6 +23,10 @@ function sourceCaption(certificate: Certificate, nodeCount: number): string {
       return `Source F (${plural(nodeCount, "node")}): colour = the observable that reads the node; grey = read by no observable`;
     case "dynamical-embedding":
       return `Source F (${plural(nodeCount, "node")}): G's states are mapped to whole states of F (see the state map below), so no node stands for one node of G`;
+    case "node-elimination":
+      return `Source F (${plural(nodeCount, "node")}): the eliminated nodes are grey, their functions substituted into the nodes they regulate`;
+    case "constant-percolation":
+      return `Source F (${plural(nodeCount, "node")}): fixed nodes grey, light for 0 and dark for 1`;
   }
 }
 
@@ -33,6 +37,8 @@ function targetCaption(certificate: Certificate, nodeCount: number): string {
     case "coarse-graining":
       return `Target G (${plural(nodeCount, "node")}): the observables of F, one step of G for ${certificate.time} of F`;
     case "dynamical-embedding":
+    case "node-elimination":
+    case "constant-percolation":
       return `Target G (${plural(nodeCount, "node")})`;
   }
 }

@@ -8,6 +8,8 @@ const notionLabel = {
   "block-emulation": "block emulation",
   "dynamical-embedding": "dynamical embedding",
   "coarse-graining": "coarse-graining",
+  "node-elimination": "node elimination",
+  "constant-percolation": "percolation of constants",
 } as const;
 
 export interface TableSelection {

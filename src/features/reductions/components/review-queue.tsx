@@ -100,6 +100,8 @@ export function ReviewQueue({
             { value: "block-emulation", label: "block emulation" },
             { value: "dynamical-embedding", label: "dynamical embedding" },
             { value: "coarse-graining", label: "coarse-graining" },
+            { value: "node-elimination", label: "node elimination" },
+            { value: "constant-percolation", label: "percolation of constants" },
           ]}
           onChange={(v) => set({ notion: v || undefined })}
         />

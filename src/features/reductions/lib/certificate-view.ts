@@ -38,6 +38,20 @@ export function sourceNodeRoles(cert: Certificate): Map<string, SourceNodeRole> 
       roles.set(name, { block: null, targetName: null, contextValue: value, colour: CONTEXT_COLOUR[value] });
     }
   }
+  if (cert.notion === "constant-percolation")
+    for (const [name, value] of Object.entries(cert.witness.fixed))
+      roles.set(name, { block: null, targetName: null, contextValue: value, colour: CONTEXT_COLOUR[value] });
+  if (cert.notion === "node-elimination" || cert.notion === "constant-percolation") {
+    // The kept nodes are the target's nodes under the same names.
+    cert.target.nodes.forEach((node, j) =>
+      roles.set(node.name, {
+        block: j,
+        targetName: node.name,
+        contextValue: null,
+        colour: BLOCK_COLOURS[j % BLOCK_COLOURS.length]!,
+      }),
+    );
+  }
   if (cert.notion === "coarse-graining") {
     cert.witness.observables.forEach((o, j) => {
       for (const name of o.inputs)

@@ -14,12 +14,16 @@ export const NOTION_COLOURS = {
   "block-emulation": QUALITATIVE[0],
   "dynamical-embedding": QUALITATIVE[1],
   "coarse-graining": QUALITATIVE[3],
+  "node-elimination": QUALITATIVE[2],
+  "constant-percolation": QUALITATIVE[5],
 } as const;
 export const COMPOSED_COLOUR = "#64748B";
 export const NOTION_VERBS = {
   "block-emulation": "emulates",
   "dynamical-embedding": "embeds",
   "coarse-graining": "coarse-grains",
+  "node-elimination": "eliminates nodes to",
+  "constant-percolation": "percolates to",
 } as const;
 
 /** Radius in pixels of a model with this many nodes: the area grows with the node count. */

@@ -9,6 +9,12 @@ describe("runTitle", () => {
       "Attractors of Glimmerfin bloom switch r2",
     );
     expect(
+      runTitle({ kind: "node-elimination", params: { mode: "percolate", hold: [] }, model: bloom, targetModel: null }),
+    ).toBe("Percolation of constants in Glimmerfin bloom switch r2");
+    expect(
+      runTitle({ kind: "node-elimination", params: { mode: "all-eligible" }, model: bloom, targetModel: null }),
+    ).toBe("Node elimination in Glimmerfin bloom switch r2 (all eligible nodes)");
+    expect(
       runTitle({
         kind: "reduction-search",
         params: { search: { mode: "given-target", notion: "block-emulation" } },

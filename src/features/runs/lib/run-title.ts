@@ -30,6 +30,10 @@ export function runTitle(run: Pick<Run, "kind" | "params" | "model" | "targetMod
     }
     case "eca-hierarchy":
       return `Elementary-rule hierarchy, blocks ≤ ${String(p.maxBlock ?? "?")}`;
+    case "node-elimination":
+      return p.mode === "percolate"
+        ? `Percolation of constants in ${source}`
+        : `Node elimination in ${source}${p.mode === "all-eligible" ? " (all eligible nodes)" : ""}`;
     case "sleep-count":
       return `Demonstration count of ${String(p.itemCount ?? "?")} items`;
     default:
