@@ -7,6 +7,7 @@ import {
   mergeHierarchyParts,
   assembleEcaHierarchy,
   hierarchyUnits,
+  shardUnits,
   naiveEcaMinBlocks,
   verifyEmulation,
   composeWitnesses,
@@ -134,6 +135,22 @@ describe("ecaHierarchy", () => {
     expect(again.relations).toEqual(whole.relations);
     expect(again.emulateNothing).toEqual(whole.emulateNothing);
     expect(again.mutualClasses).toEqual(whole.mutualClasses);
+  });
+
+  it("shardUnits partitions the units and gives every shard a near-equal share of every block size", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 18 }), fc.integer({ min: 1, max: 16 }), (maxBlock, shardCount) => {
+        const shards = Array.from({ length: shardCount }, (_, s) => shardUnits(maxBlock, s, shardCount));
+        const key = (u: { rule: number; block: number }) => `${u.rule}/${u.block}`;
+        const all = shards.flat().map(key).sort();
+        expect(all).toEqual(hierarchyUnits(maxBlock).map(key).sort());
+        for (let k = 1; k <= maxBlock; k++) {
+          const counts = shards.map((units) => units.filter((u) => u.block === k).length);
+          expect(Math.max(...counts) - Math.min(...counts)).toBeLessThanOrEqual(1);
+        }
+      }),
+      { numRuns: 40 },
+    );
   });
 
   it("runHierarchyShard reports progress, calls onUnit with resumable cursors and throws CancelledError when told to stop", () => {

@@ -119,7 +119,12 @@ export function hierarchyUnits(maxBlock: number): HierarchyUnit[] {
   return units;
 }
 
-/** The units of one shard: every shardCount-th unit, which spreads the costly large blocks evenly. */
+/**
+ * The units of one shard. Dealing every shardCount-th unit of the class-major list would hand all units of one block
+ * size to one shard whenever shardCount divides maxBlock (K = 16 on 8 shards puts every k = 16 unit on shard 7), and
+ * the largest block dominates the cost; dealing the classes of each block size in turn, offset by the block size,
+ * gives every shard an equal share of every block size.
+ */
 export function shardUnits(maxBlock: number, shardIndex: number, shardCount: number): HierarchyUnit[] {
   if (
     !Number.isInteger(shardCount) ||
@@ -130,7 +135,8 @@ export function shardUnits(maxBlock: number, shardIndex: number, shardCount: num
   ) {
     throw new EngineError("BAD_SHARD", `shard ${shardIndex} of ${shardCount} does not exist`);
   }
-  return hierarchyUnits(maxBlock).filter((_, i) => i % shardCount === shardIndex);
+  const perClass = maxBlock;
+  return hierarchyUnits(maxBlock).filter((u, i) => (Math.floor(i / perClass) + u.block) % shardCount === shardIndex);
 }
 
 /** Work roughly doubles with each block size. */
