@@ -189,14 +189,12 @@ export function enumerateEncodings(
           blocks.push(b);
           if (rest === 0 && (exactNodes === undefined || exactNodes === m) && (contextAllowed || absorbable(U, m))) {
             const masks = Array.from(blockMasks.subarray(0, m));
-            const found: FoundEncoding = {
-              time: t,
-              s0,
-              masks,
-              succ: Array.from(encoded.subarray(here, here + 2 * half)),
-              unit,
-              witness: () => encodingWitness(n, masks, U, s0, t, contextAllowed, bounds.maxBlock),
-            };
+            const found = new Found(t, s0, masks, Array.from(encoded.subarray(here, here + 2 * half)), unit, {
+              n,
+              union: U,
+              contextAllowed,
+              maxBlock: bounds.maxBlock,
+            });
             if (visit(found)) stopped = true;
           }
           if (!stopped && m < last) extend(m, U, v + 1, rest);
@@ -212,6 +210,24 @@ export function enumerateEncodings(
     control.onProgress?.(1, "enumerating encodings");
   }
   return { range, totalUnits, encodingsChecked };
+}
+
+// A class rather than an object with a closure: hundreds of thousands are made per run, and a method costs no
+// closure per encoding.
+class Found implements FoundEncoding {
+  constructor(
+    readonly time: number,
+    readonly s0: number,
+    readonly masks: readonly number[],
+    readonly succ: readonly number[],
+    readonly unit: number,
+    private readonly shape: { n: number; union: number; contextAllowed: boolean; maxBlock: number },
+  ) {}
+
+  witness(): BlockEmulationWitness {
+    const { n, union, contextAllowed, maxBlock } = this.shape;
+    return encodingWitness(n, this.masks, union, this.s0, this.time, contextAllowed, maxBlock);
+  }
 }
 
 function popcount(x: number): number {
