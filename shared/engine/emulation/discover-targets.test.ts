@@ -7,6 +7,7 @@ import { blockEmulationCertificate, verifyCertificate } from "../certificates";
 import {
   canonicalTargetKey,
   discoverEmulatedTargets,
+  interactionCount,
   discoverShard,
   mergeDiscoverShards,
   plantEmulation,
@@ -14,6 +15,7 @@ import {
   successorsOfNetwork,
   transitionTable,
   trivialityFlags,
+  type DiscoveredTarget,
 } from "./index";
 
 /** Slow reference: canonical keys of all targets of 1..M nodes reachable by any encoding (any codewords, any context). */
@@ -77,6 +79,87 @@ function bruteForceKeys(F: BooleanNetwork, M: number, maxTime: number, maxBlock:
   return keys;
 }
 
+/**
+ * Slow reference for the whole discover result on tiny sources. Whatever the codewords and context, the encoded set
+ * of an encoding is s0 xor the unions of its blocks' difference masks (disjoint, non-empty, at most maxBlock nodes),
+ * so listing every base state and every set of masks lists every encoded set; each one counts once, with its
+ * smallest state as base. The representative of a target is its first encoding in the documented order: time
+ * scale, then base state, then the masks' node lists compared lexicographically (a prefix first).
+ */
+function referenceDiscover(
+  F: BooleanNetwork,
+  bounds: { maxTargetNodes: number; maxTime: number; maxBlock: number; contextAllowed: boolean },
+) {
+  const n = F.names.length;
+  const nodesOf = (mask: number) => [...Array(n).keys()].filter((v) => (mask >> v) & 1);
+  const subsets: number[] = [];
+  for (let mask = 1; mask < 2 ** n; mask++) if (nodesOf(mask).length <= bounds.maxBlock) subsets.push(mask);
+  const lowest = (mask: number) => nodesOf(mask)[0]!;
+  // Sets of masks listed with their masks by increasing smallest node, so target node k is carried by mask k.
+  const maskSets: number[][] = [];
+  const grow = (chosen: number[], union: number) => {
+    if (chosen.length > 0) maskSets.push(chosen);
+    if (chosen.length === bounds.maxTargetNodes) return;
+    for (const s of subsets)
+      if ((s & union) === 0 && (chosen.length === 0 || lowest(s) > lowest(chosen[chosen.length - 1]!)))
+        grow([...chosen, s], union | s);
+  };
+  grow([], 0);
+  const lexBlocks = (a: number[], b: number[]) => {
+    for (let k = 0; k < Math.min(a.length, b.length); k++) {
+      const p = nodesOf(a[k]!);
+      const q = nodesOf(b[k]!);
+      for (let i = 0; i < Math.min(p.length, q.length); i++) if (p[i] !== q[i]) return p[i]! - q[i]!;
+      if (p.length !== q.length) return p.length - q.length;
+    }
+    return a.length - b.length;
+  };
+  const found = new Map<
+    string,
+    { succ: number[]; t: number; s0: number; masks: number[]; times: Set<number>; encodings: number }
+  >();
+  for (let t = 1; t <= bounds.maxTime; t++) {
+    const Ft = transitionTable(F, t);
+    for (let s0 = 0; s0 < 2 ** n; s0++) {
+      for (const masks of maskSets) {
+        const m = masks.length;
+        const union = masks.reduce((u, q) => u | q, 0);
+        const spare = masks.reduce((s, q) => s + bounds.maxBlock - nodesOf(q).length, 0);
+        if (!bounds.contextAllowed && n - nodesOf(union).length > spare) continue;
+        const enc = (x: number) => masks.reduce((s, q, k) => ((x >> k) & 1 ? s ^ q : s), s0);
+        const states = Array.from({ length: 2 ** m }, (_, x) => enc(x));
+        if (Math.min(...states) !== s0) continue;
+        const succ = states.map((s) => states.indexOf(Ft[s]!));
+        if (succ.includes(-1)) continue;
+        const key = canonicalTargetKey(succ, m);
+        const entry = found.get(key);
+        if (!entry) found.set(key, { succ, t, s0, masks, times: new Set([t]), encodings: 1 });
+        else {
+          entry.encodings++;
+          entry.times.add(t);
+          const later =
+            entry.t !== t ? entry.t < t : entry.s0 !== s0 ? entry.s0 < s0 : lexBlocks(entry.masks, masks) < 0;
+          if (!later) Object.assign(entry, { succ, t, s0, masks });
+        }
+      }
+    }
+  }
+  return [...found.entries()].map(([key, e]) => ({ key, ...e, times: [...e.times].sort((a, b) => a - b) }));
+}
+
+/** The documented ranking: non-trivial first, more nodes, more interactions, smaller time, fewer block nodes, key. */
+function documentedOrder(a: DiscoveredTarget, b: DiscoveredTarget): number {
+  const blockNodes = (d: DiscoveredTarget) => d.witness.blocks.reduce((s, q) => s + q.nodes.length, 0);
+  return (
+    Number(a.trivial) - Number(b.trivial) ||
+    b.target.names.length - a.target.names.length ||
+    b.interactions - a.interactions ||
+    a.times[0]! - b.times[0]! ||
+    blockNodes(a) - blockNodes(b) ||
+    (a.key < b.key ? -1 : 1)
+  );
+}
+
 describe("discoverEmulatedTargets", () => {
   it("discoverEmulatedTargets finds exactly the targets of a brute-force enumeration of encodings on tiny sources", () => {
     fc.assert(
@@ -86,6 +169,55 @@ describe("discoverEmulatedTargets", () => {
         expect(new Set(found.targets.map((d) => d.key))).toEqual(bruteForceKeys(F, 2, maxTime, 2));
       }),
       { seed: 801, numRuns: 30 },
+    );
+  });
+
+  it("discoverEmulatedTargets reports exactly the reference's targets, times, counts, representatives and ranking on sources of up to 6 nodes", () => {
+    fc.assert(
+      fc.property(
+        fc.integer(),
+        fc.integer({ min: 1, max: 6 }),
+        fc.record({
+          maxTargetNodes: fc.integer({ min: 1, max: 4 }),
+          maxTime: fc.integer({ min: 1, max: 4 }),
+          maxBlock: fc.integer({ min: 1, max: 3 }),
+          contextAllowed: fc.boolean(),
+        }),
+        fc.integer({ min: 1, max: 3 }),
+        (seed, n, bounds, maxInputs) => {
+          const F = randomNetwork(seedrandom(String(seed)), n, maxInputs);
+          const found = discoverEmulatedTargets(F, bounds);
+          const reference = referenceDiscover(F, bounds);
+          expect(found.targets.map((d) => d.key).sort()).toEqual(reference.map((r) => r.key).sort());
+          const size = 2 ** n;
+          for (const d of found.targets) {
+            const r = reference.find((x) => x.key === d.key)!;
+            const m = r.masks.length;
+            expect({ times: d.times, encodings: d.encodings, firstUnit: d.firstUnit }).toEqual({
+              times: r.times,
+              encodings: r.encodings,
+              firstUnit: (r.t - 1) * size + r.s0,
+            });
+            expect(Array.from(successorsOfNetwork(d.target))).toEqual(r.succ);
+            expect(d.flags).toEqual(trivialityFlags(r.succ, m));
+            expect(d.trivial).toBe(d.flags.length > 0);
+            expect(d.interactions).toBe(interactionCount(r.succ, m));
+            expect(d.witness.time).toBe(r.t);
+            d.witness.blocks.forEach((b, k) => {
+              const own = b.nodes.filter((v, i) => b.zero[i] !== b.one[i]);
+              expect(own.reduce((q, v) => q | (1 << v), 0)).toBe(r.masks[k]);
+              b.nodes.forEach((v, i) => expect(b.zero[i]).toBe((r.s0 >> v) & 1));
+            });
+            if (bounds.contextAllowed)
+              expect(d.witness.blocks.map((b) => b.nodes.length)).toEqual(
+                r.masks.map((q) => q.toString(2).replace(/0/g, "").length),
+              );
+            expect(verifyCertificate(blockEmulationCertificate(F, d.target, d.witness)).valid).toBe(true);
+          }
+          expect(found.targets).toEqual([...found.targets].sort(documentedOrder));
+        },
+      ),
+      { seed: 808, numRuns: 60 },
     );
   });
 

@@ -46,6 +46,7 @@ export interface DiscoveredTarget {
 export interface DiscoverShardResult {
   readonly range: UnitRange;
   readonly totalUnits: number;
+  /** Work done: candidate encodings whose images were stepped (pruned candidates are not counted), or SAT queries. */
   readonly encodingsChecked: number;
   readonly targets: DiscoveredTarget[];
 }
@@ -75,9 +76,21 @@ export function discoverShard(
     string,
     { succ: number[]; witness: BlockEmulationWitness; times: number[]; encodings: number; firstUnit: number }
   >();
+  // Canonical keys cost m! 2^m relabellings each, while encodings are many and their raw tables few: one key per
+  // raw table, looked up by the table packed into two words (4 bits per entry).
+  const keyOfTable = new Map<number, Map<number, string>>();
   const run = enumerateEncodings(source, bounds, control, (e) => {
     const m = e.masks.length;
-    const key = canonicalTargetKey(e.succ, m);
+    let low = 0;
+    let high = 0;
+    for (let x = 0; x < e.succ.length; x++)
+      if (x < 8) low += e.succ[x]! * 2 ** (4 * x);
+      else high += e.succ[x]! * 2 ** (4 * (x - 8));
+    const first = low + m * 2 ** 32;
+    let byHigh = keyOfTable.get(first);
+    if (!byHigh) keyOfTable.set(first, (byHigh = new Map()));
+    let key = byHigh.get(high);
+    if (key === undefined) byHigh.set(high, (key = canonicalTargetKey(e.succ, m)));
     const entry = found.get(key);
     if (entry) {
       entry.encodings++;

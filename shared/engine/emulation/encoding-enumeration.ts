@@ -92,7 +92,13 @@ export function enumerateEncodings(
   const step = successorTable(source);
   let encodingsChecked = 0;
   const blocks: { mask: number; size: number }[] = [];
-  const encoded = new Int32Array(16);
+  const blockMasks = new Int32Array(4);
+  // Encoded state x of the current blocks, its image relative to s0 (z = F(state) xor s0), and per level the
+  // target state that image encodes. Adding block m keeps states 0..2^m-1 and their images, so only the 2^m new
+  // states are stepped; descendants never write below their parent's range.
+  const states = new Int32Array(16);
+  const images = new Int32Array(16);
+  const encoded = new Int32Array(5 * 16);
   let Ft: Uint32Array = step;
   let FtTime = 0;
   const span = Math.max(1, range.end - range.start);
@@ -117,74 +123,111 @@ export function enumerateEncodings(
       FtTime = t;
     }
     const F = Ft;
-    if (popcount((F[s0]! ^ s0) >>> 0) > last * bounds.maxBlock) continue;
-    const extend = (level: number, union: number, minStart: number) => {
-      for (let v = minStart; v < n && !stopped; v++) {
+    const z0 = (F[s0]! ^ s0) >>> 0;
+    // Every bit where s0's image differs from s0 must lie in some block: at most `last` blocks of allowed nodes.
+    if (popcount(z0) > last * bounds.maxBlock || (z0 & ~allowedMask) !== 0) continue;
+    states[0] = s0;
+    images[0] = z0;
+    encoded[0] = 0;
+    // `uncovered`: image bits outside the blocks so far. A later block's smallest node must not exceed the lowest of
+    // them (blocks come by increasing smallest node, so a lower bit could never be covered): the loop over v stops
+    // there instead of trying blocks that can only fail.
+    const extend = (level: number, union: number, minStart: number, uncovered: number) => {
+      const vEnd = uncovered === 0 ? n - 1 : Math.min(n - 1, 31 - Math.clz32(uncovered & -uncovered));
+      const half = 1 << level;
+      const m = level + 1;
+      const before = level * 16;
+      const here = m * 16;
+      for (let v = minStart; v <= vEnd && !stopped; v++) {
         for (const b of blocksByMin[v]!) {
-          if (b.mask & union || (s0 >>> b.high) & 1) continue;
-          blocks.push(b);
-          const m = level + 1;
-          const U = union | b.mask;
+          const bm = b.mask;
+          if (bm & union || (s0 >>> b.high) & 1) continue;
           encodingsChecked++;
           // Every encoded state's image must be aligned with each chosen block and may leave uncovered bits only
           // at nodes a later block (smallest node above v) could still cover.
-          let closed = true;
           let viable = true;
-          let uncovered = 0;
-          for (let x = 0; x < 1 << m && viable; x++) {
-            let state = s0;
-            for (let k = 0; k < m; k++) if ((x >>> k) & 1) state ^= blocks[k]!.mask;
+          for (let x = 0; x < half; x++) {
+            const part = images[x]! & bm;
+            if (part !== 0 && part !== bm) {
+              viable = false;
+              break;
+            }
+            encoded[here + x] = part === 0 ? encoded[before + x]! : encoded[before + x]! | half;
+          }
+          if (!viable) continue;
+          blockMasks[level] = bm;
+          const U = union | bm;
+          const low = (1 << (v + 1)) - 1;
+          let rest = uncovered & ~bm;
+          for (let x = half; x < 2 * half; x++) {
+            const state = states[x - half]! ^ bm;
             const z = (F[state]! ^ s0) >>> 0;
             let y = 0;
             for (let k = 0; k < m; k++) {
-              const part = z & blocks[k]!.mask;
+              const mask = blockMasks[k]!;
+              const part = z & mask;
               if (part === 0) continue;
-              if (part !== blocks[k]!.mask) {
+              if (part !== mask) {
                 viable = false;
                 break;
               }
               y |= 1 << k;
             }
-            const rest = z & ~U & fullMask;
-            if (rest !== 0) {
-              closed = false;
-              uncovered |= rest;
-              if ((rest & ((1 << (v + 1)) - 1)) !== 0) viable = false;
+            if (!viable) break;
+            const r = z & ~U & fullMask;
+            if ((r & low) !== 0) {
+              viable = false;
+              break;
             }
-            encoded[x] = y;
+            rest |= r;
+            states[x] = state;
+            images[x] = z;
+            encoded[here + x] = y;
           }
           // The remaining blocks (at most `last - m` of at most maxBlock nodes) must cover every uncovered bit.
-          if (viable && popcount(uncovered) > (last - m) * bounds.maxBlock) viable = false;
-          if (
-            viable &&
-            closed &&
-            (exactNodes === undefined || exactNodes === m) &&
-            (contextAllowed || absorbable(U, m))
-          ) {
-            const masks = blocks.slice(0, m).map((q) => q.mask);
-            const found: FoundEncoding = {
-              time: t,
-              s0,
-              masks,
-              succ: Array.from(encoded.subarray(0, 1 << m)),
-              unit,
-              witness: () => encodingWitness(n, masks, U, s0, t, contextAllowed, bounds.maxBlock),
-            };
+          if (!viable || popcount(rest) > (last - m) * bounds.maxBlock) continue;
+          blocks.push(b);
+          if (rest === 0 && (exactNodes === undefined || exactNodes === m) && (contextAllowed || absorbable(U, m))) {
+            const masks = Array.from(blockMasks.subarray(0, m));
+            const found = new Found(t, s0, masks, Array.from(encoded.subarray(here, here + 2 * half)), unit, {
+              n,
+              union: U,
+              contextAllowed,
+              maxBlock: bounds.maxBlock,
+            });
             if (visit(found)) stopped = true;
           }
-          if (!stopped && viable && m < last) extend(m, U, v + 1);
+          if (!stopped && m < last) extend(m, U, v + 1, rest);
           blocks.pop();
           if (stopped) break;
         }
       }
     };
-    extend(0, 0, 0);
+    extend(0, 0, 0, z0);
   }
   if (!stopped) {
     control.onCursor?.(range.end);
     control.onProgress?.(1, "enumerating encodings");
   }
   return { range, totalUnits, encodingsChecked };
+}
+
+// A class rather than an object with a closure: hundreds of thousands are made per run, and a method costs no
+// closure per encoding.
+class Found implements FoundEncoding {
+  constructor(
+    readonly time: number,
+    readonly s0: number,
+    readonly masks: readonly number[],
+    readonly succ: readonly number[],
+    readonly unit: number,
+    private readonly shape: { n: number; union: number; contextAllowed: boolean; maxBlock: number },
+  ) {}
+
+  witness(): BlockEmulationWitness {
+    const { n, union, contextAllowed, maxBlock } = this.shape;
+    return encodingWitness(n, this.masks, union, this.s0, this.time, contextAllowed, maxBlock);
+  }
 }
 
 function popcount(x: number): number {
