@@ -1,11 +1,53 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { ecaRule, ruleFromNumber, reflectEca, complementEca, isAffineRule } from "../automata";
-import { blockEmulations, naiveEmulations, verifyEmulation } from "./index";
+import { blockEmulations, naiveEmulations, verifyEmulation, middleBlockMap } from "./index";
+import { mergeSliceEmulations, triangularSliceStart } from "./block-emulations";
 
 const targets = (list: { target: number }[]) => list.map((e) => e.target);
 
 describe("blockEmulations", () => {
+  it("blockEmulations sliced into parts gives, merged lowest slice first, the whole search's targets, witnesses and pair count", () => {
+    const check = (f: number, k: number, parts: number) => {
+      const rule = ecaRule(f);
+      const whole = blockEmulations(rule, k);
+      const slices = Array.from({ length: parts }, (_, part) => blockEmulations(rule, k, k, { part, parts }));
+      expect(mergeSliceEmulations(slices.map((x) => x.emulations)), `rule ${f}, k ${k}, ${parts} parts`).toEqual(
+        whole.emulations,
+      );
+      expect(slices.reduce((sum, x) => sum + x.pairsExamined, 0)).toBe(whole.pairsExamined);
+    };
+    // rules 154 and 76 have hundreds of fixed words at k = 10 and take the bucketed pairing; 204 is affine
+    for (const f of [154, 76, 204]) check(f, 10, 4);
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 0, max: 255 }),
+        fc.integer({ min: 2, max: 9 }),
+        fc.integer({ min: 1, max: 7 }),
+        check,
+      ),
+      { numRuns: 120, seed: 12 },
+    );
+    expect(() => blockEmulations(ecaRule(30), 4, 4, { part: 3, parts: 3 })).toThrow(/slice 3 of 3/);
+  });
+
+  it("triangularSliceStart cuts a triangle of pairs into slices of near-equal area covering every index once", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 100000 }), fc.integer({ min: 1, max: 64 }), (n, parts) => {
+        const starts = Array.from({ length: parts + 1 }, (_, p) => triangularSliceStart(n, p, parts));
+        expect(starts[0]).toBe(0);
+        expect(starts[parts]).toBe(n);
+        for (let p = 0; p < parts; p++) expect(starts[p + 1]!).toBeGreaterThanOrEqual(starts[p]!);
+        // pairs of index i: n - 1 - i; each slice within n pairs-rows of the ideal share
+        const area = (a: number, b: number) => ((b - a) * (2 * n - 1 - a - b + 1)) / 2;
+        const ideal = (n * (n - 1)) / 2 / parts;
+        for (let p = 0; p < parts; p++)
+          expect(Math.abs(area(starts[p]!, starts[p + 1]!) - ideal)).toBeLessThanOrEqual(n + 1);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it("blockEmulations finds the same targets as the all-pairs reference for every elementary rule and k <= 6 (t = k), with valid witnesses", () => {
     for (let f = 0; f < 256; f++) {
       for (let k = 1; k <= 6; k++) {

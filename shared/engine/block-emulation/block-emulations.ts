@@ -2,7 +2,7 @@
 // each (block simulation as in Delorme, Mazoyer, Ollinger, Theyssier, "Bulking I", Theor. Comput. Sci. 412, 2011).
 // Pruning: u_a u_a u_a must map to a codeword, so m(u0) = u1, m(u1) = u0, or both are fixed points of m (m = F^t on
 // a ring of k cells); only those pairs are examined. Affine rules are solved by linear algebra instead.
-import { CancelledError } from "../errors";
+import { CancelledError, EngineError } from "../errors";
 import type { RuleTable } from "../automata";
 import { isAffineRule, packedToString, complementEca } from "../automata";
 import { middleBlockMap } from "./middle-block-map";
@@ -28,6 +28,33 @@ export interface BlockEmulationResult {
 
 export interface BlockSearchOptions {
   shouldStop?: () => boolean;
+  /**
+   * Search only slice `part` of `parts` of the codeword pairs, so that one large search can spread over several
+   * shards. Slices are consecutive in the search order, so taking each target from the lowest slice that found it
+   * reproduces the whole search's witnesses (see mergeSliceEmulations).
+   */
+  part?: number;
+  parts?: number;
+}
+
+/**
+ * The first index of slice `part` among n items whose cost falls linearly with the index (item i is paired with the
+ * n - 1 - i after it), chosen so that every slice pairs about as many.
+ */
+export function triangularSliceStart(n: number, part: number, parts: number): number {
+  if (part <= 0) return 0;
+  if (part >= parts) return n;
+  return Math.round(n * (1 - Math.sqrt(1 - part / parts)));
+}
+
+/**
+ * The result of the whole search from the results of its slices, given in slice order: each target keeps the
+ * witness of the lowest slice that found it, as the whole search keeps the first pair it meets.
+ */
+export function mergeSliceEmulations(slices: readonly (readonly Emulation[])[]): Emulation[] {
+  const byTarget = new Map<number, Emulation>();
+  for (const list of slices) for (const e of list) if (!byTarget.has(e.target)) byTarget.set(e.target, e);
+  return [...byTarget.values()].sort((p, q) => p.target - q.target);
 }
 
 const conjugate = Array.from({ length: 256 }, (_, g) => complementEca(g));
@@ -41,6 +68,9 @@ export function blockEmulations(
   time = block,
   options: BlockSearchOptions = {},
 ): BlockEmulationResult {
+  const { part = 0, parts = 1 } = options;
+  if (!Number.isInteger(parts) || parts < 1 || !Number.isInteger(part) || part < 0 || part >= parts)
+    throw new EngineError("BAD_PART", `slice ${part} of ${parts} does not exist`);
   const map = middleBlockMap(rule, block, time);
   const toResult = (
     list: PackedEmulation[],
@@ -55,13 +85,16 @@ export function blockEmulations(
     pairsExamined,
     method,
   });
-  if (isAffineRule(rule)) return toResult(affineEmulations(map), 0, "affine");
-  const { list, pairsExamined } = fixedPointSearch(map, options.shouldStop);
+  // linear algebra has no pairs to slice: the first slice does it all
+  if (isAffineRule(rule)) return toResult(part === 0 ? affineEmulations(map) : [], 0, "affine");
+  const { list, pairsExamined } = fixedPointSearch(map, part, parts, options.shouldStop);
   return toResult(list, pairsExamined, "fixed-points");
 }
 
 function fixedPointSearch(
   map: ReturnType<typeof middleBlockMap>,
+  part: number,
+  parts: number,
   shouldStop?: () => boolean,
 ): { list: PackedEmulation[]; pairsExamined: number } {
   const k = map.block;
@@ -114,8 +147,9 @@ function fixedPointSearch(
     if (m === x) fixed.push(x);
   }
   let pairs = 0;
-  // m(u0) = u1 != u0: G(000) = 1 and u1 is forced
-  for (let u0 = 0; u0 < size; u0++) {
+  // m(u0) = u1 != u0: G(000) = 1 and u1 is forced; one pass over the words, cheap beside the pairing, so the first
+  // slice takes it whole and stays first in the search order
+  for (let u0 = 0; part === 0 && u0 < size; u0++) {
     const u1 = ring[u0]!;
     if (u1 === u0) continue;
     const m1 = ring[u1]!;
@@ -128,20 +162,24 @@ function fixedPointSearch(
     if (g >= 0) record(g, u0, u1);
   }
   // both fixed: G(000) = 0, G(111) = 1; unordered pairs suffice since swapping gives the conjugate
-  pairs += pairFixedPoints(map, fixed, complete, record, shouldStop);
+  const from = triangularSliceStart(fixed.length, part, parts);
+  const to = triangularSliceStart(fixed.length, part + 1, parts);
+  pairs += pairFixedPoints(map, fixed, from, to, complete, record, shouldStop);
   const list: PackedEmulation[] = [];
   for (let g = 0; g < 256; g++) if (has[g]) list.push({ target: g, u0: u0s[g]!, u1: u1s[g]! });
   return { list, pairsExamined: pairs };
 }
 
 /**
- * Each unordered pair of fixed points once, filtered on the triples 001 and 100 where u1 sits at one edge only: the first c
+ * Each unordered pair of fixed points whose first member has index from..to-1 (in the bucket order below), filtered on the triples 001 and 100 where u1 sits at one edge only: the first c
  * cells of M(u0, u0, u1) depend on u1's first c cells alone, and the last c cells of M(u1, u0, u0) on its last c
  * cells, so per-u0 tables over those c cells admit u1 only from the few prefix buckets that can map to a codeword.
  */
 function pairFixedPoints(
   map: ReturnType<typeof middleBlockMap>,
   fixed: number[],
+  from: number,
+  to: number,
   complete: (u0: number, u1: number, g: number) => number,
   record: (g: number, u0: number, u1: number) => void,
   shouldStop?: () => boolean,
@@ -150,7 +188,7 @@ function pairFixedPoints(
   const nf = fixed.length;
   let pairs = 0;
   if (nf < EDGE_TABLE_MIN_FIXED) {
-    for (let i = 0; i < nf; i++) {
+    for (let i = from; i < to; i++) {
       const u0 = fixed[i]!;
       for (let j = i + 1; j < nf; j++) {
         const u1 = fixed[j]!;
@@ -175,7 +213,7 @@ function pairFixedPoints(
   for (const u of fixed) sorted[fill[u & cmask]!++] = u;
   const left = new Int32Array(width);
   const right = new Int32Array(width);
-  for (let i = 0; i < nf; i++) {
+  for (let i = from; i < to; i++) {
     if (shouldStop && (i & 63) === 0 && shouldStop()) throw new CancelledError();
     const u0 = sorted[i]!;
     const u0head = u0 & cmask;

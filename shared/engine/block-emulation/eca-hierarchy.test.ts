@@ -13,7 +13,8 @@ import {
   composeWitnesses,
   blockEmulations,
 } from "./index";
-import type { HierarchyPart } from "./index";
+import type { HierarchyPart, HierarchyUnit } from "./index";
+import { SPLIT_FROM_BLOCK } from "./index";
 
 const K = 6;
 const whole = ecaHierarchy(K);
@@ -137,19 +138,49 @@ describe("ecaHierarchy", () => {
     expect(again.mutualClasses).toEqual(whole.mutualClasses);
   });
 
-  it("shardUnits partitions the units and gives every shard a near-equal share of every block size", () => {
+  it("shardUnits covers every unit once, whole below SPLIT_FROM_BLOCK and as one slice per shard from there on, with near-equal shares of every block size", () => {
     fc.assert(
       fc.property(fc.integer({ min: 1, max: 18 }), fc.integer({ min: 1, max: 16 }), (maxBlock, shardCount) => {
         const shards = Array.from({ length: shardCount }, (_, s) => shardUnits(maxBlock, s, shardCount));
-        const key = (u: { rule: number; block: number }) => `${u.rule}/${u.block}`;
-        const all = shards.flat().map(key).sort();
-        expect(all).toEqual(hierarchyUnits(maxBlock).map(key).sort());
+        const key = (u: HierarchyUnit) => `${u.rule}/${u.block}/${u.part ?? "-"}/${u.parts ?? "-"}`;
+        const expected = hierarchyUnits(maxBlock).flatMap((u) =>
+          shardCount > 1 && u.block >= SPLIT_FROM_BLOCK
+            ? Array.from({ length: shardCount }, (_, part) => ({ ...u, part, parts: shardCount }))
+            : [u],
+        );
+        expect(shards.flat().map(key).sort()).toEqual(expected.map(key).sort());
         for (let k = 1; k <= maxBlock; k++) {
           const counts = shards.map((units) => units.filter((u) => u.block === k).length);
           expect(Math.max(...counts) - Math.min(...counts)).toBeLessThanOrEqual(1);
         }
+        // each shard holds one slice of every split unit, and the first slices are spread over the shards
+        if (shardCount > 1 && maxBlock >= SPLIT_FROM_BLOCK) {
+          const firsts = shards.map((units) => units.filter((u) => u.part === 0).length);
+          expect(Math.max(...firsts) - Math.min(...firsts)).toBeLessThanOrEqual(maxBlock - SPLIT_FROM_BLOCK + 1);
+        }
       }),
       { numRuns: 40 },
+    );
+  });
+
+  it("runHierarchyShard with units sliced across shards merges to exactly the unsliced hierarchy, witnesses included, even when slices arrive in pieces", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 2, max: 5 }), fc.integer({ min: 3, max: K }), (shardCount, splitFrom) => {
+        const parts = Array.from(
+          { length: shardCount },
+          (_, shardIndex) => runHierarchyShard({ maxBlock: K, shardIndex, shardCount, splitFrom }).part,
+        );
+        // merging a subset first leaves incomplete slices that a later merge completes
+        const early = mergeHierarchyParts(parts.slice(0, 1));
+        expect(early.units.some((u) => u.parts === shardCount)).toBe(true);
+        expect(() => assembleEcaHierarchy(early)).toThrow(/missing/);
+        const merged = mergeHierarchyParts([early, ...parts.slice(1)]);
+        expect(merged.units.every((u) => u.parts === undefined)).toBe(true);
+        const again = assembleEcaHierarchy(merged);
+        expect(again.relations).toEqual(whole.relations);
+        expect(again.pairsExamined).toBe(whole.pairsExamined);
+      }),
+      { numRuns: 6, seed: 16 },
     );
   });
 

@@ -12,7 +12,7 @@ import {
   complementString,
 } from "../automata";
 import type { Emulation } from "./block-emulations";
-import { blockEmulations } from "./block-emulations";
+import { blockEmulations, mergeSliceEmulations } from "./block-emulations";
 import { composeWitnesses } from "./compose-emulations";
 import { verifyEmulation } from "./verify-emulation";
 
@@ -23,6 +23,9 @@ export interface HierarchyUnit {
   /** The least rule of a symmetry class. */
   readonly rule: number;
   readonly block: number;
+  /** Present when the unit is one slice of a search split across shards: slice `part` of `parts`. */
+  readonly part?: number;
+  readonly parts?: number;
 }
 
 export interface HierarchyUnitResult extends HierarchyUnit {
@@ -40,6 +43,8 @@ export interface ShardOptions {
   readonly maxBlock: number;
   readonly shardIndex?: number;
   readonly shardCount?: number;
+  /** The block size from which units are sliced across shards (SPLIT_FROM_BLOCK unless a test needs small ones). */
+  readonly splitFrom?: number;
   /** Position in this shard's unit list to start from (a previous run's `cursor`). */
   readonly cursor?: number;
   /** Stop after this many units and return; the returned cursor resumes. */
@@ -120,12 +125,26 @@ export function hierarchyUnits(maxBlock: number): HierarchyUnit[] {
 }
 
 /**
- * The units of one shard. Dealing every shardCount-th unit of the class-major list would hand all units of one block
- * size to one shard whenever shardCount divides maxBlock (K = 16 on 8 shards puts every k = 16 unit on shard 7), and
- * the largest block dominates the cost; dealing the classes of each block size in turn, offset by the block size,
- * gives every shard an equal share of every block size.
+ * From this block size on, every shard takes one slice of each unit instead of whole units. Costs are lopsided: at
+ * K = 16 the k = 16 unit of rule 154's class pairs about 2 * 10^9 codeword pairs (65,026 of the 65,536 words are
+ * fixed by F^16 on the ring), more than the other 87 classes' units of that size together, so no dealing of whole
+ * units can balance the shards.
  */
-export function shardUnits(maxBlock: number, shardIndex: number, shardCount: number): HierarchyUnit[] {
+export const SPLIT_FROM_BLOCK = 12;
+
+/**
+ * The units of one shard. Below SPLIT_FROM_BLOCK whole units are dealt; dealing every shardCount-th unit of the
+ * class-major list would hand all units of one block size to one shard whenever shardCount divides maxBlock, so the
+ * classes of each block size are dealt in turn, offset by the block size, giving every shard an equal share of
+ * every block size. From SPLIT_FROM_BLOCK on each shard takes one slice of every unit, the slice index rotating
+ * with the class so that the first slices (which also carry the cheap unpaired pass) spread evenly.
+ */
+export function shardUnits(
+  maxBlock: number,
+  shardIndex: number,
+  shardCount: number,
+  splitFrom = SPLIT_FROM_BLOCK,
+): HierarchyUnit[] {
   if (
     !Number.isInteger(shardCount) ||
     shardCount < 1 ||
@@ -135,16 +154,22 @@ export function shardUnits(maxBlock: number, shardIndex: number, shardCount: num
   ) {
     throw new EngineError("BAD_SHARD", `shard ${shardIndex} of ${shardCount} does not exist`);
   }
-  const perClass = maxBlock;
-  return hierarchyUnits(maxBlock).filter((u, i) => (Math.floor(i / perClass) + u.block) % shardCount === shardIndex);
+  const units: HierarchyUnit[] = [];
+  hierarchyUnits(maxBlock).forEach((u, i) => {
+    const cls = Math.floor(i / maxBlock);
+    if (shardCount > 1 && u.block >= splitFrom)
+      units.push({ ...u, part: (shardIndex + cls) % shardCount, parts: shardCount });
+    else if ((cls + u.block) % shardCount === shardIndex) units.push(u);
+  });
+  return units;
 }
 
 /** Work roughly doubles with each block size. */
-const unitWeight = (u: HierarchyUnit) => 2 ** u.block;
+const unitWeight = (u: HierarchyUnit) => 2 ** u.block / (u.parts ?? 1);
 
 export function runHierarchyShard(options: ShardOptions): ShardRun {
   const { maxBlock, shardIndex = 0, shardCount = 1, cursor = 0, maxUnits = Infinity } = options;
-  const units = shardUnits(maxBlock, shardIndex, shardCount);
+  const units = shardUnits(maxBlock, shardIndex, shardCount, options.splitFrom);
   if (!Number.isInteger(cursor) || cursor < 0 || cursor > units.length)
     throw new EngineError("BAD_CURSOR", `cursor ${cursor} is outside 0..${units.length}`);
   const total = units.reduce((s, u) => s + unitWeight(u), 0);
@@ -154,13 +179,12 @@ export function runHierarchyShard(options: ShardOptions): ShardRun {
   while (position < units.length && results.length < maxUnits) {
     if (options.shouldStop?.()) throw new CancelledError();
     const unit = units[position]!;
-    const res = blockEmulations(ecaRule(unit.rule), unit.block, unit.block, { shouldStop: options.shouldStop });
-    const result: HierarchyUnitResult = {
-      rule: unit.rule,
-      block: unit.block,
-      emulations: res.emulations,
-      pairsExamined: res.pairsExamined,
-    };
+    const res = blockEmulations(ecaRule(unit.rule), unit.block, unit.block, {
+      shouldStop: options.shouldStop,
+      part: unit.part,
+      parts: unit.parts,
+    });
+    const result: HierarchyUnitResult = { ...unit, emulations: res.emulations, pairsExamined: res.pairsExamined };
     results.push(result);
     position++;
     done += unitWeight(unit);
@@ -170,20 +194,60 @@ export function runHierarchyShard(options: ShardOptions): ShardRun {
   return { part: { maxBlock, units: results }, cursor: position, done: position === units.length };
 }
 
+const unitKey = (u: HierarchyUnit) => `${u.rule}/${u.block}`;
+
+/**
+ * The union of parts, with the slices of a split unit joined into the whole unit once all of them are present;
+ * slices of a unit still incomplete stay as they are, so a merged part can be merged again later.
+ */
 export function mergeHierarchyParts(parts: readonly HierarchyPart[]): HierarchyPart {
   if (parts.length === 0) throw new EngineError("BAD_PARTS", "nothing to merge");
   const maxBlock = parts[0]!.maxBlock;
-  const byKey = new Map<string, HierarchyUnitResult>();
+  const whole = new Map<string, HierarchyUnitResult>();
+  const slices = new Map<string, Map<number, HierarchyUnitResult>>();
   for (const part of parts) {
     if (part.maxBlock !== maxBlock)
       throw new EngineError("BAD_PARTS", `parts for maxBlock ${part.maxBlock} and ${maxBlock} cannot merge`);
-    for (const u of part.units) byKey.set(`${u.rule}/${u.block}`, u);
+    for (const u of part.units) {
+      if (u.parts === undefined || u.parts === 1) {
+        whole.set(unitKey(u), {
+          rule: u.rule,
+          block: u.block,
+          emulations: u.emulations,
+          pairsExamined: u.pairsExamined,
+        });
+        continue;
+      }
+      let bySlice = slices.get(unitKey(u));
+      if (!bySlice) slices.set(unitKey(u), (bySlice = new Map()));
+      const other = bySlice.values().next().value;
+      if (other && other.parts !== u.parts)
+        throw new EngineError(
+          "BAD_PARTS",
+          `rule ${u.rule} at block ${u.block} is split into both ${other.parts} and ${u.parts} slices`,
+        );
+      bySlice.set(u.part!, u);
+    }
   }
-  const order = hierarchyUnits(maxBlock);
   const units: HierarchyUnitResult[] = [];
-  for (const u of order) {
-    const r = byKey.get(`${u.rule}/${u.block}`);
-    if (r) units.push(r);
+  for (const u of hierarchyUnits(maxBlock)) {
+    const key = unitKey(u);
+    const done = whole.get(key);
+    if (done) {
+      units.push(done);
+      continue;
+    }
+    const bySlice = slices.get(key);
+    if (!bySlice) continue;
+    const ordered = [...bySlice.values()].sort((a, b) => a.part! - b.part!);
+    if (ordered.length === ordered[0]!.parts) {
+      units.push({
+        rule: u.rule,
+        block: u.block,
+        emulations: mergeSliceEmulations(ordered.map((x) => x.emulations)),
+        pairsExamined: ordered.reduce((sum, x) => sum + x.pairsExamined, 0),
+      });
+    } else units.push(...ordered);
   }
   return { maxBlock, units };
 }
@@ -214,8 +278,12 @@ export interface AssembleOptions {
 export function assembleEcaHierarchy(part: HierarchyPart, options: AssembleOptions = {}): EcaHierarchy {
   const { maxBlock } = part;
   const expected = hierarchyUnits(maxBlock);
-  const have = new Map(part.units.map((u) => [`${u.rule}/${u.block}`, u]));
-  const missing = expected.filter((u) => !have.has(`${u.rule}/${u.block}`));
+  const have = new Map(
+    mergeHierarchyParts([part])
+      .units.filter((u) => u.parts === undefined)
+      .map((u) => [unitKey(u), u]),
+  );
+  const missing = expected.filter((u) => !have.has(unitKey(u)));
   if (missing.length > 0)
     throw new EngineError("INCOMPLETE_HIERARCHY", `${missing.length} of ${expected.length} units are missing`);
   const minBlock = new Uint16Array(65536);
@@ -223,7 +291,7 @@ export function assembleEcaHierarchy(part: HierarchyPart, options: AssembleOptio
   const emulatesAtTwoOrMore = new Uint8Array(256);
   let pairsExamined = 0;
   for (const u of expected) {
-    const res = have.get(`${u.rule}/${u.block}`)!;
+    const res = have.get(unitKey(u))!;
     pairsExamined += res.pairsExamined;
     const images = ecaSymmetryImages(u.rule);
     for (let g = 0; g < 4; g++) {

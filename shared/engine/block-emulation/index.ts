@@ -24,6 +24,7 @@ export type {
 } from "./eca-hierarchy";
 export {
   MAX_HIERARCHY_BLOCK,
+  SPLIT_FROM_BLOCK,
   hierarchyUnits,
   shardUnits,
   runHierarchyShard,

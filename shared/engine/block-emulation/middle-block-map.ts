@@ -106,7 +106,6 @@ export function middleBlockMap(rule: RuleTable, block: number, time: number): Mi
   const layerMasks: number[] = [];
   const layerBytes: number[] = [];
   let width = k + 2 * reach;
-  const startBytes = Math.ceil(width / 8);
   for (let done = 0; done < time;) {
     const s = Math.min(perLayer, time - done);
     layerTables.push(chunkTable(rule, s));
@@ -116,48 +115,56 @@ export function middleBlockMap(rule: RuleTable, block: number, time: number): Mi
     done += s;
   }
   const layers = layerTables.length;
-  const buf = new Int32Array(startBytes + 2);
   const skip = k - reach;
-  const leftLen = k - skip;
+  // the word the middle block depends on, x[skip..k) y z[0..reach), is at most 3 * MAX_SEARCH_BLOCK = 60 cells: it
+  // travels as two 32-bit halves into eight byte variables, so no call touches an array beyond the lookup tables
+  const yShift = reach;
+  const zShift = reach + k;
   const rightMask = reach >= 31 ? -1 : (1 << reach) - 1;
   const outMask = k >= 31 ? -1 : (1 << k) - 1;
   return {
     block,
     time,
     middle(x: number, y: number, z: number): number {
-      // pack the cells the middle block depends on: x[skip..k) y z[0..reach) into bytes
-      let acc = x >>> skip;
-      let bits = leftLen;
-      let n = 0;
-      while (bits >= 8) {
-        buf[n++] = acc & 255;
-        acc >>>= 8;
-        bits -= 8;
-      }
-      acc |= y << bits;
-      bits += k;
-      while (bits >= 8) {
-        buf[n++] = acc & 255;
-        acc >>>= 8;
-        bits -= 8;
-      }
-      acc |= (z & rightMask) << bits;
-      bits += reach;
-      while (bits > 0) {
-        buf[n++] = acc & 255;
-        acc >>>= 8;
-        bits -= 8;
-      }
-      buf[n] = 0;
-      // in place: byte m of a layer reads bytes m and m+1 of the previous one, so ascending m never reads a
-      // byte it has already overwritten; stale bytes past the valid width only reach cells past it
+      const zr = z & rightMask;
+      const lo = (x >>> skip) | (y << yShift) | (zShift < 32 ? zr << zShift : 0);
+      const hi = (y >>> (32 - yShift)) | (zShift < 32 ? zr >>> (32 - zShift) : zr << (zShift - 32));
+      let b0 = lo & 255;
+      let b1 = (lo >>> 8) & 255;
+      let b2 = (lo >>> 16) & 255;
+      let b3 = lo >>> 24;
+      let b4 = hi & 255;
+      let b5 = (hi >>> 8) & 255;
+      let b6 = (hi >>> 16) & 255;
+      let b7 = hi >>> 24;
+      // byte m of a layer reads bytes m and m+1 of the previous one, so ascending m never reads a byte it has already
+      // overwritten; bytes past a layer's width go stale and only ever reach cells past it
       for (let l = 0; l < layers; l++) {
         const tab = layerTables[l]!;
         const mask = layerMasks[l]!;
         const nb = layerBytes[l]!;
-        for (let m = 0; m < nb; m++) buf[m] = tab[(buf[m]! | (buf[m + 1]! << 8)) & mask]!;
+        b0 = tab[(b0 | (b1 << 8)) & mask]!;
+        if (nb > 1) {
+          b1 = tab[(b1 | (b2 << 8)) & mask]!;
+          if (nb > 2) {
+            b2 = tab[(b2 | (b3 << 8)) & mask]!;
+            if (nb > 3) {
+              b3 = tab[(b3 | (b4 << 8)) & mask]!;
+              if (nb > 4) {
+                b4 = tab[(b4 | (b5 << 8)) & mask]!;
+                if (nb > 5) {
+                  b5 = tab[(b5 | (b6 << 8)) & mask]!;
+                  if (nb > 6) {
+                    b6 = tab[(b6 | (b7 << 8)) & mask]!;
+                    if (nb > 7) b7 = tab[b7 & mask]!;
+                  }
+                }
+              }
+            }
+          }
+        }
       }
-      return (buf[0]! | (buf[1]! << 8) | (buf[2]! << 16)) & outMask;
+      return (b0 | (b1 << 8) | (b2 << 16)) & outMask;
     },
   };
 }
