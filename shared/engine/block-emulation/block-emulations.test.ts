@@ -18,6 +18,12 @@ describe("blockEmulations", () => {
       expect(slices.reduce((sum, x) => sum + x.pairsExamined, 0)).toBe(whole.pairsExamined);
     };
     // rules 154 and 76 have hundreds of fixed words at k = 10 and take the bucketed pairing; 204 is affine
+    for (const f of [154, 76]) {
+      const map = middleBlockMap(ecaRule(f), 10, 10);
+      let fixed = 0;
+      for (let x = 0; x < 1024; x++) if (map.middle(x, x, x) === x) fixed++;
+      expect(fixed).toBeGreaterThan(200);
+    }
     for (const f of [154, 76, 204]) check(f, 10, 4);
     fc.assert(
       fc.property(
