@@ -1,18 +1,24 @@
 // Benchmark of the elementary-rule block-emulation hierarchy (symmetry classes, fixed-point pairing, chunk tables,
 // linear algebra for affine rules) against the naive all-pairs reference that simulates every ordered pair of
 // codewords cell by cell. Each measurement runs in its own child process so that maxRSS belongs to that run alone.
-// Usage: npm run bench:eca   (wall-clock figures on a shared 2-core machine: expect noise)
+// Usage: npm run bench:eca                 every row, ending with K = 16 as a sharded run and its self-check
+//        npm run bench:eca -- --quick      without the K = 16 run
+//        npm run bench:eca -- --run 15     only the sharded run and self-check at K = 15
+// (wall-clock figures on a shared 2-core machine: expect noise)
 import { spawnSync } from "node:child_process";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { Worker, isMainThread, parentPort, workerData } from "node:worker_threads";
+import os from "node:os";
 import {
   ecaHierarchy,
   naiveEcaMinBlocks,
   runHierarchyShard,
   mergeHierarchyParts,
   assembleEcaHierarchy,
+  checkHierarchyAgainstSmaller,
+  HIERARCHY_SHARDS,
 } from "@shared/engine/block-emulation";
-import type { HierarchyPart } from "@shared/engine/block-emulation";
+import type { EcaHierarchy, HierarchyPart } from "@shared/engine/block-emulation";
 
 interface Measure {
   seconds: number;
@@ -33,27 +39,48 @@ function heapMB(): number {
   return (m.heapUsed + m.arrayBuffers) / 2 ** 20;
 }
 
-/** The hierarchy split into `threads` shards, one worker thread each, merged and assembled on the main thread. */
-async function threadedHierarchy(
+/**
+ * The hierarchy as the run system computes it: HIERARCHY_SHARDS shards queued for `threads` worker threads, each
+ * thread taking the next shard when it finishes one, then merged and assembled on the main thread.
+ */
+async function shardedHierarchy(
   maxBlock: number,
   threads: number,
   self: string,
-): Promise<{ pairs: number; relations: number }> {
-  const parts = await Promise.all(
+): Promise<{ hierarchy: EcaHierarchy; shardSeconds: number[]; assembleSeconds: number }> {
+  const shardCount = HIERARCHY_SHARDS;
+  const parts: HierarchyPart[] = [];
+  const shardSeconds: number[] = [];
+  let next = 0;
+  // an eval'd bootstrap registers the tsx loader in the thread, then imports this file
+  const bootstrap = `import("tsx/esm/api").then((api) => { api.register(); return import(${JSON.stringify(pathToFileURL(self).href)}); })`;
+  await Promise.all(
     Array.from(
       { length: threads },
-      (_, shardIndex) =>
-        new Promise<HierarchyPart>((resolve, reject) => {
-          // an eval'd bootstrap registers the tsx loader in the thread, then imports this file
-          const bootstrap = `import("tsx/esm/api").then((api) => { api.register(); return import(${JSON.stringify(pathToFileURL(self).href)}); })`;
-          const w = new Worker(bootstrap, { eval: true, workerData: { maxBlock, shardIndex, shardCount: threads } });
-          w.once("message", resolve);
+      () =>
+        new Promise<void>((resolve, reject) => {
+          const w = new Worker(bootstrap, { eval: true, workerData: { maxBlock, shardCount } });
+          const give = () => {
+            if (next >= shardCount) {
+              void w.terminate().then(() => resolve());
+              return;
+            }
+            w.postMessage(next++);
+          };
+          w.on("message", (m: { shardIndex: number; part: HierarchyPart; seconds: number } | "ready") => {
+            if (m !== "ready") {
+              parts.push(m.part);
+              shardSeconds[m.shardIndex] = m.seconds;
+            }
+            give();
+          });
           w.once("error", reject);
         }),
     ),
   );
-  const h = assembleEcaHierarchy(mergeHierarchyParts(parts));
-  return { pairs: h.pairsExamined, relations: h.relations.length };
+  const t0 = performance.now();
+  const hierarchy = assembleEcaHierarchy(mergeHierarchyParts(parts));
+  return { hierarchy, shardSeconds, assembleSeconds: (performance.now() - t0) / 1000 };
 }
 
 async function measureChild(kind: string, a: number, b: number): Promise<void> {
@@ -71,7 +98,9 @@ async function measureChild(kind: string, a: number, b: number): Promise<void> {
     pairs = h.pairsExamined;
     relations = h.relations.length;
   } else if (kind === "threads") {
-    ({ pairs, relations } = await threadedHierarchy(a, b, fileURLToPath(import.meta.url)));
+    const { hierarchy } = await shardedHierarchy(a, b, fileURLToPath(import.meta.url));
+    pairs = hierarchy.pairsExamined;
+    relations = hierarchy.relations.length;
   } else {
     // naive: block size a on `b` source rules spread evenly over 0..255
     const sources = Array.from({ length: b }, (_, i) => Math.floor((i * 256) / b));
@@ -114,12 +143,13 @@ const naivePairs = (k: number) => 256 * 2 ** k * (2 ** k - 1);
 
 async function main(): Promise<void> {
   if (!isMainThread) {
-    const { maxBlock, shardIndex, shardCount } = workerData as {
-      maxBlock: number;
-      shardIndex: number;
-      shardCount: number;
-    };
-    parentPort!.postMessage(runHierarchyShard({ maxBlock, shardIndex, shardCount }).part);
+    const { maxBlock, shardCount } = workerData as { maxBlock: number; shardCount: number };
+    parentPort!.on("message", (shardIndex: number) => {
+      const t0 = performance.now();
+      const { part } = runHierarchyShard({ maxBlock, shardIndex, shardCount });
+      parentPort!.postMessage({ shardIndex, part, seconds: (performance.now() - t0) / 1000 });
+    });
+    parentPort!.postMessage("ready");
     return;
   }
   const args = process.argv.slice(2);
@@ -128,6 +158,11 @@ async function main(): Promise<void> {
     return;
   }
   const self = fileURLToPath(import.meta.url);
+  const runAt = args.indexOf("--run");
+  if (runAt >= 0) {
+    await bigRun(Number(args[runAt + 1] ?? 16), self);
+    return;
+  }
   const blocks = [8, 10, 11, 12];
   const maxK = Math.max(...blocks);
   console.log(
@@ -203,7 +238,9 @@ async function main(): Promise<void> {
     );
   }
   console.log("");
-  console.log("Same hierarchy split into 2 shards on 2 worker threads (CPU s counts both threads):");
+  console.log(
+    `Same hierarchy as the run system splits it, ${HIERARCHY_SHARDS} shards on 2 worker threads (CPU s counts both threads):`,
+  );
   for (const K of [11, 12]) {
     const m = spawn(self, "threads", K, 2)!;
     console.log(
@@ -219,6 +256,63 @@ async function main(): Promise<void> {
   } else {
     console.log(`K=14 fast hierarchy: did not finish within ${FULL_K14_LIMIT_S} s`);
   }
+  if (!args.includes("--quick")) {
+    console.log("");
+    await bigRun(16, self);
+  }
+}
+
+/**
+ * K = 15 or 16 as a sharded run on the machine's threads, then checked against itself: the relations up to K - 2
+ * must be exactly the K - 2 hierarchy's, every pair first found above K - 2 must replay in the independent
+ * simulator, and relations and mutual classes must be closed under reflection and complement.
+ */
+async function bigRun(maxBlock: number, self: string): Promise<void> {
+  const threads = os.availableParallelism();
+  console.log(
+    `K=${maxBlock} as a sharded run (${HIERARCHY_SHARDS} shards, ${threads} worker threads; target: under 30 min on 2 cores). Load before: ${os
+      .loadavg()
+      .map((x) => x.toFixed(2))
+      .join(" ")}`,
+  );
+  const t0 = performance.now();
+  const cpu0 = process.cpuUsage();
+  const run = await shardedHierarchy(maxBlock, threads, self);
+  const seconds = (performance.now() - t0) / 1000;
+  const cpu = process.cpuUsage(cpu0);
+  const h = run.hierarchy;
+  console.log(
+    `K=${maxBlock}: ${seconds.toFixed(0)} s wall (${((cpu.user + cpu.system) / 1e6).toFixed(0)} s CPU, both threads), maxRSS ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB; assembly ${run.assembleSeconds.toFixed(1)} s`,
+  );
+  console.log(`  shards (s): ${run.shardSeconds.map((x) => x.toFixed(1)).join(" ")}`);
+  console.log(
+    `  ${h.relations.length} relations, ${h.composed.length} composed pairs, ${h.mutualClasses.length} mutual classes, ${h.reduction.length} reduction edges, ${h.emulateNothing.length} rules emulating nothing, ${h.pairsExamined} pairs examined`,
+  );
+  const smaller = maxBlock - 2;
+  const t1 = performance.now();
+  const small = (await shardedHierarchy(smaller, threads, self)).hierarchy;
+  const check = checkHierarchyAgainstSmaller(h, small);
+  console.log(
+    `  self-check against K=${smaller} (computed in ${((performance.now() - t1) / 1000).toFixed(0)} s): ${check.ok ? "PASS" : "FAIL"}`,
+  );
+  console.log(
+    `    K=${smaller} relations kept with the same least block: ${small.relations.length - check.lost.length}/${small.relations.length}; relations at k <= ${smaller} not in K=${smaller}: ${check.unexpected.length}`,
+  );
+  console.log(
+    `    pairs first found at k = ${smaller + 1}..${maxBlock}: ${check.newPairs}, witnesses rejected by the independent simulator: ${check.newPairsRejected.length}`,
+  );
+  console.log(
+    `    relations whose reflection or complement image is missing: ${check.symmetryBreaks.length}; mutual classes not mapped onto classes: ${check.classBreaks.length}; composed witnesses rejected: ${check.composedRejected}`,
+  );
+  if (check.newPairs > 0)
+    console.log(
+      `    new pairs: ${h.relations
+        .filter((r) => r.minBlock > smaller)
+        .slice(0, 40)
+        .map((r) => `${r.source}->${r.target}@${r.minBlock}`)
+        .join(" ")}${check.newPairs > 40 ? " ..." : ""}`,
+    );
+  if (!check.ok) process.exitCode = 1;
 }
 
 void main();

@@ -1,13 +1,10 @@
 // "eca-hierarchy": the block-emulation preorder of the 256 elementary rules up to a block size, split into shards
 // of search units (see shared/engine/block-emulation). The result is a HierarchyRunResult; the automata routes
 // file it in eca_hierarchies the first time someone asks for that hierarchy.
-import { hierarchyUnits } from "@shared/engine/block-emulation";
+import { HIERARCHY_SHARDS, hierarchyUnits } from "@shared/engine/block-emulation";
 import { HierarchyRunParameters } from "@shared/schemas/automata";
 import { ecaHierarchyTask } from "@shared/schemas/run-tasks";
 import { defineRunKind, taskFile } from "../run-kind";
-
-/** Enough shards to keep a few machines busy; units are dealt round-robin so shards cost about the same. */
-const MAX_SHARDS = 8;
 
 export const ecaHierarchyKind = defineRunKind({
   kind: "eca-hierarchy",
@@ -16,7 +13,7 @@ export const ecaHierarchyKind = defineRunKind({
   mergeTaskFile: taskFile("eca-hierarchy-merge"),
   timeLimitSeconds: 6 * 3600,
   plan(p) {
-    const shardCount = Math.min(MAX_SHARDS, hierarchyUnits(p.maxBlock).length);
+    const shardCount = Math.min(HIERARCHY_SHARDS, hierarchyUnits(p.maxBlock).length);
     return Array.from({ length: shardCount }, (_, shardIndex) => ({ maxBlock: p.maxBlock, shardIndex, shardCount }));
   },
   merge() {

@@ -125,6 +125,12 @@ export function hierarchyUnits(maxBlock: number): HierarchyUnit[] {
 }
 
 /**
+ * Shards of a hierarchy run: enough for a few machines, and with every unit from SPLIT_FROM_BLOCK on sliced into
+ * one slice per shard, equal shares whatever the number of threads that divides it.
+ */
+export const HIERARCHY_SHARDS = 8;
+
+/**
  * From this block size on, every shard takes one slice of each unit instead of whole units. Costs are lopsided: at
  * K = 16 the k = 16 unit of rule 154's class pairs about 2 * 10^9 codeword pairs (65,026 of the 65,536 words are
  * fixed by F^16 on the ring), more than the other 87 classes' units of that size together, so no dealing of whole

@@ -25,6 +25,7 @@ export type {
 export {
   MAX_HIERARCHY_BLOCK,
   SPLIT_FROM_BLOCK,
+  HIERARCHY_SHARDS,
   hierarchyUnits,
   shardUnits,
   runHierarchyShard,
@@ -34,3 +35,5 @@ export {
 } from "./eca-hierarchy";
 export type { EmulationDiagrams } from "./emulation-diagrams";
 export { emulationDiagrams, encodeConfiguration } from "./emulation-diagrams";
+export type { HierarchySelfCheck } from "./hierarchy-self-check";
+export { checkHierarchyAgainstSmaller } from "./hierarchy-self-check";
