@@ -215,13 +215,8 @@ export function mergeHierarchyParts(parts: readonly HierarchyPart[]): HierarchyP
     if (part.maxBlock !== maxBlock)
       throw new EngineError("BAD_PARTS", `parts for maxBlock ${part.maxBlock} and ${maxBlock} cannot merge`);
     for (const u of part.units) {
-      if (u.parts === undefined || u.parts === 1) {
-        whole.set(unitKey(u), {
-          rule: u.rule,
-          block: u.block,
-          emulations: u.emulations,
-          pairsExamined: u.pairsExamined,
-        });
+      if (u.parts === undefined) {
+        whole.set(unitKey(u), u);
         continue;
       }
       let bySlice = slices.get(unitKey(u));
@@ -284,11 +279,8 @@ export interface AssembleOptions {
 export function assembleEcaHierarchy(part: HierarchyPart, options: AssembleOptions = {}): EcaHierarchy {
   const { maxBlock } = part;
   const expected = hierarchyUnits(maxBlock);
-  const have = new Map(
-    mergeHierarchyParts([part])
-      .units.filter((u) => u.parts === undefined)
-      .map((u) => [unitKey(u), u]),
-  );
+  // slices count as missing until mergeHierarchyParts has joined them
+  const have = new Map(part.units.filter((u) => u.parts === undefined).map((u) => [unitKey(u), u]));
   const missing = expected.filter((u) => !have.has(unitKey(u)));
   if (missing.length > 0)
     throw new EngineError("INCOMPLETE_HIERARCHY", `${missing.length} of ${expected.length} units are missing`);
